@@ -1,0 +1,107 @@
+#!/usr/bin/env bash
+# The test command (`npm test`): installs what is missing, starts a throwaway
+# PostgreSQL cluster, then runs typecheck, lint, unit and property tests, a
+# production build, integration tests over HTTP against the real database and
+# end-to-end tests in Debian's Chromium. Prints `N passed, N failed` last.
+source "$(dirname "$0")/lib.sh"
+cd "$ROOT"
+set +e
+
+OUT="$ROOT/test-output"
+rm -rf "$OUT"; mkdir -p "$OUT"
+export HETEROLANE_TEST_OUTPUT="$OUT"
+
+ensure_node_modules || exit 1
+ensure_postgres || exit 1
+ensure_chromium || exit 1
+
+free_port() { node -e "const s=require('net').createServer();s.listen(0,'127.0.0.1',()=>{console.log(s.address().port);s.close()})"; }
+PG_PORT="${HETEROLANE_TEST_PG_PORT:-$(free_port)}"
+APP_PORT="${HETEROLANE_TEST_APP_PORT:-$(free_port)}"
+SMTP_PORT="${HETEROLANE_TEST_SMTP_PORT:-$(free_port)}"
+PG_DIR="$(cluster_dir "test-pg-$$")"
+
+pids=()
+cleanup() {
+  trap - INT TERM EXIT
+  for p in "${pids[@]}"; do kill -TERM -- "-$p" 2>/dev/null || kill -TERM "$p" 2>/dev/null || true; done
+  wait 2>/dev/null
+  stop_cluster "$PG_DIR"
+  rm -rf "$PG_DIR"
+}
+trap cleanup INT TERM EXIT
+
+set -e
+start_cluster "$PG_DIR" "$PG_PORT"
+ensure_database "$PG_PORT" heterolane_test
+set +e
+
+export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/heterolane_test"
+export BETTER_AUTH_SECRET="test-secret-$(node -e "console.log(require('crypto').randomBytes(16).toString('hex'))")"
+export BETTER_AUTH_URL="http://localhost:$APP_PORT"
+export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
+export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
+export HETEROLANE_DEV_MAIL=1
+export HETEROLANE_AUTH_RATE_LIMIT=off
+export HETEROLANE_TEST_URL="http://localhost:$APP_PORT"
+
+passed=0; failed=0; skipped=0
+declare -a summary
+
+step() { # step NAME COMMAND...: a check that counts as one test
+  local name="$1"; shift
+  log "== $name"
+  if "$@" >"$OUT/$name.log" 2>&1; then
+    passed=$((passed + 1)); summary+=("ok    $name")
+  else
+    failed=$((failed + 1)); summary+=("FAIL  $name (see test-output/$name.log)")
+    tail -n 40 "$OUT/$name.log" >&2
+  fi
+}
+
+suite() { # suite PROJECT: a vitest project, counted test by test
+  local project="$1" json="$OUT/vitest-$1.json"
+  log "== vitest --project $project"
+  node_modules/.bin/vitest run --project "$project" --reporter=default --reporter=json --outputFile.json="$json" 2>&1 | tee "$OUT/vitest-$project.log" | grep -E '✓|×|FAIL|Test Files|Tests ' | grep -v '✓' || true
+  local counts
+  counts=$(node -e "
+    try { const r = require('$json');
+      console.log(r.numPassedTests, r.numFailedTests + (r.numTotalTestSuites && !r.success && r.numFailedTests === 0 ? 1 : 0), r.numPendingTests + r.numTodoTests);
+    } catch { console.log('0 1 0'); }")
+  read -r p f s <<<"$counts"
+  passed=$((passed + p)); failed=$((failed + f)); skipped=$((skipped + s))
+  summary+=("$( [ "$f" -eq 0 ] && echo 'ok  ' || echo 'FAIL') vitest:$project $p passed, $f failed")
+}
+
+step migrate node_modules/.bin/tsx db/migrate.ts
+step typecheck node_modules/.bin/tsc --noEmit
+step lint node_modules/.bin/eslint --max-warnings=0 .
+suite unit
+step build ensure_build
+
+if [ -f .next/BUILD_ID ]; then
+  set -m
+  node_modules/.bin/tsx src/ops/fake-smtp.ts --port "$SMTP_PORT" >"$OUT/smtp.log" 2>&1 &
+  pids+=($!)
+  node_modules/.bin/next start -p "$APP_PORT" >"$OUT/app.log" 2>&1 &
+  pids+=($!)
+  set +m
+  if wait_http "http://127.0.0.1:$APP_PORT/api/health" 90; then
+    suite integration
+    suite e2e
+  else
+    log "the app did not start; see test-output/app.log"
+    tail -n 40 "$OUT/app.log" >&2
+    failed=$((failed + 2)); summary+=("FAIL  app did not start: integration and e2e not run")
+  fi
+fi
+
+echo
+printf '%s\n' "${summary[@]}"
+echo
+if [ "$skipped" -gt 0 ]; then
+  echo "$passed passed, $failed failed, $skipped skipped"
+else
+  echo "$passed passed, $failed failed"
+fi
+[ "$failed" -eq 0 ]
