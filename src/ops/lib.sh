@@ -66,7 +66,8 @@ pg_run() {
 # user cannot reach the project folder (a checkout under a private home, say)
 # it falls back to a folder under /var/tmp named after the project path.
 cluster_dir() {
-  local name="$1" dir="$ROOT/.data/$name"
+  local name="$1"
+  local dir="$ROOT/.data/$name"
   mkdir -p "$ROOT/.data"
   if [ "$(id -u)" -eq 0 ] && ! runuser -u postgres -- test -x "$ROOT/.data"; then
     dir="/var/tmp/heterolane-$(echo "$ROOT" | md5sum | cut -c1-8)/$name"
