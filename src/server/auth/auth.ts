@@ -1,0 +1,75 @@
+import "server-only";
+import { betterAuth } from "better-auth";
+import { drizzleAdapter } from "better-auth/adapters/drizzle";
+import { nextCookies } from "better-auth/next-js";
+import { organization } from "better-auth/plugins";
+import { db } from "@db/client";
+import * as schema from "@db/schema";
+import { ac, roles } from "@/lib/permissions";
+import { serverEnv } from "@/server/env";
+import { invitationMail, resetPasswordMail, sendMail, verificationMail } from "@/server/mail";
+
+/**
+ * The one better-auth instance (docs/decisions/003-auth-and-roles.md).
+ * Everything it keeps (users, sessions, verification tokens, teams, members,
+ * invitations, rate-limit counters) lives in PostgreSQL, so app processes are
+ * stateless and interchangeable.
+ */
+const env = serverEnv();
+
+export const PASSWORD_MIN_LENGTH = 10;
+
+export const auth = betterAuth({
+  appName: "Heterolane",
+  baseURL: env.BETTER_AUTH_URL,
+  secret: env.BETTER_AUTH_SECRET,
+  database: drizzleAdapter(db, { provider: "pg", schema }),
+  emailAndPassword: {
+    enabled: true,
+    minPasswordLength: PASSWORD_MIN_LENGTH,
+    maxPasswordLength: 128,
+    requireEmailVerification: true,
+    revokeSessionsOnPasswordReset: true,
+    resetPasswordTokenExpiresIn: 60 * 60,
+    sendResetPassword: async ({ user, url }) => {
+      await sendMail(resetPasswordMail(user.email, user.name, url));
+    },
+  },
+  emailVerification: {
+    sendOnSignUp: true,
+    sendOnSignIn: true,
+    autoSignInAfterVerification: true,
+    expiresIn: 60 * 60,
+    sendVerificationEmail: async ({ user, url }) => {
+      await sendMail(verificationMail(user.email, user.name, url));
+    },
+  },
+  rateLimit: {
+    enabled: env.HETEROLANE_AUTH_RATE_LIMIT !== "off",
+    storage: "database",
+    window: 60,
+    max: 100,
+    customRules: {
+      "/sign-in/email": { window: 60, max: 10 },
+      "/sign-up/email": { window: 60, max: 10 },
+      "/request-password-reset": { window: 60, max: 5 },
+      "/send-verification-email": { window: 60, max: 5 },
+    },
+  },
+  plugins: [
+    organization({
+      ac,
+      roles,
+      creatorRole: "owner",
+      invitationExpiresIn: 48 * 60 * 60,
+      cancelPendingInvitationsOnReInvite: true,
+      sendInvitationEmail: async ({ id, email, role, organization: team, inviter }) => {
+        const url = new URL(`/invitations/${id}`, env.BETTER_AUTH_URL).toString();
+        await sendMail(invitationMail(email, inviter.user.name, team.name, role, url));
+      },
+    }),
+    nextCookies(),
+  ],
+});
+
+export type Session = typeof auth.$Infer.Session;

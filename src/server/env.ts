@@ -1,0 +1,40 @@
+import "server-only";
+import { z } from "zod";
+
+/**
+ * The server's environment, validated once at first use. A missing or empty
+ * value is an error naming the variable; there are no silent fallbacks for
+ * secrets or URLs (README: Environment).
+ */
+const nonEmpty = (name: string) => z.string({ error: `${name} is not set` }).trim().min(1, `${name} is empty`);
+
+const EnvSchema = z.object({
+  DATABASE_URL: nonEmpty("DATABASE_URL"),
+  BETTER_AUTH_SECRET: nonEmpty("BETTER_AUTH_SECRET").min(32, "BETTER_AUTH_SECRET must be at least 32 characters"),
+  BETTER_AUTH_URL: z.url({ error: "BETTER_AUTH_URL must be an absolute URL such as http://localhost:3000" }),
+  SMTP_URL: z.url({ error: "SMTP_URL must be a URL such as smtp://127.0.0.1:2525" }),
+  MAIL_FROM: nonEmpty("MAIL_FROM"),
+  NODE_ENV: z.enum(["development", "production", "test"]).optional(),
+  HETEROLANE_AUTH_RATE_LIMIT: z.enum(["on", "off"]).optional(),
+  HETEROLANE_DEV_MAIL: z.enum(["0", "1"]).optional(),
+});
+
+export type ServerEnv = z.infer<typeof EnvSchema>;
+
+let cached: ServerEnv | undefined;
+
+export function serverEnv(): ServerEnv {
+  if (cached) return cached;
+  const parsed = EnvSchema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join(".")}: ${i.message}`).join("\n");
+    throw new Error(`Invalid server environment (see README: Environment):\n${lines}`);
+  }
+  cached = parsed.data;
+  return cached;
+}
+
+/** The dev mail page and similar helpers: on outside production, or when HETEROLANE_DEV_MAIL=1. */
+export function devMailEnabled(): boolean {
+  return process.env.HETEROLANE_DEV_MAIL === "1" || process.env.NODE_ENV !== "production";
+}

@@ -1,0 +1,2 @@
+export { sendMail, type OutgoingMail } from "./transport";
+export { verificationMail, resetPasswordMail, invitationMail } from "./messages";
