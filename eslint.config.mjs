@@ -5,7 +5,7 @@ const config = [
   ...next,
   ...nextTs,
   {
-    ignores: [".next/**", "node_modules/**", ".data/**", "test-output/**", "drizzle/**", "next-env.d.ts"],
+    ignores: [".next/**", ".next-*/**", "node_modules/**", ".data/**", "test-output/**", "drizzle/**", "next-env.d.ts"],
   },
   {
     rules: {
