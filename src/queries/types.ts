@@ -1,0 +1,180 @@
+/**
+ * Shapes of the workspace JSON API as the client reads them (the agreed API:
+ * entities mirror the `heterolane.plan/1` fields, plus id, key, version and
+ * timestamps). Form input types come from the zod schemas in
+ * `src/schemas/workspace.ts`; these describe what the server sends back.
+ */
+
+export type Severity = "error" | "warning" | "info";
+
+export interface Row {
+  id: string;
+  version: number;
+  createdAt?: string;
+  updatedAt?: string;
+}
+
+export interface MissionSummary {
+  id: string;
+  name: string;
+  description: string | null;
+  status: string;
+  chainCount: number;
+  channelCount: number;
+  openErrors: number;
+  openWarnings: number;
+  updatedAt: string;
+  version: number;
+}
+
+export interface Mission extends Row {
+  name: string;
+  description: string | null;
+  status: string;
+}
+
+export interface Interval {
+  minGHz: number;
+  maxGHz: number;
+}
+
+export interface Laser extends Row {
+  key: string;
+  carrierTHz: number;
+  carrierPowerMW: number;
+  loPowerMW: number;
+  reach: Interval[];
+  stepMHz: number;
+  driftMHz: number;
+  lock: { modulationMHz: number; modulationIndex: number; orders: number };
+}
+
+export interface Resonator extends Row {
+  key: string;
+  fsrGHz: number;
+  loadedQ: number;
+}
+
+export interface Detector extends Row {
+  key: string;
+  minGHz: number;
+  maxGHz: number;
+  maxInputMW: number;
+  sampleRateGHz: number | null;
+}
+
+export interface Chain extends Row {
+  key: string;
+  laserId: string;
+  resonatorId: string;
+  detectorId: string;
+  mode: number;
+  sideband: "upper" | "lower";
+  loOffsetGHz: number;
+  rfInput: Interval;
+  tapFraction: number;
+  pathLossDB: number;
+  carrierRejectionDB: number;
+  sharedIf: boolean;
+}
+
+export interface Channel extends Row {
+  key: string;
+  name: string;
+  chainId: string;
+  centerGHz: number;
+  bandwidthMHz: number;
+  dsbOffsetGHz: number | null;
+  integrationMs: number;
+  antennaK: number;
+  receiverK: number;
+  gainStability: number;
+  requiredNedtK: number | null;
+}
+
+export interface Settings {
+  guardMHz: number;
+  imageRejectionDB: number;
+  spurMaxOrder: number;
+  replicaLimitDB: number;
+  version: number;
+}
+
+export interface Finding {
+  code: string;
+  severity: Severity;
+  chain: string;
+  channel: string | null;
+  message: string;
+  data?: Record<string, unknown>;
+}
+
+export interface ChainResult {
+  id: string;
+  linewidthMHz: number;
+  pdInputMW: number;
+  feasibleGHz: [number, number][];
+  excludedGHz: { bandGHz: [number, number]; codes: string[] }[];
+  placeGHz: number | null;
+  placeReason: string | null;
+}
+
+export interface ChannelResult {
+  id: string;
+  ifSlotGHz: [number, number] | null;
+  occupiedGHz: [number, number] | null;
+  imageGHz: [number, number] | null;
+  imageRejectionDB: number | null;
+  radiometricBandwidthMHz: number | null;
+  nedtK: number | null;
+  lockReplicaDB: number;
+}
+
+export interface PlanResult {
+  format: "heterolane.result/1";
+  chains: ChainResult[];
+  channels: ChannelResult[];
+  spurs: unknown[];
+  findings: Finding[];
+}
+
+export interface RevisionSummary {
+  number: number;
+  status: string;
+  authorName: string | null;
+  createdAt: string;
+  errorCount: number;
+  warningCount: number;
+  infoCount: number;
+  summary: string | null;
+}
+
+export interface MutationRevision {
+  revision?: { number: number; errorCount: number; warningCount: number };
+}
+
+export interface TuningPreview {
+  intervals: Interval[];
+  points: number;
+  rejectedRows: { row: number; column?: string; message: string }[] | number;
+}
+
+export interface ChannelUploadPreview {
+  rows: { row: number; channel?: Partial<Channel> & { chain?: string }; errors: { column: string; message: string }[] }[];
+  valid: boolean;
+}
+
+export interface DetectorResponsePreview {
+  minGHz: number;
+  maxGHz: number;
+  peakDB: number;
+}
+
+export interface ActivityEntry {
+  at: string;
+  actorName: string | null;
+  action: string;
+  entity: string;
+  summary: string | null;
+  revision: number | null;
+}
