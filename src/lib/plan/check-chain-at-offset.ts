@@ -1,0 +1,19 @@
+import type { Plan } from "@/schemas/plan";
+import { chainContext } from "./internals/chain-context";
+import { type EvaluateOptions, evaluateChain } from "./internals/evaluate-chain";
+import type { Finding } from "./types";
+
+/**
+ * Every finding of chain `chainId` and its channels, in contract order
+ * (plan-format.md, "Rules"), with the chain's LO replaced by
+ * `loOffsetGHz`. No feasibility map or place.
+ *
+ * `options.mapOnly` restricts the work to the error rules that depend on
+ * L (the ones that shape the feasibility map); the harmonic and
+ * intermodulation families, which only ever make info findings, are then
+ * skipped. For many offsets of one chain, build the context once with
+ * `chainContext` and call `evaluateChain` from `internals/`.
+ */
+export function checkChainAtOffset(plan: Plan, chainId: string, loOffsetGHz: number, options: EvaluateOptions = {}): Finding[] {
+  return evaluateChain(chainContext(plan, chainId), loOffsetGHz, options).findings;
+}

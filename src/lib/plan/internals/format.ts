@@ -1,0 +1,24 @@
+import type { Interval } from "./intervals";
+
+/** Numbers for messages: plain decimals, no trailing zeros, no float dust. */
+function trim(v: number, digits: number): string {
+  if (!Number.isFinite(v)) return String(v);
+  const s = Number(v.toFixed(digits)).toString();
+  return s === "-0" ? "0" : s;
+}
+
+/** A frequency in GHz to 1 kHz. */
+export const fGHz = (v: number) => trim(v, 6);
+/** A frequency difference given in GHz, written in MHz to 1 kHz. */
+export const fMHz = (vGHz: number) => trim(vGHz * 1000, 3);
+/** A level in dB. */
+export const fDB = (v: number) => trim(v, 2);
+/** A temperature in K (4 significant digits, at least to 1 mK). */
+export const fK = (v: number) => (Math.abs(v) >= 1 ? trim(v, 3) : Number(v.toPrecision(4)).toString());
+/** A power in mW. */
+export const fMW = (v: number) => trim(v, 4);
+/** An interval in GHz, "1.475–1.525 GHz". */
+export const fBand = (iv: Interval) => `${fGHz(iv[0])}–${fGHz(iv[1])} GHz`;
+
+/** An interval as a mutable JSON pair. */
+export const pair = (iv: Interval): [number, number] => [iv[0], iv[1]];

@@ -1,0 +1,121 @@
+import type { ChainContext, ChannelContext } from "./chain-context";
+import { combIntegral } from "./comb";
+import { type Interval, absInterval, hull, intersect, strictlyInside, unionLength } from "./intervals";
+import { lorentzianProductIntegral } from "./lorentz";
+
+/** The IF image of one optical band: `{ |L − x| : x ∈ X }`, with `e = +1` when the band lies above L. */
+export interface BandImage {
+  /** The optical band X. */
+  optical: Interval;
+  /** Its IF image. */
+  image: Interval;
+  /** +1 when X lies above L (x = L + y), −1 when below (x = L − y). */
+  e: 1 | -1;
+}
+
+/** IF geometry of a channel at LO offset L (GHz). */
+export interface SlotGeometry {
+  images: BandImage[];
+  /** Hull of the band images. */
+  slot: Interval;
+  /** `O = [slot.lo − D, slot.hi + D]`. */
+  occupied: Interval;
+}
+
+/** The optical band that L lies strictly inside, or null (plan-format.md: `lo-in-band`). */
+export function bandHoldingLo(ch: ChannelContext, L: number): Interval | null {
+  for (const x of ch.optical) if (strictlyInside(L, x)) return x;
+  return null;
+}
+
+/**
+ * IF slot and occupied band of a channel at L; null when the LO lies
+ * strictly inside one of its optical bands (no slot).
+ */
+export function slotAt(ch: ChannelContext, L: number, D: number): SlotGeometry | null {
+  const images: BandImage[] = [];
+  for (const x of ch.optical) {
+    if (strictlyInside(L, x)) return null;
+    if (L <= x[0]) images.push({ optical: x, image: [x[0] - L, x[1] - L], e: 1 });
+    else images.push({ optical: x, image: [L - x[1], L - x[0]], e: -1 });
+  }
+  const slot = hull(images.map((b) => b.image));
+  return { images, slot, occupied: [slot[0] - D, slot[1] + D] };
+}
+
+/** Sensitivity figures of a channel at L (plan-format.md, "Sensitivity"). */
+export interface Sensitivity {
+  /** ∫W dy, ∫W² dy and the length of the union of the band images, in GHz. */
+  intW: number;
+  intW2: number;
+  unionGHz: number;
+  /** ∫S dy in K·Hz and ∫S² dy in K²·Hz. */
+  intS: number;
+  intS2: number;
+  nedtK: number;
+  /** `(∫S)²/∫S²` in MHz; null when S ≡ 0. */
+  radiometricBandwidthMHz: number | null;
+}
+
+/**
+ * `S(y) = antennaK·W(y) + receiverK` over the union of the band images;
+ * `NEΔT = sqrt(∫S²/τ + (ΔG/G)²(∫S)²)/∫W`, integrals in hertz. The DSB cross
+ * term `2∫M(x₁(y))M(x₂(y))dy` over the overlap of the two images is added
+ * in closed form.
+ */
+export function sensitivityAt(ctx: ChainContext, ch: ChannelContext, geo: SlotGeometry, L: number): Sensitivity {
+  let intW2 = ch.intW2Self;
+  const hw = ctx.delta / 2;
+  for (let i = 0; i < geo.images.length; i++) {
+    for (let j = i + 1; j < geo.images.length; j++) {
+      const bi = geo.images[i] as BandImage;
+      const bj = geo.images[j] as BandImage;
+      const ov = intersect(bi.image, bj.image);
+      if (ov && ov[1] > ov[0]) {
+        const pi = bi.e * (ctx.modeCentre - L);
+        const pj = bj.e * (ctx.modeCentre - L);
+        intW2 += 2 * lorentzianProductIntegral(ov[0], ov[1], pi, pj, hw);
+      }
+    }
+  }
+  const unionGHz = unionLength(geo.images.map((b) => b.image));
+  const Hz = 1e9;
+  const { antennaK: Ta, receiverK: Tr, gainStability: g, integrationMs } = ch.channel;
+  const intS = (Ta * ch.intW + Tr * unionGHz) * Hz;
+  const intS2 = (Ta * Ta * intW2 + 2 * Ta * Tr * ch.intW + Tr * Tr * unionGHz) * Hz;
+  const tau = integrationMs / 1000;
+  const nedtK = Math.sqrt(intS2 / tau + g * g * intS * intS) / (ch.intW * Hz);
+  const radiometricBandwidthMHz = intS2 > 0 ? (intS * intS) / intS2 / 1e6 : null;
+  return { intW: ch.intW, intW2, unionGHz, intS, intS2, nedtK, radiometricBandwidthMHz };
+}
+
+/** Image band of an SSB channel at L (plan-format.md, "Image"). */
+export interface ImageFigures {
+  /** Optical image band `X' = 2L − X`. */
+  opticalImage: Interval;
+  /** `|X'|` as reported in `imageGHz`. */
+  imageGHz: Interval;
+  /** `∫Wᵢ dy` in GHz. */
+  intWi: number;
+  /** `10·log10(∫W/∫Wᵢ)`; null when `∫Wᵢ = 0`. */
+  rejectionDB: number | null;
+}
+
+/**
+ * `∫Wᵢ dy = ∫_{X'} A(|x'|)·C(x') dx'`: the comb integrated in closed form
+ * over the parts of X' whose magnitude lies in `rfInput`.
+ */
+export function imageAt(ctx: ChainContext, ch: ChannelContext, L: number): ImageFigures | null {
+  if (ch.dsb) return null;
+  const x = ch.optical[0];
+  if (!x) return null;
+  const opticalImage: Interval = [2 * L - x[1], 2 * L - x[0]];
+  let intWi = 0;
+  const [rlo, rhi] = ctx.rfInput;
+  for (const window of [[rlo, rhi], [-rhi, -rlo]] as Interval[]) {
+    const part = intersect(opticalImage, window);
+    if (part && part[1] > part[0]) intWi += combIntegral(part[0], part[1], ctx.comb);
+  }
+  const rejectionDB = intWi > 0 ? 10 * Math.log10(ch.intW / intWi) : null;
+  return { opticalImage, imageGHz: absInterval(opticalImage), intWi, rejectionDB };
+}

@@ -1,0 +1,108 @@
+import type { SpurFamily } from "../types";
+import type { ChainContext } from "./chain-context";
+import {
+  type Interval,
+  absInterval,
+  addScaled,
+  compareIntervals,
+  intersect,
+  subScaled,
+  widen,
+} from "./intervals";
+import type { SlotGeometry } from "./slot";
+
+/**
+ * One spur band of a chain at a given L (plan-format.md, "Spur families"):
+ * already widened for drift, folded to `|·|` and intersected with the
+ * detector band.
+ */
+export interface SpurBand {
+  family: SpurFamily;
+  order: number;
+  band: Interval;
+  source: string;
+}
+
+/**
+ * Enumeration limit for the lock families: orders above this are not
+ * listed (the schema accepts any integer `orders`; physically only the
+ * first few carry power). See docs/decisions/004-plan-contract-readings.md.
+ */
+export const MAX_LOCK_ORDER_ENUMERATED = 10_000;
+
+function keep(family: SpurFamily, order: number, raw: Interval, detector: Interval, source: string, out: SpurBand[]): void {
+  const band = intersect(absInterval(raw), detector);
+  if (band) out.push({ family, order, band, source });
+}
+
+function byBand(a: SpurBand, b: SpurBand): number {
+  return compareIntervals(a.band, b.band);
+}
+
+/**
+ * The spur families that can make errors: `carrier-beat`, `lock-lo`,
+ * `lock-self`, each sorted by band. Lock orders whose band cannot reach the
+ * detector band are skipped without changing the result.
+ */
+export function errorSpursAt(ctx: ChainContext, L: number): SpurBand[] {
+  const { D, fm, detectorBand: det } = ctx;
+  const M = Math.min(ctx.lockOrders, MAX_LOCK_ORDER_ENUMERATED);
+  const carrier: SpurBand[] = [];
+  keep("carrier-beat", 1, widen([L, L], D), det, "L", carrier);
+
+  const lockLo: SpurBand[] = [];
+  const reachIF = det[1] + D;
+  for (const sign of [-1, 1] as const) {
+    // |L + sign·m·fm| ≤ det.hi + D  ⇒  m in [(−sign·L − reachIF)/fm, (−sign·L + reachIF)/fm]
+    const centre = -sign * L;
+    const mLo = Math.max(1, Math.ceil((centre - reachIF) / fm));
+    const mHi = Math.min(M, Math.floor((centre + reachIF) / fm));
+    for (let m = mLo; m <= mHi; m++) {
+      const f = L + sign * m * fm;
+      keep("lock-lo", m + 1, widen([f, f], D), det, `L${sign < 0 ? "−" : "+"}${m}·fm`, lockLo);
+    }
+  }
+  lockLo.sort(byBand);
+
+  const lockSelf: SpurBand[] = [];
+  const mSelf = Math.min(2 * M, Math.floor(det[1] / fm));
+  for (let m = 1; m <= mSelf; m++) keep("lock-self", m, [m * fm, m * fm], det, `${m}·fm`, lockSelf);
+  lockSelf.sort(byBand);
+  return [...carrier, ...lockLo, ...lockSelf];
+}
+
+/**
+ * The harmonic and intermodulation families of the slots (channels with no
+ * slot are left out), each sorted by band. `slots[i]` belongs to
+ * `ctx.channels[i]`.
+ */
+export function infoSpurs(ctx: ChainContext, slots: readonly (SlotGeometry | null)[]): SpurBand[] {
+  const N = ctx.plan.settings.spurMaxOrder;
+  const { D, detectorBand: det } = ctx;
+  const present: { id: string; slot: Interval }[] = [];
+  ctx.channels.forEach((ch, i) => {
+    const g = slots[i];
+    if (g) present.push({ id: ch.channel.id, slot: g.slot });
+  });
+  const harmonic: SpurBand[] = [];
+  for (const p of present) {
+    for (let n = 2; n <= N; n++) keep("harmonic", n, widen([n * p.slot[0], n * p.slot[1]], n * D), det, `${n}·${p.id}`, harmonic);
+  }
+  harmonic.sort(byBand);
+  const intermod: SpurBand[] = [];
+  for (let i = 0; i < present.length; i++) {
+    for (let j = i + 1; j < present.length; j++) {
+      const pi = present[i] as (typeof present)[number];
+      const pj = present[j] as (typeof present)[number];
+      for (let a = 1; a < N; a++) {
+        for (let b = 1; a + b <= N; b++) {
+          const w = (a + b) * D;
+          keep("intermod", a + b, widen(addScaled(a, pi.slot, b, pj.slot), w), det, `${a}·${pi.id}+${b}·${pj.id}`, intermod);
+          keep("intermod", a + b, widen(subScaled(a, pi.slot, b, pj.slot), w), det, `${a}·${pi.id}−${b}·${pj.id}`, intermod);
+        }
+      }
+    }
+  }
+  intermod.sort(byBand);
+  return [...harmonic, ...intermod];
+}

@@ -1,0 +1,121 @@
+/**
+ * Types of the result document `heterolane.result/1`
+ * (docs: plan-format.md, "Result document" and "Rules").
+ */
+
+export const RESULT_FORMAT = "heterolane.result/1" as const;
+
+export type Severity = "error" | "warning" | "info";
+
+/** Every finding code, in rules-table order (the order findings are listed in). */
+export const RULE_ORDER = [
+  "lo-uncovered",
+  "lo-in-band",
+  "dsb-lo-off-centre",
+  "lo-off-step",
+  "band-outside-rf-input",
+  "mode-detuned",
+  "band-wider-than-mode",
+  "if-outside-detector",
+  "slot-overlap",
+  "image-response",
+  "spur-in-slot",
+  "nyquist-straddle",
+  "alias-overlap",
+  "noise-folding",
+  "lock-replica",
+  "lock-inside-mode",
+  "carrier-dominates-lo",
+  "pd-overload",
+  "nedt-unmet",
+  "in-protected-band",
+] as const;
+
+export type FindingCode = (typeof RULE_ORDER)[number];
+
+/** Rank of a code in the rules table (0-based). */
+export function ruleRank(code: FindingCode): number {
+  return RULE_ORDER.indexOf(code);
+}
+
+/** Codes of the per-chain rules (`channel: null`). */
+export const CHAIN_LEVEL_CODES: readonly FindingCode[] = [
+  "lo-uncovered",
+  "lo-off-step",
+  "noise-folding",
+  "lock-inside-mode",
+  "carrier-dominates-lo",
+  "pd-overload",
+];
+
+/** Error rules whose outcome depends on the LO offset L: these, and only these, shape the feasibility map. */
+export const L_DEPENDENT_ERROR_CODES: readonly FindingCode[] = [
+  "lo-uncovered",
+  "lo-in-band",
+  "if-outside-detector",
+  "slot-overlap",
+  "image-response",
+  "spur-in-slot",
+  "nyquist-straddle",
+  "alias-overlap",
+];
+
+/** Spur families, in table order. */
+export const SPUR_FAMILIES = ["carrier-beat", "lock-lo", "lock-self", "harmonic", "intermod"] as const;
+export type SpurFamily = (typeof SPUR_FAMILIES)[number];
+
+/** A JSON value, for the `data` object of a finding. */
+export type JsonValue = null | boolean | number | string | JsonValue[] | { [key: string]: JsonValue };
+
+export interface Finding {
+  code: FindingCode;
+  severity: Severity;
+  chain: string;
+  /** null for the per-chain rules. */
+  channel: string | null;
+  /** One plain-English sentence (or two) with the numbers and how far from passing. */
+  message: string;
+  data: { [key: string]: JsonValue };
+}
+
+export interface Spur {
+  chain: string;
+  family: SpurFamily;
+  order: number;
+  bandGHz: [number, number];
+  /** Short text for people, e.g. `L−1·fm`, `2·fm`, `3·wv1`, `1·a1−2·a2`. */
+  source: string;
+  /** Ids (input order) of every channel whose occupied band the spur comes within guard of, directly or folded. */
+  hits: string[];
+}
+
+export type PlaceReason = null | "no-feasible-interval" | "no-grid-point";
+
+export interface ChainResult {
+  id: string;
+  linewidthMHz: number;
+  pdInputMW: number;
+  feasibleGHz: [number, number][];
+  excludedGHz: { bandGHz: [number, number]; codes: FindingCode[] }[];
+  placeGHz: number | null;
+  placeReason: PlaceReason;
+}
+
+export interface ChannelResult {
+  id: string;
+  ifSlotGHz: [number, number] | null;
+  occupiedGHz: [number, number] | null;
+  imageGHz: [number, number] | null;
+  imageRejectionDB: number | null;
+  radiometricBandwidthMHz: number | null;
+  nedtK: number | null;
+  lockReplicaDB: number;
+}
+
+export interface ResultDocument {
+  format: typeof RESULT_FORMAT;
+  chains: ChainResult[];
+  channels: ChannelResult[];
+  spurs: Spur[];
+  findings: Finding[];
+}
