@@ -1,0 +1,11 @@
+export { buildLaneModel, RF_ROWS, OPTICAL_ROWS, IF_ROWS, SPUR_FAMILIES } from "./buildLaneModel";
+export { laneTableRows } from "./laneTableRows";
+export { zoomAbout } from "./zoomAbout";
+export { clampDomain } from "./clampDomain";
+export { zoomToItem } from "./zoomToItem";
+export { visibleItems, type Placement, type PlacedItem } from "./visibleItems";
+export { formatTicks, type Tick, type TickSet } from "./formatTicks";
+export { explainCode } from "./explainCode";
+export { GHZ_LIMITS, IF_LIMITS, type SpanLimits } from "./internals/limits";
+export type * from "./types";
+export { demoPlan } from "./demoPlan";
