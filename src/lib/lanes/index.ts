@@ -9,3 +9,5 @@ export { explainCode } from "./explainCode";
 export { GHZ_LIMITS, IF_LIMITS, type SpanLimits } from "./internals/limits";
 export type * from "./types";
 export { demoPlan } from "./demoPlan";
+export { recheckAtOffset, type Recheck } from "./recheckAtOffset";
+export { laneReference } from "./laneReference";
