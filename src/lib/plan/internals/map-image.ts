@@ -1,0 +1,314 @@
+import type { MapChannel, MapModel } from "./map-model";
+
+/**
+ * The image rule for the feasibility map (plan-format.md, "Derived
+ * quantities (per channel)", Image, and "Feasibility map and place").
+ *
+ * The comb `C(x) = Σₙ 1/(1 + (2(x − n·fsr)/δ)²) = π·a·sinh(2πa)/(cosh(2πa) − cos(2πx/fsr))`,
+ * `a = δ/(2·fsr)`, has the antiderivative
+ * `(δ/2)·[atan(coth(πa)·tan(πx/fsr − πn)) + πn]`, n = round(x/fsr)
+ * (from the standard integral ∫dθ/(cosh u − cos θ) = (2/sinh u)·atan(coth(u/2)·tan(θ/2)),
+ * as tabulated in Gradshteyn & Ryzhik, Table of Integrals, Series and
+ * Products, §2.55 — section number from memory; one period adds π·δ/2, the
+ * area of one Lorentzian).
+ */
+
+/** Per-chain constants of the comb. */
+export interface Comb {
+  linewidth: number;
+  fsr: number;
+  /** `coth(πa)`. */
+  k: number;
+}
+
+export function makeComb(linewidth: number, fsr: number): Comb {
+  const a = linewidth / (2 * fsr);
+  const t = Math.tanh(Math.PI * a);
+  return { linewidth, fsr, k: 1 / t };
+}
+
+function phase(c: Comb, x: number): { u: number; n: number } {
+  const n = Math.round(x / c.fsr);
+  const phi = (Math.PI * x) / c.fsr - Math.PI * n;
+  return { u: c.k * Math.tan(phi), n };
+}
+
+/** `∫_lo^hi C(x) dx` (lo ≤ hi), closed form, without cancellation far from a mode. */
+export function combIntegral(c: Comb, lo: number, hi: number): number {
+  if (!(hi > lo)) return 0;
+  const p = phase(c, hi);
+  const q = phase(c, lo);
+  let d: number;
+  if (p.n === q.n && p.u * q.u > -1) d = Math.atan((p.u - q.u) / (1 + p.u * q.u));
+  else d = Math.atan(p.u) - Math.atan(q.u) + Math.PI * (p.n - q.n);
+  return Math.max(0, (c.linewidth / 2) * d);
+}
+
+/** `C(x)` itself (used to bound the image response). */
+export function combValue(c: Comb, x: number): number {
+  const a = c.linewidth / (2 * c.fsr);
+  const den = Math.cosh(2 * Math.PI * a) - Math.cos((2 * Math.PI * x) / c.fsr);
+  return (Math.PI * a * Math.sinh(2 * Math.PI * a)) / den;
+}
+
+/**
+ * `∫Wᵢ dy` at LO offset L for an SSB channel with optical band `[xl, xh]`:
+ * the image band `X' = 2L − X`, counted where `|x'|` lies in rfInput.
+ */
+export function imageIntegral(c: Comb, m: MapModel, band: readonly [number, number], L: number): number {
+  const lo = 2 * L - band[1];
+  const hi = 2 * L - band[0];
+  let sum = 0;
+  // x' in [rfMin, rfMax]
+  const a1 = Math.max(lo, m.rfMin);
+  const b1 = Math.min(hi, m.rfMax);
+  if (b1 > a1) sum += combIntegral(c, a1, b1);
+  // x' in [−rfMax, −rfMin]
+  const a2 = Math.max(lo, -m.rfMax);
+  const b2 = Math.min(hi, -m.rfMin);
+  if (b2 > a2) sum += combIntegral(c, a2, b2);
+  return sum;
+}
+
+/** Image rejection R(L) in dB (+∞ where `∫Wᵢ = 0`). */
+export function imageRejectionDB(c: Comb, m: MapModel, ch: MapChannel, L: number): number {
+  const band = ch.bands[0];
+  if (!band) return Infinity;
+  const wi = imageIntegral(c, m, band, L);
+  if (!(wi > 0)) return Infinity;
+  return 10 * Math.log10(ch.wantedIntegral / wi);
+}
+
+/** The image rule fires (with the 1e-9 dB allowance in favour of passing). */
+export function imageFires(c: Comb, m: MapModel, ch: MapChannel, L: number): boolean {
+  return imageRejectionDB(c, m, ch, L) < m.imageRejectionDB - 1e-9;
+}
+
+/**
+ * The distance `r` from a mode centre within which `C` exceeds `level`
+ * (the comb is largest at a mode centre and falls monotonically to the
+ * midpoint between modes). Returns `fsr/2` when C exceeds the level
+ * everywhere and −1 when it never does.
+ */
+export function combRadius(c: Comb, level: number): number {
+  const a = c.linewidth / (2 * c.fsr);
+  const u = 2 * Math.PI * a;
+  if (!(level > 0) || u > 40) return c.fsr / 2;
+  const rhs = Math.cosh(u) - (Math.PI * a * Math.sinh(u)) / level;
+  if (rhs <= -1) return c.fsr / 2;
+  if (rhs >= 1) return -1;
+  return (c.fsr / (2 * Math.PI)) * Math.acos(rhs);
+}
+
+/** Bisection bracket width for an image-rule map edge (GHz). */
+export const IMAGE_EDGE_BRACKET = 1e-6;
+
+/**
+ * The L intervals inside `[lo, hi]` (a piece of the reach outside the
+ * channel's band) where the image rule fires for an SSB channel, by the
+ * contract's procedure (plan-format.md, "Feasibility map and place"): only
+ * the windows where `X'` comes within `r` of a mode centre are searched;
+ * each window is split at the kinks where `X'` crosses a `±rfInput` edge;
+ * on each piece the rule is evaluated on a grid of step ≤ min(δ, B)/16, and
+ * every change of state between neighbouring grid points is bisected to
+ * 1e-6 GHz (the edge is the midpoint of the final bracket).
+ *
+ * The grid outcome is found without evaluating every grid point: between
+ * the kinks, `∫Wᵢ(L)` changes only through the two moving edges of `X'`,
+ * `d∫Wᵢ/dL = 2·(C(2L − x_l) − C(2L − x_h))` (terms absent where an edge is
+ * held by an rfInput edge), and the comb satisfies `C(u) = C(v)` only when
+ * `u ± v` is a multiple of fsr. So `∫Wᵢ` — hence the rule's state — is
+ * monotone between the points where the centre of `X'` is a multiple of
+ * fsr/2, `L = (n·fsr + x_l + x_h)/4`. On each monotone run of grid points
+ * the state changes at most once: compare the run's ends and binary-search
+ * the grid for the change. The changes found are exactly those a point-by-
+ * point scan of the same grid finds.
+ */
+export function imageFiringIntervals(
+  c: Comb,
+  m: MapModel,
+  ch: MapChannel,
+  lo: number,
+  hi: number,
+): [number, number][] {
+  const band = ch.bands[0];
+  if (!band || !ch.ssb || !(hi > lo)) return [];
+  const [xl, xh] = band;
+  const B = ch.widthGHz;
+  const level = Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / B);
+  const r = combRadius(c, level);
+  if (r < 0) return [];
+  // Image band within r of mode n·fsr: 2L − xh ≤ n·fsr + r and 2L − xl ≥ n·fsr − r.
+  const windows: [number, number][] = [];
+  if (r >= c.fsr / 2) windows.push([lo, hi]);
+  else {
+    const nFirst = Math.ceil((2 * lo - xh - r) / c.fsr);
+    const nLast = Math.floor((2 * hi - xl + r) / c.fsr);
+    for (let n = nFirst; n <= nLast; n++) {
+      const wlo = Math.max(lo, (n * c.fsr - r + xl) / 2);
+      const whi = Math.min(hi, (n * c.fsr + r + xh) / 2);
+      if (whi > wlo) {
+        const last = windows[windows.length - 1];
+        if (last && wlo <= last[1]) last[1] = Math.max(last[1], whi);
+        else windows.push([wlo, whi]);
+      }
+    }
+  }
+  const kinks: number[] = [];
+  for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) kinks.push((e + xh) / 2, (e + xl) / 2);
+  const step = Math.min(m.linewidth, B) / 16;
+  const fires = (L: number) => imageFires(c, m, ch, L);
+  const out: [number, number][] = [];
+  const push = (a: number, b: number) => {
+    if (!(b > a)) return;
+    const last = out[out.length - 1];
+    if (last && a <= last[1]) last[1] = Math.max(last[1], b);
+    else out.push([a, b]);
+  };
+  const quarter = c.fsr / 4;
+  const centreSum = (xl + xh) / 4;
+  for (const [wlo, whi] of windows) {
+    const cuts = [wlo, ...kinks.filter((k) => k > wlo && k < whi).sort((p, q) => p - q), whi];
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const p = cuts[i] as number;
+      const q = cuts[i + 1] as number;
+      const n = Math.max(1, Math.ceil((q - p) / step));
+      const gridL = (j: number) => (j === n ? q : p + ((q - p) * j) / n);
+      const states = new Map<number, boolean>();
+      const state = (j: number): boolean => {
+        let v = states.get(j);
+        if (v === undefined) {
+          v = fires(gridL(j));
+          states.set(j, v);
+        }
+        return v;
+      };
+      // runs of grid indices between the monotone split points
+      const splits: number[] = [];
+      const kFirst = Math.ceil((p - centreSum) / quarter);
+      const kLast = Math.floor((q - centreSum) / quarter);
+      for (let k = kFirst; k <= kLast; k++) {
+        const Lk = k * quarter + centreSum;
+        if (Lk > p && Lk < q) {
+          const j = Math.min(n - 1, Math.floor(((Lk - p) / (q - p)) * n));
+          if (splits[splits.length - 1] !== j) splits.push(j);
+        }
+      }
+      const changes: number[] = []; // t: state(t) ≠ state(t + 1)
+      let ja = 0;
+      for (const jb of [...splits, n]) {
+        if (jb > ja && state(ja) !== state(jb)) {
+          let a = ja;
+          let b = jb;
+          const s0 = state(ja);
+          while (b - a > 1) {
+            const mid = (a + b) >> 1;
+            if (state(mid) === s0) a = mid;
+            else b = mid;
+          }
+          changes.push(a);
+        }
+        if (jb < n && state(jb) !== state(jb + 1)) changes.push(jb);
+        ja = jb + 1;
+      }
+      let openAt: number | null = state(0) ? p : null;
+      for (const t of changes) {
+        let a = gridL(t);
+        let b = gridL(t + 1);
+        const before = state(t);
+        while (b - a > IMAGE_EDGE_BRACKET) {
+          const mid = (a + b) / 2;
+          if (fires(mid) === before) a = mid;
+          else b = mid;
+        }
+        const edge = (a + b) / 2;
+        if (before) {
+          if (openAt !== null) push(openAt, edge);
+          openAt = null;
+        } else openAt = edge;
+      }
+      if (openAt !== null) push(openAt, q);
+    }
+  }
+  return out;
+}
+
+/**
+ * The same firing intervals by the plain procedure: every grid point of
+ * every piece evaluated (the reference the fast search is tested against).
+ */
+export function imageFiringIntervalsByScan(
+  c: Comb,
+  m: MapModel,
+  ch: MapChannel,
+  lo: number,
+  hi: number,
+): [number, number][] {
+  const band = ch.bands[0];
+  if (!band || !ch.ssb || !(hi > lo)) return [];
+  const [xl, xh] = band;
+  const B = ch.widthGHz;
+  const level = Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / B);
+  const r = combRadius(c, level);
+  if (r < 0) return [];
+  const windows: [number, number][] = [];
+  if (r >= c.fsr / 2) windows.push([lo, hi]);
+  else {
+    const nFirst = Math.ceil((2 * lo - xh - r) / c.fsr);
+    const nLast = Math.floor((2 * hi - xl + r) / c.fsr);
+    for (let n = nFirst; n <= nLast; n++) {
+      const wlo = Math.max(lo, (n * c.fsr - r + xl) / 2);
+      const whi = Math.min(hi, (n * c.fsr + r + xh) / 2);
+      if (whi > wlo) {
+        const last = windows[windows.length - 1];
+        if (last && wlo <= last[1]) last[1] = Math.max(last[1], whi);
+        else windows.push([wlo, whi]);
+      }
+    }
+  }
+  const kinks: number[] = [];
+  for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) kinks.push((e + xh) / 2, (e + xl) / 2);
+  const step = Math.min(m.linewidth, B) / 16;
+  const fires = (L: number) => imageFires(c, m, ch, L);
+  const out: [number, number][] = [];
+  const push = (a: number, b: number) => {
+    if (!(b > a)) return;
+    const last = out[out.length - 1];
+    if (last && a <= last[1]) last[1] = Math.max(last[1], b);
+    else out.push([a, b]);
+  };
+  for (const [wlo, whi] of windows) {
+    const cuts = [wlo, ...kinks.filter((k) => k > wlo && k < whi).sort((p, q) => p - q), whi];
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const p = cuts[i] as number;
+      const q = cuts[i + 1] as number;
+      const n = Math.max(1, Math.ceil((q - p) / step));
+      let prevL = p;
+      let prev = fires(p);
+      let openAt: number | null = prev ? p : null;
+      for (let j = 1; j <= n; j++) {
+        const L = j === n ? q : p + ((q - p) * j) / n;
+        const now = fires(L);
+        if (now !== prev) {
+          let a = prevL;
+          let b = L;
+          while (b - a > IMAGE_EDGE_BRACKET) {
+            const mid = (a + b) / 2;
+            if (fires(mid) === prev) a = mid;
+            else b = mid;
+          }
+          const edge = (a + b) / 2;
+          if (now) openAt = edge;
+          else if (openAt !== null) {
+            push(openAt, edge);
+            openAt = null;
+          }
+        }
+        prev = now;
+        prevL = L;
+      }
+      if (openAt !== null) push(openAt, q);
+    }
+  }
+  return out;
+}

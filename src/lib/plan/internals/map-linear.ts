@@ -1,0 +1,264 @@
+/**
+ * Exact piecewise-linear interval functions of the LO offset `L`, for the
+ * feasibility map (plan-format.md, "Feasibility map and place": every slot
+ * edge and spur edge is piecewise linear in L).
+ *
+ * A `Lin` is `a + b·L`. A `Piece` is an interval-valued function
+ * `[lo(L), hi(L)]` that is linear on `[from, to]`; an `IFn` is a sorted list
+ * of non-overlapping pieces (where there is no piece the function is
+ * undefined: no slot, or a spur dropped by the detector band). Every
+ * operation splits pieces exactly where a linear edge meets a limit (the
+ * solution of `a + b·L = c`), so all results are exact up to rounding.
+ */
+
+export interface Lin {
+  a: number;
+  b: number;
+}
+export interface Piece {
+  from: number;
+  to: number;
+  lo: Lin;
+  hi: Lin;
+}
+export type IFn = Piece[];
+/** Closed L intervals `[lo, hi]`. */
+export type LSet = [number, number][];
+
+export const lin = (a: number, b: number): Lin => ({ a, b });
+export const at = (f: Lin, L: number): number => f.a + f.b * L;
+const sub = (f: Lin, g: Lin): Lin => ({ a: f.a - g.a, b: f.b - g.b });
+const neg = (f: Lin): Lin => ({ a: -f.a, b: -f.b });
+const shift = (f: Lin, c: number): Lin => ({ a: f.a + c, b: f.b });
+
+/** The L in (from, to) where `f(L) = c`, or NaN. */
+function crossing(f: Lin, c: number, from: number, to: number): number {
+  if (f.b === 0) return NaN;
+  const L = (c - f.a) / f.b;
+  return L > from && L < to ? L : NaN;
+}
+
+/** Split [from, to] at the given points (those strictly inside), in order. */
+function cutsOf(from: number, to: number, pts: number[]): number[] {
+  const inside = pts.filter((p) => p > from && p < to);
+  inside.sort((p, q) => p - q);
+  return [from, ...inside, to];
+}
+
+/** Widen every piece by `w` on each side. */
+export function widen(fn: IFn, w: number): IFn {
+  return fn.map((p) => ({ from: p.from, to: p.to, lo: shift(p.lo, -w), hi: shift(p.hi, w) }));
+}
+
+/**
+ * `|[lo, hi]|` (an interval straddling 0 becomes `[0, max(|lo|, |hi|)]`),
+ * split where an edge crosses 0 and where `−lo = hi`.
+ */
+export function absFn(fn: IFn): IFn {
+  const out: IFn = [];
+  for (const p of fn) {
+    const cuts = cutsOf(p.from, p.to, [
+      crossing(p.lo, 0, p.from, p.to),
+      crossing(p.hi, 0, p.from, p.to),
+      crossing({ a: p.lo.a + p.hi.a, b: p.lo.b + p.hi.b }, 0, p.from, p.to),
+    ]);
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const from = cuts[i] as number;
+      const to = cuts[i + 1] as number;
+      if (!(to > from)) continue;
+      const mid = (from + to) / 2;
+      const l = at(p.lo, mid);
+      const h = at(p.hi, mid);
+      if (l >= 0) out.push({ from, to, lo: p.lo, hi: p.hi });
+      else if (h <= 0) out.push({ from, to, lo: neg(p.hi), hi: neg(p.lo) });
+      else out.push({ from, to, lo: lin(0, 0), hi: -l > h ? neg(p.lo) : p.hi });
+    }
+  }
+  return out;
+}
+
+/**
+ * Intersection with `[min, max]`; where it is empty the piece is dropped
+ * (plan-format.md: a spur with an empty intersection with the detector band
+ * is dropped).
+ */
+export function clipFn(fn: IFn, min: number, max: number): IFn {
+  const out: IFn = [];
+  for (const p of fn) {
+    const cuts = cutsOf(p.from, p.to, [
+      crossing(p.lo, min, p.from, p.to),
+      crossing(p.lo, max, p.from, p.to),
+      crossing(p.hi, min, p.from, p.to),
+      crossing(p.hi, max, p.from, p.to),
+    ]);
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const from = cuts[i] as number;
+      const to = cuts[i + 1] as number;
+      if (!(to > from)) continue;
+      const mid = (from + to) / 2;
+      const l = at(p.lo, mid);
+      const h = at(p.hi, mid);
+      if (h < min || l > max) continue;
+      out.push({ from, to, lo: l < min ? lin(min, 0) : p.lo, hi: h > max ? lin(max, 0) : p.hi });
+    }
+  }
+  return out;
+}
+
+/** Multiples `k·h` (k ≥ 0) met by the edge `f` on (from, to), as L values. */
+function multipleCrossings(f: Lin, h: number, from: number, to: number, out: number[]): void {
+  if (f.b === 0) return;
+  const v0 = at(f, from);
+  const v1 = at(f, to);
+  const kLo = Math.max(0, Math.floor(Math.min(v0, v1) / h));
+  const kHi = Math.ceil(Math.max(v0, v1) / h);
+  for (let k = kLo; k <= kHi; k++) {
+    const L = crossing(f, k * h, from, to);
+    if (L === L) out.push(L);
+  }
+}
+
+/** The fold of a linear edge lying in zone z (even: shift down, odd: mirror). */
+function foldLin(f: Lin, z: number, h: number): Lin {
+  return z % 2 === 0 ? { a: f.a - z * h, b: f.b } : { a: (z + 1) * h - f.a, b: -f.b };
+}
+
+/** One folded piece: `zone` is the Nyquist zone of a band that does not straddle, −1 when it straddles. */
+export interface FoldedPiece extends Piece {
+  zone: number;
+}
+
+/**
+ * Nyquist folding into `[0, h]`, h = fs/2 (plan-format.md, "Spur families"):
+ * zone `z = floor(f/h)`, even zones shift down, odd zones mirror; a band
+ * crossing one zone edge `K·h` reaches 0 (K even) or h (K odd), one holding a
+ * whole zone becomes `[0, h]`. Input edges must be ≥ 0.
+ */
+export function foldFn(fn: IFn, h: number): FoldedPiece[] {
+  const out: FoldedPiece[] = [];
+  for (const p of fn) {
+    const pts: number[] = [];
+    multipleCrossings(p.lo, h, p.from, p.to, pts);
+    multipleCrossings(p.hi, h, p.from, p.to, pts);
+    const cuts = cutsOf(p.from, p.to, pts);
+    for (let i = 0; i + 1 < cuts.length; i++) {
+      const from = cuts[i] as number;
+      const to = cuts[i + 1] as number;
+      if (!(to > from)) continue;
+      const mid = (from + to) / 2;
+      const l = at(p.lo, mid);
+      const hv = at(p.hi, mid);
+      const zl = Math.floor(l / h);
+      const zh = Math.floor(hv / h);
+      // interior multiples of h: floor(l/h)+1 .. ceil(hv/h)−1
+      const kFirst = zl + 1;
+      const kLast = Math.ceil(hv / h) - 1;
+      if (kLast - kFirst >= 1) {
+        out.push({ from, to, lo: lin(0, 0), hi: lin(h, 0), zone: -1 });
+      } else if (kLast === kFirst) {
+        const fl = foldLin(p.lo, zl, h);
+        const fh = foldLin(p.hi, zh, h);
+        const sub2 = cutsOf(from, to, [crossing(sub(fl, fh), 0, from, to)]);
+        for (let j = 0; j + 1 < sub2.length; j++) {
+          const f2 = sub2[j] as number;
+          const t2 = sub2[j + 1] as number;
+          if (!(t2 > f2)) continue;
+          const m2 = (f2 + t2) / 2;
+          const lower = at(fl, m2) <= at(fh, m2) ? fl : fh;
+          const upper = at(fl, m2) <= at(fh, m2) ? fh : fl;
+          // a band crossing only 0 (lower edge below 0, e.g. an occupied band
+          // widened by drift) is not a Nyquist straddle (k ≥ 1): it keeps zone 0
+          if (kFirst % 2 === 0) out.push({ from: f2, to: t2, lo: lin(0, 0), hi: upper, zone: kFirst === 0 ? 0 : -1 });
+          else out.push({ from: f2, to: t2, lo: lower, hi: lin(h, 0), zone: -1 });
+        }
+      } else {
+        const fl = foldLin(p.lo, zl, h);
+        const fh = foldLin(p.hi, zl, h);
+        if (zl % 2 === 0) out.push({ from, to, lo: fl, hi: fh, zone: zl });
+        else out.push({ from, to, lo: fh, hi: fl, zone: zl });
+      }
+    }
+  }
+  return out;
+}
+
+/** Append `[lo, hi]` to a sorted set, joining it with the last interval when they meet. */
+export function pushInterval(out: LSet, lo: number, hi: number): void {
+  if (!(hi > lo)) return;
+  const last = out[out.length - 1];
+  if (last && lo <= last[1]) {
+    if (hi > last[1]) last[1] = hi;
+  } else out.push([lo, hi]);
+}
+
+/** The sub-interval of [from, to] where `f(L) < c`, as [lo, hi] (possibly empty: lo ≥ hi). */
+function below(f: Lin, c: number, from: number, to: number): [number, number] {
+  if (f.b === 0) return f.a < c ? [from, to] : [to, from];
+  const L = (c - f.a) / f.b;
+  return f.b > 0 ? [from, Math.min(to, L)] : [Math.max(from, L), to];
+}
+/** The sub-interval of [from, to] where `f(L) > c`. */
+function above(f: Lin, c: number, from: number, to: number): [number, number] {
+  return below(neg(f), -c, from, to);
+}
+
+/**
+ * Where two interval functions are both defined and within guard
+ * (gap `max(lo) − min(hi) < g`, i.e. `A.lo − B.hi < g` and `B.lo − A.hi < g`;
+ * the other two terms are minus a width, never ≥ g ≥ 0). `accept` filters
+ * piece pairs (used for "different Nyquist zones"). Result unsorted.
+ */
+export function withinGuardSet<P extends Piece>(
+  A: readonly P[],
+  B: readonly P[],
+  g: number,
+  out: LSet,
+  accept?: (p: P, q: P) => boolean,
+): void {
+  let i = 0;
+  let j = 0;
+  while (i < A.length && j < B.length) {
+    const p = A[i] as P;
+    const q = B[j] as P;
+    const from = Math.max(p.from, q.from);
+    const to = Math.min(p.to, q.to);
+    if (to > from && (!accept || accept(p, q))) {
+      const s1 = below(sub(p.lo, q.hi), g, from, to);
+      const s2 = below(sub(q.lo, p.hi), g, from, to);
+      const lo = Math.max(s1[0], s2[0]);
+      const hi = Math.min(s1[1], s2[1]);
+      if (hi > lo) out.push([lo, hi]);
+    }
+    if (p.to <= q.to) i++;
+    else j++;
+  }
+}
+
+/** Where the function is defined and `[lo, hi]` is not inside `[min, max]`. */
+export function outsideSet(fn: IFn, min: number, max: number, out: LSet): void {
+  for (const p of fn) {
+    const s1 = below(p.lo, min, p.from, p.to);
+    if (s1[1] > s1[0]) out.push(s1);
+    const s2 = above(p.hi, max, p.from, p.to);
+    if (s2[1] > s2[0]) out.push(s2);
+  }
+}
+
+/** Where the interior of `[lo, hi]` holds a multiple `k·h`, k ≥ 1. */
+export function straddleSet(fn: IFn, h: number, out: LSet): void {
+  for (const p of fn) {
+    const l0 = at(p.lo, p.from);
+    const l1 = at(p.lo, p.to);
+    const h0 = at(p.hi, p.from);
+    const h1 = at(p.hi, p.to);
+    const kLo = Math.max(1, Math.floor(Math.min(l0, l1) / h));
+    const kHi = Math.ceil(Math.max(h0, h1) / h);
+    for (let k = kLo; k <= kHi; k++) {
+      const s1 = below(p.lo, k * h, p.from, p.to);
+      const s2 = above(p.hi, k * h, p.from, p.to);
+      const lo = Math.max(s1[0], s2[0]);
+      const hi = Math.min(s1[1], s2[1]);
+      if (hi > lo) out.push([lo, hi]);
+    }
+  }
+}

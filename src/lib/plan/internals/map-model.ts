@@ -1,0 +1,169 @@
+import type { Plan } from "@/schemas/plan";
+
+/**
+ * The error codes whose rule depends on the LO offset `L`, in rules-table
+ * order (plan-format.md, "Rules", column "depends on L"; `slot-overlap` only
+ * when it is an error, i.e. the chain is not `sharedIf`). These, and only
+ * these, shape the feasibility map.
+ */
+export const MAP_CODES = [
+  "lo-uncovered",
+  "lo-in-band",
+  "if-outside-detector",
+  "slot-overlap",
+  "image-response",
+  "spur-in-slot",
+  "nyquist-straddle",
+  "alias-overlap",
+] as const;
+export type MapCode = (typeof MAP_CODES)[number];
+
+/** Bit of each code in a code-set mask (bit i = `MAP_CODES[i]`). */
+export const CODE_BIT: Readonly<Record<MapCode, number>> = {
+  "lo-uncovered": 1,
+  "lo-in-band": 2,
+  "if-outside-detector": 4,
+  "slot-overlap": 8,
+  "image-response": 16,
+  "spur-in-slot": 32,
+  "nyquist-straddle": 64,
+  "alias-overlap": 128,
+};
+
+/** The codes of a mask, in rules-table order. */
+export function codesOfMask(mask: number): MapCode[] {
+  const out: MapCode[] = [];
+  for (let i = 0; i < MAP_CODES.length; i++) {
+    if (mask & (1 << i)) out.push(MAP_CODES[i] as MapCode);
+  }
+  return out;
+}
+
+/** One channel, reduced to what the L-dependent rules need (GHz). */
+export interface MapChannel {
+  id: string;
+  /** Optical bands `Xⱼ = s·Pⱼ`, sorted by lower edge (one for SSB, two for DSB). */
+  bands: [number, number][];
+  /** Width of one passband `B`. */
+  widthGHz: number;
+  /** SSB channels are subject to the image rule. */
+  ssb: boolean;
+  /** `∫W dy` over the slot: `∫_X M_{n*}(x) dx` (independent of L). */
+  wantedIntegral: number;
+}
+
+/** One chain, reduced to what the L-dependent rules need (all in GHz). */
+export interface MapModel {
+  chainId: string;
+  /** Merged reach intervals (overlapping or touching ones joined), increasing. */
+  reach: [number, number][];
+  /** Drift `D`. */
+  drift: number;
+  /** Guard `g`. */
+  guard: number;
+  /** Tuning step (0 = any offset). */
+  step: number;
+  /** Step in MHz as entered (multiples are formed as `k·stepMHz/1000`). */
+  stepMHz: number;
+  detMin: number;
+  detMax: number;
+  /** `fs/2`, or null when the IF is not digitised. */
+  halfFs: number | null;
+  /** `slot-overlap` is a warning (not in the map) when true. */
+  sharedIf: boolean;
+  /** Lock modulation `fm` and orders `M`. */
+  fm: number;
+  lockOrders: number;
+  /** Linewidth `δ`, FSR, comb parameter `a = δ/(2·fsr)`. */
+  linewidth: number;
+  fsr: number;
+  /** Image rule threshold (dB) and the antenna box `rfInput`. */
+  imageRejectionDB: number;
+  rfMin: number;
+  rfMax: number;
+  channels: MapChannel[];
+}
+
+/** `∫_lo^hi M_n(x) dx` for the Lorentzian centred at `centre` (closed form, arctangent difference). */
+export function lorentzIntegral(lo: number, hi: number, centre: number, linewidth: number): number {
+  const u = (2 * (hi - centre)) / linewidth;
+  const v = (2 * (lo - centre)) / linewidth;
+  return (linewidth / 2) * atanDifference(u, v);
+}
+
+/**
+ * `atan(u) − atan(v)` without cancellation when u and v are large and of
+ * the same sign: `atan((u − v)/(1 + u·v))` (valid for u·v > −1).
+ */
+export function atanDifference(u: number, v: number): number {
+  if (u * v > -1) {
+    if (!Number.isFinite(u) || !Number.isFinite(v)) return Math.atan(u) - Math.atan(v);
+    return Math.atan((u - v) / (1 + u * v));
+  }
+  return Math.atan(u) - Math.atan(v);
+}
+
+/** Merge intervals that overlap or touch (plan-format.md: reach intervals). */
+export function mergeTouching(list: readonly (readonly [number, number])[]): [number, number][] {
+  const sorted = list.map((r) => [r[0], r[1]] as [number, number]).sort((p, q) => p[0] - q[0] || p[1] - q[1]);
+  const out: [number, number][] = [];
+  for (const iv of sorted) {
+    const last = out[out.length - 1];
+    if (last && iv[0] <= last[1]) {
+      if (iv[1] > last[1]) last[1] = iv[1];
+    } else out.push(iv);
+  }
+  return out;
+}
+
+/**
+ * Reduce a chain of a parsed plan to the quantities the L-dependent rules use.
+ * Throws when the chain id does not exist (the caller passes ids from the plan).
+ */
+export function buildMapModel(plan: Plan, chainId: string): MapModel {
+  const chain = plan.chains.find((c) => c.id === chainId);
+  if (!chain) throw new Error(`no chain with id "${chainId}"`);
+  const laser = plan.lasers.find((l) => l.id === chain.laser);
+  const resonator = plan.resonators.find((r) => r.id === chain.resonator);
+  const detector = plan.detectors.find((d) => d.id === chain.detector);
+  if (!laser || !resonator || !detector) throw new Error(`chain "${chainId}" names a missing laser, resonator or detector`);
+  const s = chain.sideband === "upper" ? 1 : -1;
+  const linewidth = (laser.carrierTHz * 1000) / resonator.loadedQ;
+  const wantedCentre = s * chain.mode * resonator.fsrGHz;
+  const channels: MapChannel[] = [];
+  for (const ch of plan.channels) {
+    if (ch.chain !== chainId) continue;
+    const B = ch.bandwidthMHz / 1000;
+    const centres = ch.dsbOffsetGHz === null ? [ch.centerGHz] : [ch.centerGHz - ch.dsbOffsetGHz, ch.centerGHz + ch.dsbOffsetGHz];
+    const bands = centres
+      .map((f) => {
+        const lo = s * (f - B / 2);
+        const hi = s * (f + B / 2);
+        return (lo <= hi ? [lo, hi] : [hi, lo]) as [number, number];
+      })
+      .sort((p, q) => p[0] - q[0]);
+    let wantedIntegral = 0;
+    for (const b of bands) wantedIntegral += lorentzIntegral(b[0], b[1], wantedCentre, linewidth);
+    channels.push({ id: ch.id, bands, widthGHz: B, ssb: ch.dsbOffsetGHz === null, wantedIntegral });
+  }
+  return {
+    chainId,
+    reach: mergeTouching(laser.reach.map((r) => [r.minGHz, r.maxGHz] as const)),
+    drift: laser.driftMHz / 1000,
+    guard: plan.settings.guardMHz / 1000,
+    step: laser.stepMHz / 1000,
+    stepMHz: laser.stepMHz,
+    detMin: detector.minGHz,
+    detMax: detector.maxGHz,
+    halfFs: detector.sampleRateGHz === null ? null : detector.sampleRateGHz / 2,
+    sharedIf: chain.sharedIf,
+    fm: laser.lock.modulationMHz / 1000,
+    lockOrders: laser.lock.orders,
+    linewidth,
+    fsr: resonator.fsrGHz,
+    imageRejectionDB: plan.settings.imageRejectionDB,
+    rfMin: chain.rfInput.minGHz,
+    rfMax: chain.rfInput.maxGHz,
+    channels,
+  };
+}

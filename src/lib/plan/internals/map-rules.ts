@@ -1,0 +1,168 @@
+import type { MapChannel, MapCode, MapModel } from "./map-model";
+import { MAP_CODES } from "./map-model";
+import { imageFiringIntervals, makeComb } from "./map-image";
+import {
+  absFn,
+  clipFn,
+  foldFn,
+  lin,
+  outsideSet,
+  straddleSet,
+  widen,
+  withinGuardSet,
+  type FoldedPiece,
+  type IFn,
+  type Lin,
+  type LSet,
+  type Piece,
+} from "./map-linear";
+
+/**
+ * The exact firing sets of every L-dependent error rule of one chain over
+ * one (merged) reach interval `[r0, r1]`: for each code, a list of L
+ * intervals where it fires (unsorted, possibly overlapping). Every edge is
+ * the solution of a limiting equality (gap = guard, edge = detector bound,
+ * edge = k·fs/2, …) except those of `image-response`, which are bisected to
+ * 1e-6 GHz (plan-format.md, "Feasibility map and place").
+ */
+export type FiringSets = Record<MapCode, LSet>;
+
+/** The IF slot of a channel as a piecewise-linear function of L on [r0, r1] (undefined inside a band). */
+export function slotFn(ch: MapChannel, r0: number, r1: number): IFn {
+  const edges: number[] = [];
+  for (const b of ch.bands) edges.push(b[0], b[1]);
+  const cuts = [r0, ...edges.filter((e) => e > r0 && e < r1).sort((p, q) => p - q), r1];
+  const out: IFn = [];
+  for (let i = 0; i + 1 < cuts.length; i++) {
+    const from = cuts[i] as number;
+    const to = cuts[i + 1] as number;
+    if (!(to > from)) continue;
+    const mid = (from + to) / 2;
+    if (ch.bands.some((b) => mid > b[0] && mid < b[1])) continue; // lo-in-band: no slot
+    // distance intervals |L − x| over each band, linear on this region
+    const los: Lin[] = [];
+    const his: Lin[] = [];
+    for (const b of ch.bands) {
+      if (mid <= b[0]) {
+        los.push(lin(b[0], -1));
+        his.push(lin(b[1], -1));
+      } else {
+        los.push(lin(-b[1], 1));
+        his.push(lin(-b[0], 1));
+      }
+    }
+    // hull: min of lower edges, max of upper edges; split where they swap
+    const pts: number[] = [];
+    for (let p = 0; p < los.length; p++) {
+      for (let q = p + 1; q < los.length; q++) {
+        for (const [f, g] of [
+          [los[p]!, los[q]!],
+          [his[p]!, his[q]!],
+        ] as const) {
+          if (f.b !== g.b) {
+            const L = (g.a - f.a) / (f.b - g.b);
+            if (L > from && L < to) pts.push(L);
+          }
+        }
+      }
+    }
+    pts.sort((p, q) => p - q);
+    const sub = [from, ...pts, to];
+    for (let j = 0; j + 1 < sub.length; j++) {
+      const f = sub[j] as number;
+      const t = sub[j + 1] as number;
+      if (!(t > f)) continue;
+      const m = (f + t) / 2;
+      let lo = los[0]!;
+      let hi = his[0]!;
+      for (let k = 1; k < los.length; k++) {
+        if (los[k]!.a + los[k]!.b * m < lo.a + lo.b * m) lo = los[k]!;
+        if (his[k]!.a + his[k]!.b * m > hi.a + hi.b * m) hi = his[k]!;
+      }
+      out.push({ from: f, to: t, lo, hi });
+    }
+  }
+  return out;
+}
+
+/** The error spur bands of the chain (carrier-beat, lock-lo, lock-self) on [r0, r1], detector-clipped. */
+export function errorSpurFns(m: MapModel, r0: number, r1: number): IFn[] {
+  const D = m.drift;
+  const out: IFn[] = [];
+  const moving = (c: number): IFn =>
+    clipFn(absFn([{ from: r0, to: r1, lo: lin(c - D, 1), hi: lin(c + D, 1) }]), m.detMin, m.detMax);
+  out.push(moving(0)); // carrier-beat |L| ± D
+  for (let k = 1; k <= m.lockOrders; k++) {
+    out.push(moving(-k * m.fm)); // |L − k·fm| ± D
+    out.push(moving(k * m.fm)); // |L + k·fm| ± D
+  }
+  for (let k = 1; k <= 2 * m.lockOrders; k++) {
+    const f = k * m.fm; // lock-self, fixed tone
+    if (f >= m.detMin && f <= m.detMax) out.push([{ from: r0, to: r1, lo: lin(f, 0), hi: lin(f, 0) }]);
+  }
+  return out.filter((f) => f.length > 0);
+}
+
+/** Compute the firing sets of every L-dependent error rule on the reach interval [r0, r1]. */
+export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
+  const sets = Object.fromEntries(MAP_CODES.map((c) => [c, [] as LSet])) as FiringSets;
+  const D = m.drift;
+  const g = m.guard;
+  const h = m.halfFs;
+
+  // lo-uncovered: [L − D, L + D] must lie inside this reach interval
+  if (D > 0) {
+    sets["lo-uncovered"].push([r0, Math.min(r1, r0 + D)], [Math.max(r0, r1 - D), r1]);
+  }
+
+  const occ: IFn[] = [];
+  const folded: FoldedPiece[][] = [];
+  const foldedClear: FoldedPiece[][] = [];
+  const comb = makeComb(m.linewidth, m.fsr);
+  for (const ch of m.channels) {
+    for (const b of ch.bands) {
+      const lo = Math.max(r0, b[0]);
+      const hi = Math.min(r1, b[1]);
+      if (hi > lo) sets["lo-in-band"].push([lo, hi]);
+    }
+    const slot = slotFn(ch, r0, r1);
+    const O = widen(slot, D);
+    occ.push(O);
+    outsideSet(O, m.detMin, m.detMax, sets["if-outside-detector"]);
+    if (ch.ssb) {
+      for (const p of slot) sets["image-response"].push(...imageFiringIntervals(comb, m, ch, p.from, p.to));
+    }
+    if (h !== null) {
+      straddleSet(O, h, sets["nyquist-straddle"]);
+      const f = foldFn(O, h);
+      folded.push(f);
+      foldedClear.push(f.filter((p) => p.zone >= 0));
+    }
+  }
+
+  const n = m.channels.length;
+  if (!m.sharedIf) {
+    for (let i = 0; i < n; i++) {
+      for (let j = i + 1; j < n; j++) withinGuardSet(occ[i]!, occ[j]!, g, sets["slot-overlap"]);
+    }
+  }
+
+  const spurs = errorSpurFns(m, r0, r1);
+  const spursFolded = h === null ? [] : spurs.map((s) => foldFn(s, h));
+  for (let i = 0; i < n; i++) {
+    for (const s of spurs) withinGuardSet<Piece>(s, occ[i]!, g, sets["spur-in-slot"]);
+    if (h !== null) {
+      for (const s of spursFolded) withinGuardSet<Piece>(s, folded[i]!, g, sets["spur-in-slot"]);
+    }
+  }
+
+  if (h !== null) {
+    const differentZone = (p: FoldedPiece, q: FoldedPiece) => p.zone !== q.zone;
+    for (let i = 0; i < n; i++) {
+      for (let j = i + 1; j < n; j++) {
+        withinGuardSet(foldedClear[i]!, foldedClear[j]!, g, sets["alias-overlap"], differentZone);
+      }
+    }
+  }
+  return sets;
+}

@@ -1,0 +1,70 @@
+import type { MapModel } from "./map-model";
+import { MAP_CODES } from "./map-model";
+import { firingSets } from "./map-rules";
+
+/** Breakpoints closer than this (GHz) are merged (plan-format.md). */
+export const MERGE_GHZ = 1e-9;
+
+/** One piece of the reach union with the constant set of firing codes (`CODE_BIT` mask). */
+export interface MapPiece {
+  lo: number;
+  hi: number;
+  mask: number;
+}
+
+/**
+ * Sweep the firing sets of every L-dependent error rule over each merged
+ * reach interval: sort all interval edges (merging those closer than 1e-9
+ * GHz), and keep, between consecutive breakpoints, the set of codes whose
+ * firing sets cover that piece. Consecutive pieces with the same set are
+ * joined. Pieces come in increasing L and tile the reach union.
+ */
+export function mapPieces(m: MapModel): MapPiece[] {
+  const out: MapPiece[] = [];
+  for (const [r0, r1] of m.reach) {
+    const sets = firingSets(m, r0, r1);
+    const xs: number[] = [];
+    const ds: number[] = []; // +bit index+1 for an opening, −(index+1) for a closing
+    MAP_CODES.forEach((code, i) => {
+      for (const [lo0, hi0] of sets[code]) {
+        const lo = Math.max(lo0, r0);
+        const hi = Math.min(hi0, r1);
+        if (!(hi - lo > MERGE_GHZ)) continue;
+        xs.push(lo, hi);
+        ds.push(i + 1, -(i + 1));
+      }
+    });
+    const order = Array.from(xs.keys()).sort((a, b) => (xs[a] as number) - (xs[b] as number));
+    const counts = new Int32Array(MAP_CODES.length);
+    let mask = 0;
+    let cur = r0;
+    let k = 0;
+    const emit = (lo: number, hi: number) => {
+      const last = out[out.length - 1];
+      if (last && last.mask === mask && last.hi === lo) last.hi = hi;
+      else out.push({ lo, hi, mask });
+    };
+    while (true) {
+      // apply the group of events at `cur` (chained within MERGE_GHZ)
+      let lastX = cur;
+      while (k < order.length && (xs[order[k] as number] as number) - lastX < MERGE_GHZ) {
+        const e = order[k] as number;
+        lastX = Math.max(lastX, xs[e] as number);
+        const d = ds[e] as number;
+        const i = Math.abs(d) - 1;
+        counts[i] = (counts[i] as number) + (d > 0 ? 1 : -1);
+        if (counts[i]! > 0) mask |= 1 << i;
+        else mask &= ~(1 << i);
+        k++;
+      }
+      const next = k < order.length ? Math.min(xs[order[k] as number] as number, r1) : r1;
+      if (r1 - next < MERGE_GHZ || next <= cur) {
+        if (r1 > cur) emit(cur, r1);
+        break;
+      }
+      emit(cur, next);
+      cur = next;
+    }
+  }
+  return out;
+}
