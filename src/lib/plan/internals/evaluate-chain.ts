@@ -71,6 +71,18 @@ const SEVERITY: Record<FindingCode, Severity> = {
   "in-protected-band": "info",
 };
 
+/** JSON-safe data: −0 becomes 0 and non-finite numbers (only reachable with absurd inputs) become null. */
+function jsonSafe(v: JsonValue): JsonValue {
+  if (typeof v === "number") return Number.isFinite(v) ? v + 0 : null;
+  if (Array.isArray(v)) return v.map(jsonSafe);
+  if (v !== null && typeof v === "object") {
+    const out: { [k: string]: JsonValue } = {};
+    for (const [k, x] of Object.entries(v)) out[k] = jsonSafe(x);
+    return out;
+  }
+  return v;
+}
+
 /** How far outside `outer` the interval `inner` reaches (GHz, ≥ 0). */
 function outsideBy(inner: Interval, outer: Interval): number {
   return Math.max(0, outer[0] - inner[0], inner[1] - outer[1]);
@@ -101,7 +113,7 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
       chain: chainId,
       channel: channelIndex === null ? null : (ctx.channels[channelIndex] as ChannelContext).channel.id,
       message,
-      data,
+      data: jsonSafe(data) as { [k: string]: JsonValue },
     };
     if (channelIndex === null) chainFindings.push(f);
     else (perChannel[channelIndex] as Finding[]).push(f);

@@ -21,4 +21,4 @@ export const fMW = (v: number) => trim(v, 4);
 export const fBand = (iv: Interval) => `${fGHz(iv[0])}–${fGHz(iv[1])} GHz`;
 
 /** An interval as a mutable JSON pair. */
-export const pair = (iv: Interval): [number, number] => [iv[0], iv[1]];
+export const pair = (iv: Interval): [number, number] => [iv[0] + 0, iv[1] + 0]; // + 0 turns −0 into 0
