@@ -2,16 +2,9 @@ import type { Plan } from "@/schemas/plan";
 import { chainContext } from "./internals/chain-context";
 import { evaluateChain } from "./internals/evaluate-chain";
 import { pair } from "./internals/format";
+import { feasibilityMap } from "./feasibility-map";
+import { placeLo } from "./place-lo";
 import { type ChainResult, type ChannelResult, type Finding, RESULT_FORMAT, type ResultDocument, type Spur } from "./types";
-
-// TEMPORARY until the map engineer's feasibility-map.ts and place-lo.ts land:
-// these throw so that no result document is ever produced with a made-up map.
-function feasibilityMap(_plan: Plan, _chainId: string): Pick<ChainResult, "feasibleGHz" | "excludedGHz"> {
-  throw new Error("feasibilityMap: not yet implemented");
-}
-function placeLo(_plan: Plan, _chainId: string, _feasible: [number, number][]): Pick<ChainResult, "placeGHz" | "placeReason"> {
-  throw new Error("placeLo: not yet implemented");
-}
 
 /** A JSON-safe number: non-finite values (only reachable with absurd inputs) become null. */
 function finite(v: number | null): number | null {
@@ -38,8 +31,8 @@ export function checkPlan(plan: Plan): ResultDocument {
       id: chain.id,
       linewidthMHz: ctx.delta * 1000,
       pdInputMW: ctx.pdMW,
-      feasibleGHz: map.feasibleGHz,
-      excludedGHz: map.excludedGHz,
+      feasibleGHz: map.feasibleGHz.map((iv) => [iv[0], iv[1]]),
+      excludedGHz: map.excludedGHz.map((e) => ({ bandGHz: [e.bandGHz[0], e.bandGHz[1]], codes: [...e.codes] })),
       placeGHz: place.placeGHz,
       placeReason: place.placeReason,
     });

@@ -1,0 +1,71 @@
+import { describe, expect, it } from "vitest";
+import { checkPlan } from "@/lib/plan";
+import { type ExpectedSubset, fixtureExpected, mustParse, fixtureInput } from "../fixtures/plans/builders";
+
+/**
+ * The two worked examples (tests/fixtures/plans, computed independently
+ * from docs plan-format.md) reproduced within the tolerances stored in each
+ * expected file: GHz absolute, dB absolute, other figures relative, feasible
+ * edges absolute.
+ */
+for (const name of ["ex1-single-channel", "ex2-lower-sideband-sampled"]) {
+  describe(`worked example ${name}`, () => {
+    const plan = mustParse(fixtureInput(name));
+    const exp: ExpectedSubset = fixtureExpected(name);
+    const tol = exp.tolerances;
+    const result = checkPlan(plan);
+    const closeGHz = (a: number | null | undefined, b: number | null) => {
+      if (b === null) return expect(a).toBeNull();
+      expect(Math.abs((a as number) - b)).toBeLessThanOrEqual(tol.GHz);
+    };
+    const closeRel = (a: number | null | undefined, b: number | null) => {
+      if (b === null) return expect(a).toBeNull();
+      expect(Math.abs((a as number) - b) / Math.abs(b)).toBeLessThanOrEqual(tol.relative);
+    };
+    const closeDB = (a: number | null | undefined, b: number | null) => {
+      if (b === null) return expect(a).toBeNull();
+      expect(Math.abs((a as number) - b)).toBeLessThanOrEqual(tol.dB);
+    };
+    const pairGHz = (a: [number, number] | null | undefined, b: [number, number] | null) => {
+      if (b === null) return expect(a).toBeNull();
+      closeGHz(a?.[0], b[0]);
+      closeGHz(a?.[1], b[1]);
+    };
+
+    it("chain figures: linewidth, photodiode power, feasible intervals and place", () => {
+      expect(result.chains.map((c) => c.id)).toEqual(exp.chains.map((c) => c.id));
+      for (const e of exp.chains) {
+        const c = result.chains.find((x) => x.id === e.id)!;
+        closeRel(c.linewidthMHz, e.linewidthMHz);
+        closeRel(c.pdInputMW, e.pdInputMW);
+        expect(c.feasibleGHz).toHaveLength(e.feasibleGHz.length);
+        e.feasibleGHz.forEach((iv, i) => {
+          expect(Math.abs(c.feasibleGHz[i]![0] - iv[0])).toBeLessThanOrEqual(tol.feasibleEdgeGHz);
+          expect(Math.abs(c.feasibleGHz[i]![1] - iv[1])).toBeLessThanOrEqual(tol.feasibleEdgeGHz);
+        });
+        closeGHz(c.placeGHz, e.placeGHz);
+        expect(c.placeReason).toBe(e.placeReason);
+      }
+    });
+
+    it("channel figures: IF slot, occupied band, image, rejection, radiometric bandwidth, NEΔT, lock replica", () => {
+      expect(result.channels.map((c) => c.id)).toEqual(exp.channels.map((c) => c.id));
+      for (const e of exp.channels) {
+        const c = result.channels.find((x) => x.id === e.id)!;
+        pairGHz(c.ifSlotGHz, e.ifSlotGHz);
+        pairGHz(c.occupiedGHz, e.occupiedGHz);
+        pairGHz(c.imageGHz, e.imageGHz);
+        closeDB(c.imageRejectionDB, e.imageRejectionDB);
+        closeRel(c.radiometricBandwidthMHz, e.radiometricBandwidthMHz);
+        closeRel(c.nedtK, e.nedtK);
+        closeDB(c.lockReplicaDB, e.lockReplicaDB);
+      }
+    });
+
+    it("error findings: the same set (the expected file lists them by code name within a channel; see ADR 004)", () => {
+      const key = (f: { code: string; chain: string; channel: string | null }) => `${f.chain}|${f.channel}|${f.code}`;
+      const got = result.findings.filter((f) => f.severity === "error").map(key);
+      expect([...got].sort()).toEqual(exp.errors.map(key).sort());
+    });
+  });
+}
