@@ -191,9 +191,17 @@ export function pushInterval(out: LSet, lo: number, hi: number): void {
   } else out.push([lo, hi]);
 }
 
-/** The sub-interval of [from, to] where `f(L) < c`, as [lo, hi] (possibly empty: lo ≥ hi). */
+/** The rounding allowance of threshold comparisons (plan-format.md), in GHz. */
+const TOL = 1e-9;
+
+/**
+ * The sub-interval of [from, to] where `f(L) < c`, as [lo, hi] (possibly
+ * empty: lo ≥ hi). A sloped edge meets the limit at one exact L (the edge
+ * of the set); a constant one is a tie over the whole piece when it equals
+ * the limit, and the 1e-9 allowance decides it in favour of passing.
+ */
 function below(f: Lin, c: number, from: number, to: number): [number, number] {
-  if (f.b === 0) return f.a < c ? [from, to] : [to, from];
+  if (f.b === 0) return f.a < c - TOL ? [from, to] : [to, from];
   const L = (c - f.a) / f.b;
   return f.b > 0 ? [from, Math.min(to, L)] : [Math.max(from, L), to];
 }
@@ -203,10 +211,13 @@ function above(f: Lin, c: number, from: number, to: number): [number, number] {
 }
 
 /**
- * Where two interval functions are both defined and within guard
- * (gap `max(lo) − min(hi) < g`, i.e. `A.lo − B.hi < g` and `B.lo − A.hi < g`;
- * the other two terms are minus a width, never ≥ g ≥ 0). `accept` filters
- * piece pairs (used for "different Nyquist zones"). Result unsorted.
+ * Where two interval functions are both defined and within guard: the gap
+ * `max(A.lo, B.lo) − min(A.hi, B.hi)` is the largest of the four linear
+ * terms `A.lo − B.hi`, `B.lo − A.hi`, `A.lo − A.hi`, `B.lo − B.hi`, so
+ * `gap < g` holds where all four are below g (the last two are minus a
+ * width: they matter for a point-like spur band against a zero guard).
+ * `accept` filters piece pairs (used for "different Nyquist zones").
+ * Result unsorted.
  */
 export function withinGuardSet<P extends Piece>(
   A: readonly P[],
@@ -225,8 +236,10 @@ export function withinGuardSet<P extends Piece>(
     if (to > from && (!accept || accept(p, q))) {
       const s1 = below(sub(p.lo, q.hi), g, from, to);
       const s2 = below(sub(q.lo, p.hi), g, from, to);
-      const lo = Math.max(s1[0], s2[0]);
-      const hi = Math.min(s1[1], s2[1]);
+      const s3 = below(sub(p.lo, p.hi), g, from, to);
+      const s4 = below(sub(q.lo, q.hi), g, from, to);
+      const lo = Math.max(s1[0], s2[0], s3[0], s4[0]);
+      const hi = Math.min(s1[1], s2[1], s3[1], s4[1]);
       if (hi > lo) out.push([lo, hi]);
     }
     if (p.to <= q.to) i++;
