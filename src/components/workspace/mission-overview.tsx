@@ -1,0 +1,212 @@
+"use client";
+
+import Link from "next/link";
+import { useCallback, useMemo, useState } from "react";
+import { api } from "@/queries/api";
+import type { Collection } from "@/queries/keys";
+import {
+  useCollectionQuery,
+  useMissionQuery,
+  useResultQuery,
+  useRevisionsQuery,
+  useSettingsQuery,
+} from "@/queries/missions";
+import type { Channel } from "@/queries/types";
+import { Drawer } from "./drawer";
+import { EntityEditor, KIND_LABEL, SettingsEditor } from "./entity-editor";
+import { countBySeverity } from "./findings";
+import { FindingsPanel } from "./findings-panel";
+import { ChannelsTable } from "./channels-table";
+import { ChainItem, DetectorItem, HardwareColumn, LaserItem, ResonatorItem } from "./hardware";
+import { formatAge, formatNumber, plural } from "./format";
+import { buttonClass, Card, ErrorNote, SENSITIVITY_TEXT, Spinner } from "./ui";
+
+type Editing = { kind: Collection; row: (Record<string, unknown> & { id: string; version: number }) | null } | { kind: "settings" } | null;
+
+export function MissionOverview({ missionId, canEdit }: { missionId: string; canEdit: boolean }) {
+  const mission = useMissionQuery(missionId);
+  const lasers = useCollectionQuery(missionId, "lasers");
+  const resonators = useCollectionQuery(missionId, "resonators");
+  const detectors = useCollectionQuery(missionId, "detectors");
+  const chains = useCollectionQuery(missionId, "chains");
+  const channels = useCollectionQuery(missionId, "channels");
+  const settings = useSettingsQuery(missionId);
+  const result = useResultQuery(missionId);
+  const revisions = useRevisionsQuery(missionId);
+  const [editing, setEditing] = useState<Editing>(null);
+  const [focus, setFocus] = useState<string | null>(null);
+  const close = useCallback(() => setEditing(null), []);
+
+  const refs = {
+    lasers: lasers.data ?? [],
+    resonators: resonators.data ?? [],
+    detectors: detectors.data ?? [],
+    chains: chains.data ?? [],
+  };
+  const findings = result.data?.findings ?? [];
+  const counts = countBySeverity(findings);
+  const latest = revisions.data?.reduce((m, r) => Math.max(m, r.number), 0) ?? null;
+  const channelNames = useMemo(() => new Map((channels.data ?? []).map((c) => [c.key, c.name])), [channels.data]);
+  const keyOf = (rows: { id: string; key: string }[], id: string) => rows.find((r) => r.id === id)?.key ?? "?";
+  const edit = (kind: Collection) => (row: { id: string; version: number }) =>
+    canEdit ? () => setEditing({ kind, row: row as unknown as Record<string, unknown> & { id: string; version: number } }) : undefined;
+
+  if (mission.error) return <ErrorNote title="This mission could not be loaded.">{mission.error.message}</ErrorNote>;
+  const busy = [lasers, resonators, detectors, chains, channels, result].some((q) => q.isFetching);
+
+  const addButton = (kind: Collection) =>
+    canEdit ? (
+      <button type="button" className={buttonClass.quiet} onClick={() => setEditing({ kind, row: null })}>
+        + Add {KIND_LABEL[kind]}
+      </button>
+    ) : null;
+
+  return (
+    <div className="space-y-5">
+      <header className="flex flex-wrap items-start justify-between gap-4">
+        <div>
+          <p className="text-xs text-ink-soft">
+            <Link href="/missions" className="hover:underline">
+              Missions
+            </Link>{" "}
+            /
+          </p>
+          <h1 className="text-2xl font-semibold tracking-tight">{mission.data?.name ?? "…"}</h1>
+          {mission.data?.description ? <p className="mt-0.5 max-w-2xl text-sm text-ink-soft">{mission.data.description}</p> : null}
+          <p className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm" data-testid="revision-line">
+            <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs font-medium uppercase tracking-wide">{mission.data?.status ?? "draft"}</span>
+            <span>
+              Revision <span className="font-semibold tabular-nums" data-testid="revision-number">{latest ?? "–"}</span>
+            </span>
+            <span className="text-sev-error">{plural(counts.error, "error")}</span>
+            <span className="text-sev-warning">{plural(counts.warning, "warning")}</span>
+            <span className="text-sev-info">{counts.info} info</span>
+            <span className="text-ink-soft">changed {formatAge(mission.data?.updatedAt)}</span>
+            {busy ? <Spinner label="Re-checking…" /> : null}
+          </p>
+        </div>
+        <nav className="flex flex-wrap gap-2" aria-label="Export">
+          <a className={buttonClass.secondary} href={api.collection(missionId, "plan")} download="plan.json">
+            Plan JSON
+          </a>
+          <a className={buttonClass.secondary} href={api.collection(missionId, "channels.csv")} download="channels.csv">
+            Channels CSV
+          </a>
+          <Link className={buttonClass.secondary} href={`/missions/${missionId}/report`}>
+            Printable report
+          </Link>
+          {canEdit ? (
+            <Link className={buttonClass.primary} href={`/missions/${missionId}/uploads`}>
+              Upload data
+            </Link>
+          ) : null}
+        </nav>
+      </header>
+      {!canEdit ? (
+        <p className="rounded bg-ink-faint px-3 py-1.5 text-sm text-ink-soft" data-testid="read-only-note">
+          You can read this mission; your role does not allow changes.
+        </p>
+      ) : null}
+
+      <div className="grid gap-4 lg:grid-cols-3">
+        <Card title="Laser pairs" actions={addButton("lasers")}>
+          <HardwareColumn items={refs.lasers} emptyText="No laser pair yet." render={(l) => <LaserItem laser={l} onEdit={edit("lasers")(l)} />} />
+        </Card>
+        <Card title="Resonators" actions={addButton("resonators")}>
+          <HardwareColumn
+            items={refs.resonators}
+            emptyText="No resonator yet."
+            render={(r) => {
+              const chain = refs.chains.find((c) => c.resonatorId === r.id);
+              const lw = chain ? result.data?.chains.find((c) => c.id === chain.key)?.linewidthMHz : null;
+              return <ResonatorItem resonator={r} linewidthMHz={lw} onEdit={edit("resonators")(r)} />;
+            }}
+          />
+        </Card>
+        <Card title="Detectors" actions={addButton("detectors")}>
+          <HardwareColumn items={refs.detectors} emptyText="No detector yet." render={(d) => <DetectorItem detector={d} onEdit={edit("detectors")(d)} />} />
+        </Card>
+      </div>
+
+      <Card title="Receiver chains" actions={addButton("chains")}>
+        <div className="grid gap-2 md:grid-cols-2 xl:grid-cols-3">
+          {refs.chains.length === 0 ? <p className="text-sm text-ink-soft">No chain yet: a chain joins one laser pair, one resonator mode and one detector.</p> : null}
+          {refs.chains.map((c) => (
+            <ChainItem
+              key={c.id}
+              chain={c}
+              result={result.data?.chains.find((r) => r.id === c.key)}
+              keys={{ laser: keyOf(refs.lasers, c.laserId), resonator: keyOf(refs.resonators, c.resonatorId), detector: keyOf(refs.detectors, c.detectorId) }}
+              onEdit={edit("chains")(c)}
+            />
+          ))}
+        </div>
+      </Card>
+
+      <Card title="Channels" actions={addButton("channels")}>
+        <ChannelsTable
+          channels={channels.data ?? []}
+          chains={refs.chains}
+          result={result.data}
+          canEdit={canEdit}
+          onEdit={(c: Channel) => setEditing({ kind: "channels", row: c as unknown as Record<string, unknown> & { id: string; version: number } })}
+          onSelect={(key) => {
+            setFocus(key);
+            document.getElementById(`findings-${key}`)?.scrollIntoView({ behavior: "smooth", block: "center" });
+          }}
+        />
+        <p className="mt-2 text-xs text-ink-soft">{SENSITIVITY_TEXT}</p>
+      </Card>
+
+      <div className="grid gap-4 lg:grid-cols-3">
+        <Card title={`Findings${latest ? ` · revision ${latest}` : ""}`} className="lg:col-span-2">
+          {result.isLoading ? <Spinner label="Loading findings…" /> : <FindingsPanel findings={findings} channelNames={channelNames} focus={focus} />}
+        </Card>
+        <Card
+          title="Check settings"
+          actions={
+            canEdit && settings.data ? (
+              <button type="button" className={buttonClass.quiet} onClick={() => setEditing({ kind: "settings" })}>
+                Edit
+              </button>
+            ) : null
+          }
+        >
+          {settings.data ? (
+            <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
+              <dt className="text-ink-soft">Guard band</dt>
+              <dd className="tabular-nums">{formatNumber(settings.data.guardMHz, 1)} MHz</dd>
+              <dt className="text-ink-soft">Image rejection</dt>
+              <dd className="tabular-nums">{formatNumber(settings.data.imageRejectionDB, 1)} dB</dd>
+              <dt className="text-ink-soft">Spur order</dt>
+              <dd className="tabular-nums">up to {settings.data.spurMaxOrder}</dd>
+              <dt className="text-ink-soft">Lock replica limit</dt>
+              <dd className="tabular-nums">{formatNumber(settings.data.replicaLimitDB, 1)} dB</dd>
+            </dl>
+          ) : settings.error ? (
+            <p className="text-sm text-sev-error">{settings.error.message}</p>
+          ) : (
+            <Spinner label="Loading…" />
+          )}
+        </Card>
+      </div>
+
+      {editing && canEdit ? (
+        editing.kind === "settings" ? (
+          settings.data ? (
+            <Drawer title="Check settings" onClose={close}>
+              <SettingsEditor missionId={missionId} settings={settings.data} onClose={close} />
+            </Drawer>
+          ) : null
+        ) : (
+          <Drawer
+            title={editing.row ? `Edit ${KIND_LABEL[editing.kind]} ${String(editing.row.key)}` : `New ${KIND_LABEL[editing.kind]}`}
+            onClose={close}
+          >
+            <EntityEditor missionId={missionId} kind={editing.kind} row={editing.row} refs={refs} onClose={close} />
+          </Drawer>
+        )
+      ) : null}
+    </div>
+  );
+}
