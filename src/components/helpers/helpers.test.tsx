@@ -1,0 +1,84 @@
+import { renderToString } from "react-dom/server";
+import { describe, expect, it } from "vitest";
+import { DriftBudget } from "./DriftBudget";
+import { OpticalFrequency } from "./OpticalFrequency";
+import { ReceiverNoise } from "./ReceiverNoise";
+import { ResonatorSizing } from "./ResonatorSizing";
+import { WavelengthGrid } from "./WavelengthGrid";
+
+/** Text of the element carrying data-testid, tags stripped (server render, no DOM needed). */
+function byTestId(html: string, id: string): string {
+  const m = new RegExp(`data-testid="${id}"[^>]*>(.*?)</span></span>|data-testid="${id}"[^>]*>(.*?)</span>`).exec(html);
+  const inner = m?.[1] ?? m?.[2];
+  if (inner === undefined) throw new Error(`no element with data-testid=${id}`);
+  return inner.replace(/<[^>]+>/g, "").replace(/<!-- -->/g, "").replace(/&#x27;/g, "'");
+}
+
+describe("helper components (first render, server-side)", () => {
+  it("WavelengthGrid shows λ and the G.694.1 channels of the initial frequency", () => {
+    const html = renderToString(<WavelengthGrid initialTHz={193.1} onApply={() => {}} />);
+    // ITU-T G.694.1 anchor 193.1 THz ↔ 1552.524 nm
+    expect(byTestId(html, "wg-nm")).toMatch(/^1552\.5244/);
+    expect(html).toContain("N = 0");
+    expect(html).toContain("flex 6.25 GHz");
+    expect(html).toContain("Working");
+    expect(html).toContain("ITU-T G.694.1");
+    expect(html).toContain(">Apply<");
+  });
+
+  it("ResonatorSizing sizes a 183.31 GHz FSR disc and shows the thermal shifts", () => {
+    const html = renderToString(<ResonatorSizing initialFsrGHz={183.31} initialCarrierTHz={193.4} initialTemperatureC={25} initialLoadedQ={1e8} />);
+    // derived (domain reference §2.1): R ≈ 119.3 µm for 183.31 GHz
+    expect(Number(byTestId(html, "rs-radius").replace(/[^\d.]/g, ""))).toBeCloseTo(119.27, 1);
+    // derived (§2.2): 1.934 MHz at Q 1e8, 193.4 THz
+    expect(byTestId(html, "rs-linewidth")).toMatch(/^1\.934/);
+    // derived (§2.4): −6.2 GHz/K and −6.4 MHz/K
+    expect(byTestId(html, "rs-mode-shift")).toMatch(/^\u22126\.2/);
+    expect(byTestId(html, "rs-fsr-shift")).toMatch(/^\u22126\.38/);
+    expect(html).not.toContain(">Apply FSR and Q<"); // no onApply, no button
+  });
+
+  it("ResonatorSizing uses a measured group index when given", () => {
+    const html = renderToString(<ResonatorSizing initialRadiusUm={1000} initialMeasuredGroupIndex={2.1824} onApply={() => {}} />);
+    // derived (§2.1): R = 1 mm, n_g = 2.1824 → 21.86 GHz
+    expect(byTestId(html, "rs-fsr")).toMatch(/^21\.86/);
+    expect(html).toContain(">Apply FSR and Q<");
+  });
+
+  it("DriftBudget adds the terms and rounds the applied value up", () => {
+    const html = renderToString(
+      <DriftBudget initialLaser2MHz={10} initialResonatorMilliK={1} initialLockOffsetMHz={0.5} initialStepMHz={10} initialModeShiftGHzPerK={-6.2} onApply={() => {}} />,
+    );
+    // worked by hand: 10 + 6.2 + 0.5 + 5 = 21.7 MHz
+    expect(byTestId(html, "db-drift")).toMatch(/21\.700/);
+    expect(html).toContain(">Apply drift<");
+  });
+
+  it("ReceiverNoise is marked as a design estimate and shows the quantum limit", () => {
+    const html = renderToString(
+      <ReceiverNoise initialRfGHz={183.31} initialPhotonEfficiency={0.01} initialOpticalEfficiency={0.5} initialFrontEnd={null} />,
+    );
+    expect(html).toContain("Design estimate");
+    // exact SI constants: h·f/k = 8.797 K at 183.31 GHz
+    expect(byTestId(html, "rn-quantum")).toMatch(/^8\.797/);
+    // 8.7975 K / 0.005 = 1759.5 K
+    expect(byTestId(html, "rn-receiver")).toMatch(/^1759\.5/);
+  });
+
+  it("ReceiverNoise names the field when the initial input is bad, and shows no result", () => {
+    const html = renderToString(<ReceiverNoise initialRfGHz={-1} onApply={() => {}} />);
+    expect(html).toContain("RF frequency must be greater than 0");
+    expect(html).toContain('aria-invalid="true"');
+    expect(byTestId(html, "rn-receiver")).toBe("—K");
+    expect(html).toMatch(/<button[^>]*disabled=""[^>]*>Apply receiver noise</);
+  });
+
+  it("OpticalFrequency shows THz, nm and the nearest 50 GHz channel", () => {
+    const html = renderToString(<OpticalFrequency thz={193.42} />).replace(/<!-- -->/g, "");
+    expect(html).toContain("193.4200 THz");
+    expect(html).toContain("1549.956 nm"); // 299792.458 / 193.42 = 1549.9558 nm
+    expect(html).toContain("N = 6");
+    expect(html).toContain("+20.0 GHz");
+    expect(renderToString(<OpticalFrequency thz={Number.NaN} />)).toContain("—");
+  });
+});
