@@ -25,16 +25,18 @@ export const PLAN_LIMITS = {
 } as const;
 
 // JSON numbers only: zod 4's z.number() already refuses NaN and ±Infinity
-// (an overflowing literal such as 1e999 parses to Infinity).
-const num = () => z.number();
-const positive = () => z.number().gt(0);
-const nonNegative = () => z.number().min(0);
+// (an overflowing literal such as 1e999 parses to Infinity). A negative zero
+// becomes 0, so the parsed plan survives a JSON round trip unchanged.
+const finite = () => z.number().overwrite((v) => (v === 0 ? 0 : v));
+const num = () => finite();
+const positive = () => finite().gt(0);
+const nonNegative = () => finite().min(0);
 const id = () => z.string().min(1);
 
 const settingsSchema = z.strictObject({
   guardMHz: nonNegative(),
   imageRejectionDB: num(),
-  spurMaxOrder: z.number().int().min(2).max(9),
+  spurMaxOrder: finite().int().min(2).max(9),
   replicaLimitDB: num(),
 });
 
@@ -45,8 +47,8 @@ const reachSchema = z.strictObject({
 
 const lockSchema = z.strictObject({
   modulationMHz: positive(),
-  modulationIndex: z.number().gt(0).lt(2.4),
-  orders: z.number().int().min(1),
+  modulationIndex: finite().gt(0).lt(2.4),
+  orders: finite().int().min(1),
 });
 
 const laserSchema = z.strictObject({
@@ -84,11 +86,11 @@ const chainSchema = z.strictObject({
   laser: id(),
   resonator: id(),
   detector: id(),
-  mode: z.number().int().min(1),
+  mode: finite().int().min(1),
   sideband: z.enum(["upper", "lower"]),
   loOffsetGHz: num(),
   rfInput: rfInputSchema,
-  tapFraction: z.number().min(0).lt(1),
+  tapFraction: finite().min(0).lt(1),
   pathLossDB: nonNegative(),
   carrierRejectionDB: nonNegative().default(0),
   sharedIf: z.boolean().default(false),
