@@ -7,6 +7,7 @@ import { db } from "@db/client";
 import * as schema from "@db/schema";
 import { ac, roles } from "@/lib/permissions";
 import { serverEnv } from "@/server/env";
+import { listTeamsOf } from "./queries";
 import { invitationMail, resetPasswordMail, sendMail, verificationMail } from "@/server/mail";
 
 /**
@@ -54,6 +55,18 @@ export const auth = betterAuth({
       "/sign-up/email": { window: 60, max: 10 },
       "/request-password-reset": { window: 60, max: 5 },
       "/send-verification-email": { window: 60, max: 5 },
+    },
+  },
+  databaseHooks: {
+    session: {
+      create: {
+        // A new session starts in the person's first team, so a returning
+        // member lands in a team rather than on the team picker.
+        before: async (session) => {
+          const teams = await listTeamsOf(session.userId);
+          return { data: { ...session, activeOrganizationId: teams[0]?.id ?? null } };
+        },
+      },
     },
   },
   plugins: [
