@@ -115,7 +115,7 @@ describe("parsePlan on mutations of valid plans", () => {
   it("a duplicated id is always reported", () => {
     fc.assert(
       fc.property(validPlanArb, fc.constantFrom("lasers", "resonators", "detectors", "chains", "channels"), (doc, list) => {
-        const copy = structuredClone(doc) as Record<string, { id: string }[]>;
+        const copy = structuredClone(doc) as unknown as Record<string, { id: string }[]>;
         const entries = copy[list]!;
         fc.pre(entries.length > 0);
         entries.push(structuredClone(entries[0]!));
