@@ -1,0 +1,9 @@
+import type { Metadata } from "next";
+import { MissionReport } from "@/components/workspace/report";
+
+export const metadata: Metadata = { title: "Plan report" };
+
+export default async function MissionReportPage({ params }: { params: Promise<{ missionId: string }> }) {
+  const { missionId } = await params;
+  return <MissionReport missionId={missionId} />;
+}
