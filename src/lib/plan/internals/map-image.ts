@@ -1,54 +1,32 @@
+import { combDistanceAtLevel, combIntegral as engineCombIntegral, combResponse } from "./comb";
 import type { MapChannel, MapModel } from "./map-model";
 
 /**
  * The image rule for the feasibility map (plan-format.md, "Derived
- * quantities (per channel)", Image, and "Feasibility map and place").
- *
- * The comb `C(x) = Σₙ 1/(1 + (2(x − n·fsr)/δ)²) = π·a·sinh(2πa)/(cosh(2πa) − cos(2πx/fsr))`,
- * `a = δ/(2·fsr)`, has the antiderivative
- * `(δ/2)·[atan(coth(πa)·tan(πx/fsr − πn)) + πn]`, n = round(x/fsr)
- * (from the standard integral ∫dθ/(cosh u − cos θ) = (2/sinh u)·atan(coth(u/2)·tan(θ/2)),
- * as tabulated in Gradshteyn & Ryzhik, Table of Integrals, Series and
- * Products, §2.55 — section number from memory; one period adds π·δ/2, the
- * area of one Lorentzian).
+ * quantities (per channel)", Image, and "Feasibility map and place"). The
+ * comb integrals and the comb's inverse are the engine's closed forms
+ * (internals/comb.ts), so the map and the per-offset findings use the
+ * same numbers.
  */
 
 /** Per-chain constants of the comb. */
 export interface Comb {
   linewidth: number;
   fsr: number;
-  /** `coth(πa)`. */
-  k: number;
 }
 
 export function makeComb(linewidth: number, fsr: number): Comb {
-  const a = linewidth / (2 * fsr);
-  const t = Math.tanh(Math.PI * a);
-  return { linewidth, fsr, k: 1 / t };
+  return { linewidth, fsr };
 }
 
-function phase(c: Comb, x: number): { u: number; n: number } {
-  const n = Math.round(x / c.fsr);
-  const phi = (Math.PI * x) / c.fsr - Math.PI * n;
-  return { u: c.k * Math.tan(phi), n };
-}
-
-/** `∫_lo^hi C(x) dx` (lo ≤ hi), closed form, without cancellation far from a mode. */
+/** `∫_lo^hi C(x) dx` (0 when hi ≤ lo). */
 export function combIntegral(c: Comb, lo: number, hi: number): number {
-  if (!(hi > lo)) return 0;
-  const p = phase(c, hi);
-  const q = phase(c, lo);
-  let d: number;
-  if (p.n === q.n && p.u * q.u > -1) d = Math.atan((p.u - q.u) / (1 + p.u * q.u));
-  else d = Math.atan(p.u) - Math.atan(q.u) + Math.PI * (p.n - q.n);
-  return Math.max(0, (c.linewidth / 2) * d);
+  return engineCombIntegral(lo, hi, { fsr: c.fsr, delta: c.linewidth });
 }
 
 /** `C(x)` itself (used to bound the image response). */
 export function combValue(c: Comb, x: number): number {
-  const a = c.linewidth / (2 * c.fsr);
-  const den = Math.cosh(2 * Math.PI * a) - Math.cos((2 * Math.PI * x) / c.fsr);
-  return (Math.PI * a * Math.sinh(2 * Math.PI * a)) / den;
+  return combResponse(x, { fsr: c.fsr, delta: c.linewidth });
 }
 
 /**
@@ -91,13 +69,9 @@ export function imageFires(c: Comb, m: MapModel, ch: MapChannel, L: number): boo
  * everywhere and −1 when it never does.
  */
 export function combRadius(c: Comb, level: number): number {
-  const a = c.linewidth / (2 * c.fsr);
-  const u = 2 * Math.PI * a;
-  if (!(level > 0) || u > 40) return c.fsr / 2;
-  const rhs = Math.cosh(u) - (Math.PI * a * Math.sinh(u)) / level;
-  if (rhs <= -1) return c.fsr / 2;
-  if (rhs >= 1) return -1;
-  return (c.fsr / (2 * Math.PI)) * Math.acos(rhs);
+  const r = combDistanceAtLevel(level, { fsr: c.fsr, delta: c.linewidth });
+  if (r === 0) return -1;
+  return Math.min(r, c.fsr / 2);
 }
 
 /** Bisection bracket width for an image-rule map edge (GHz). */

@@ -1,4 +1,5 @@
 import type { Plan } from "@/schemas/plan";
+import { lorentzianIntegral } from "./lorentz";
 
 /**
  * The error codes whose rule depends on the LO offset `L`, in rules-table
@@ -84,25 +85,6 @@ export interface MapModel {
   channels: MapChannel[];
 }
 
-/** `∫_lo^hi M_n(x) dx` for the Lorentzian centred at `centre` (closed form, arctangent difference). */
-export function lorentzIntegral(lo: number, hi: number, centre: number, linewidth: number): number {
-  const u = (2 * (hi - centre)) / linewidth;
-  const v = (2 * (lo - centre)) / linewidth;
-  return (linewidth / 2) * atanDifference(u, v);
-}
-
-/**
- * `atan(u) − atan(v)` without cancellation when u and v are large and of
- * the same sign: `atan((u − v)/(1 + u·v))` (valid for u·v > −1).
- */
-export function atanDifference(u: number, v: number): number {
-  if (u * v > -1) {
-    if (!Number.isFinite(u) || !Number.isFinite(v)) return Math.atan(u) - Math.atan(v);
-    return Math.atan((u - v) / (1 + u * v));
-  }
-  return Math.atan(u) - Math.atan(v);
-}
-
 /** Merge intervals that overlap or touch (plan-format.md: reach intervals). */
 export function mergeTouching(list: readonly (readonly [number, number])[]): [number, number][] {
   const sorted = list.map((r) => [r[0], r[1]] as [number, number]).sort((p, q) => p[0] - q[0] || p[1] - q[1]);
@@ -143,7 +125,7 @@ export function buildMapModel(plan: Plan, chainId: string): MapModel {
       })
       .sort((p, q) => p[0] - q[0]);
     let wantedIntegral = 0;
-    for (const b of bands) wantedIntegral += lorentzIntegral(b[0], b[1], wantedCentre, linewidth);
+    for (const b of bands) wantedIntegral += lorentzianIntegral(b[0], b[1], wantedCentre, linewidth);
     channels.push({ id: ch.id, bands, widthGHz: B, ssb: ch.dsbOffsetGHz === null, wantedIntegral });
   }
   return {
