@@ -177,5 +177,5 @@ describe("checkChainAtOffset on any valid plan", () => {
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000);
 });

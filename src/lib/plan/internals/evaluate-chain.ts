@@ -71,16 +71,21 @@ const SEVERITY: Record<FindingCode, Severity> = {
   "in-protected-band": "info",
 };
 
-/** JSON-safe data: −0 becomes 0 and non-finite numbers (only reachable with absurd inputs) become null. */
-function jsonSafe(v: JsonValue): JsonValue {
-  if (typeof v === "number") return Number.isFinite(v) ? v + 0 : null;
-  if (Array.isArray(v)) return v.map(jsonSafe);
-  if (v !== null && typeof v === "object") {
-    const out: { [k: string]: JsonValue } = {};
-    for (const [k, x] of Object.entries(v)) out[k] = jsonSafe(x);
-    return out;
+/**
+ * Make freshly built finding data JSON-safe in place: −0 becomes 0 and
+ * non-finite numbers (only reachable with absurd inputs) become null.
+ */
+function jsonSafeInPlace(v: { [k: string]: JsonValue } | JsonValue[]): void {
+  const fix = (x: JsonValue): JsonValue => {
+    if (typeof x === "number") return Number.isFinite(x) ? (x === 0 ? 0 : x) : null;
+    if (x !== null && typeof x === "object") jsonSafeInPlace(x);
+    return x;
+  };
+  if (Array.isArray(v)) {
+    for (let i = 0; i < v.length; i++) v[i] = fix(v[i] as JsonValue);
+  } else {
+    for (const k in v) v[k] = fix(v[k] as JsonValue);
   }
-  return v;
 }
 
 /** How far outside `outer` the interval `inner` reaches (GHz, ≥ 0). */
@@ -113,8 +118,9 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
       chain: chainId,
       channel: channelIndex === null ? null : (ctx.channels[channelIndex] as ChannelContext).channel.id,
       message,
-      data: jsonSafe(data) as { [k: string]: JsonValue },
+      data,
     };
+    jsonSafeInPlace(data);
     if (channelIndex === null) chainFindings.push(f);
     else (perChannel[channelIndex] as Finding[]).push(f);
   };
@@ -312,34 +318,37 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
   const bands: SpurBand[] = mapOnly ? errorSpursAt(ctx, L) : [...errorSpursAt(ctx, L), ...infoSpurs(ctx, slots)];
   const spurs: Spur[] = [];
   const errorHits: { band: SpurBand; hit: Hit }[] = [];
-  const infoHits = new Map<string, { band: SpurBand; hit: Hit }[]>(); // key `${family}:${victim}`
+  // info hits per victim: [harmonic, intermod]
+  const infoHits: { band: SpurBand; hit: Hit }[][][] = channels.map(() => [[], []]);
   for (const band of bands) {
     const hits: Hit[] = [];
+    const hitIds: string[] = [];
     const foldedSpur = fs !== null ? foldInterval(band.band, fs) : null;
-    channels.forEach((c, v) => {
-      if (!c.geo) return;
+    for (let v = 0; v < channels.length; v++) {
+      const c = channels[v] as ChannelAtOffset;
+      if (!c.geo) continue;
       const direct = gap(band.band, c.geo.occupied);
       const fo = foldedOcc[v];
       const foldedGap = foldedSpur && fo ? gap(foldedSpur, fo) : null;
       const directHit = direct < guard - TOL;
       const foldedHit = foldedGap !== null && foldedGap < guard - TOL;
-      if (directHit || foldedHit) hits.push({ victim: v, gapGHz: direct, folded: !directHit, foldedGapGHz: foldedGap });
-    });
+      if (directHit || foldedHit) {
+        hits.push({ victim: v, gapGHz: direct, folded: !directHit, foldedGapGHz: foldedGap });
+        hitIds.push(c.ch.channel.id);
+      }
+    }
     spurs.push({
       chain: chainId,
       family: band.family,
       order: band.order,
       bandGHz: pair(band.band),
       source: band.source,
-      hits: hits.map((h) => (channels[h.victim] as ChannelAtOffset).ch.channel.id),
+      hits: hitIds,
     });
     for (const hit of hits) {
       if (band.family === "harmonic" || band.family === "intermod") {
         if (band.order > 3) continue;
-        const key = `${band.family}:${hit.victim}`;
-        const list = infoHits.get(key) ?? [];
-        list.push({ band, hit });
-        infoHits.set(key, list);
+        (infoHits[hit.victim] as { band: SpurBand; hit: Hit }[][])[band.family === "harmonic" ? 0 : 1]!.push({ band, hit });
       } else {
         errorHits.push({ band, hit });
       }
@@ -370,8 +379,8 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
   }
   for (const family of ["harmonic", "intermod"] as const) {
     channels.forEach((c, v) => {
-      const list = infoHits.get(`${family}:${v}`);
-      if (!list || !c.geo) return;
+      const list = infoHits[v]?.[family === "harmonic" ? 0 : 1];
+      if (!list || list.length === 0 || !c.geo) return;
       const occ = c.geo.occupied;
       const shown = list.slice(0, 4).map(({ band, hit }) => `${band.source} (${fBand(band.band)}, ${closeness(hit.folded ? (hit.foldedGapGHz as number) : hit.gapGHz)}${hit.folded ? " after folding" : ""})`);
       add(

@@ -1,10 +1,13 @@
 import type { Interval } from "./intervals";
 
 /** Numbers for messages: plain decimals, no trailing zeros, no float dust. */
+const POW10 = [1, 10, 100, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9];
 function trim(v: number, digits: number): string {
   if (!Number.isFinite(v)) return String(v);
-  const s = Number(v.toFixed(digits)).toString();
-  return s === "-0" ? "0" : s;
+  const p = POW10[digits] ?? 10 ** digits;
+  // an integer divided by a power of ten is the double nearest that decimal, so String() shows it exactly
+  const r = Math.abs(v) < 1e15 / p ? Math.round(v * p) / p : v;
+  return r === 0 ? "0" : String(r);
 }
 
 /** A frequency in GHz to 1 kHz. */

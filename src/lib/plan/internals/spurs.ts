@@ -1,14 +1,6 @@
 import type { SpurFamily } from "../types";
 import type { ChainContext } from "./chain-context";
-import {
-  type Interval,
-  absInterval,
-  addScaled,
-  compareIntervals,
-  intersect,
-  subScaled,
-  widen,
-} from "./intervals";
+import { type Interval, absInterval, compareIntervals, intersect, widen } from "./intervals";
 import type { SlotGeometry } from "./slot";
 
 /**
@@ -33,6 +25,29 @@ export const MAX_LOCK_ORDER_ENUMERATED = 10_000;
 function keep(family: SpurFamily, order: number, raw: Interval, detector: Interval, source: string, out: SpurBand[]): void {
   const band = intersect(absInterval(raw), detector);
   if (band) out.push({ family, order, band, source });
+}
+
+/**
+ * `keep` for a raw band `[lo, hi]` given as numbers; the source text is
+ * only built for kept bands.
+ */
+function keepRaw(family: SpurFamily, order: number, lo: number, hi: number, det: Interval, source: () => string, out: SpurBand[]): void {
+  // |[lo, hi]|
+  let alo: number;
+  let ahi: number;
+  if (lo >= 0) {
+    alo = lo;
+    ahi = hi;
+  } else if (hi <= 0) {
+    alo = -hi;
+    ahi = -lo;
+  } else {
+    alo = 0;
+    ahi = Math.max(-lo, hi);
+  }
+  const blo = Math.max(alo, det[0]);
+  const bhi = Math.min(ahi, det[1]);
+  if (blo <= bhi) out.push({ family, order, band: [blo, bhi], source: source() });
 }
 
 function byBand(a: SpurBand, b: SpurBand): number {
@@ -86,7 +101,9 @@ export function infoSpurs(ctx: ChainContext, slots: readonly (SlotGeometry | nul
   });
   const harmonic: SpurBand[] = [];
   for (const p of present) {
-    for (let n = 2; n <= N; n++) keep("harmonic", n, widen([n * p.slot[0], n * p.slot[1]], n * D), det, `${n}·${p.id}`, harmonic);
+    for (let n = 2; n <= N; n++) {
+      keepRaw("harmonic", n, n * p.slot[0] - n * D, n * p.slot[1] + n * D, det, () => `${n}·${p.id}`, harmonic);
+    }
   }
   harmonic.sort(byBand);
   const intermod: SpurBand[] = [];
@@ -94,11 +111,14 @@ export function infoSpurs(ctx: ChainContext, slots: readonly (SlotGeometry | nul
     for (let j = i + 1; j < present.length; j++) {
       const pi = present[i] as (typeof present)[number];
       const pj = present[j] as (typeof present)[number];
+      const [li, hi] = pi.slot;
+      const [lj, hj] = pj.slot;
       for (let a = 1; a < N; a++) {
         for (let b = 1; a + b <= N; b++) {
           const w = (a + b) * D;
-          keep("intermod", a + b, widen(addScaled(a, pi.slot, b, pj.slot), w), det, `${a}·${pi.id}+${b}·${pj.id}`, intermod);
-          keep("intermod", a + b, widen(subScaled(a, pi.slot, b, pj.slot), w), det, `${a}·${pi.id}−${b}·${pj.id}`, intermod);
+          // a·[li,hi] + b·[lj,hj] and a·[li,hi] − b·[lj,hj] (plan-format.md interval arithmetic), widened by (a+b)·D
+          keepRaw("intermod", a + b, a * li + b * lj - w, a * hi + b * hj + w, det, () => `${a}·${pi.id}+${b}·${pj.id}`, intermod);
+          keepRaw("intermod", a + b, a * li - b * hj - w, a * hi - b * lj + w, det, () => `${a}·${pi.id}−${b}·${pj.id}`, intermod);
         }
       }
     }
