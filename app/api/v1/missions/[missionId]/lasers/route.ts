@@ -1,0 +1,5 @@
+import { collectionRoutes } from "@/server/workspace/entity-routes";
+
+const routes = collectionRoutes("lasers");
+export const GET = routes.GET;
+export const POST = routes.POST;

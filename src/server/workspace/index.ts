@@ -1,0 +1,8 @@
+export * from "./queries";
+export * from "./missions";
+export * from "./entities";
+export * from "./plan-io";
+export * from "./uploads";
+export { saveAndCheck, type ActivityNote, type RevisionInfo } from "./save-and-check";
+export { assemblePlan } from "./assemble";
+export { CAN, guarded, json, readJsonBody } from "./route";

@@ -1,0 +1,155 @@
+import "server-only";
+import { eq } from "drizzle-orm";
+import { db } from "@db/client";
+import { chains, channels, detectors, lasers, missions, planSettings, resonators } from "@db/schema";
+import { parsePlan, type Plan } from "@/schemas/plan";
+import { HttpError } from "@/server/http";
+import type { Actor } from "@/server/auth/actor";
+import { assemblePlan } from "./assemble";
+import { getMissionRow } from "./queries";
+import { saveAndCheck, type RevisionInfo } from "./save-and-check";
+import { inTransaction, lockMission, type Tx } from "./tx";
+
+/** The `heterolane.plan/1` document of the mission's current draft. */
+export async function getPlanDocument(actor: Actor, missionId: string) {
+  await getMissionRow(actor, missionId);
+  return assemblePlan(db, missionId);
+}
+
+/**
+ * Replaces the draft of a mission with a plan document (validated first:
+ * an invalid document answers 400 `invalid-plan` with every issue and
+ * changes nothing) and stores the result as a new revision. The plan's
+ * name becomes the mission's name, so exporting gives the same document.
+ */
+export async function importPlanDocument(actor: Actor, missionId: string, body: unknown): Promise<{ revision: RevisionInfo }> {
+  const parsed = parsePlan(body);
+  if (!parsed.ok)
+    throw new HttpError(400, "invalid-plan", "The plan document is not valid; nothing was imported.", parsed.issues);
+  return inTransaction(async (tx) => {
+    await lockMission(tx, actor, missionId);
+    await replaceDraft(tx, missionId, parsed.plan);
+    const p = parsed.plan;
+    const revision = await saveAndCheck(tx, missionId, actor, {
+      action: "import",
+      entity: "plan",
+      summary: `Imported plan "${p.name}": ${p.lasers.length} lasers, ${p.resonators.length} resonators, ${p.detectors.length} detectors, ${p.chains.length} chains, ${p.channels.length} channels.`,
+    });
+    return { revision };
+  });
+}
+
+/** Deletes the draft rows of a mission and inserts those of `plan` (validated), in document order. */
+export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promise<void> {
+  await tx.delete(channels).where(eq(channels.missionId, missionId));
+  await tx.delete(chains).where(eq(chains.missionId, missionId));
+  await tx.delete(lasers).where(eq(lasers.missionId, missionId));
+  await tx.delete(resonators).where(eq(resonators.missionId, missionId));
+  await tx.delete(detectors).where(eq(detectors.missionId, missionId));
+  const [m] = await tx.select().from(missions).where(eq(missions.id, missionId));
+  if (m && m.name !== plan.name)
+    await tx
+      .update(missions)
+      .set({ name: plan.name, version: m.version + 1, updatedAt: new Date() })
+      .where(eq(missions.id, missionId));
+  const [s] = await tx.select().from(planSettings).where(eq(planSettings.missionId, missionId));
+  await tx
+    .update(planSettings)
+    .set({ ...plan.settings, version: (s?.version ?? 0) + 1, updatedAt: new Date() })
+    .where(eq(planSettings.missionId, missionId));
+
+  const ids = (rows: { id: string; key: string }[]) => new Map(rows.map((r) => [r.key, r.id]));
+  const laserIds = ids(
+    plan.lasers.length
+      ? await tx
+          .insert(lasers)
+          .values(
+            plan.lasers.map((l, position) => ({
+              missionId,
+              position,
+              key: l.id,
+              carrierTHz: l.carrierTHz,
+              carrierPowerMW: l.carrierPowerMW,
+              loPowerMW: l.loPowerMW,
+              reach: l.reach.map((r) => ({ minGHz: r.minGHz, maxGHz: r.maxGHz })),
+              stepMHz: l.stepMHz,
+              driftMHz: l.driftMHz,
+              lockModulationMHz: l.lock.modulationMHz,
+              lockModulationIndex: l.lock.modulationIndex,
+              lockOrders: l.lock.orders,
+            })),
+          )
+          .returning({ id: lasers.id, key: lasers.key })
+      : [],
+  );
+  const resonatorIds = ids(
+    plan.resonators.length
+      ? await tx
+          .insert(resonators)
+          .values(plan.resonators.map((r, position) => ({ missionId, position, key: r.id, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ })))
+          .returning({ id: resonators.id, key: resonators.key })
+      : [],
+  );
+  const detectorIds = ids(
+    plan.detectors.length
+      ? await tx
+          .insert(detectors)
+          .values(
+            plan.detectors.map((d, position) => ({
+              missionId,
+              position,
+              key: d.id,
+              minGHz: d.minGHz,
+              maxGHz: d.maxGHz,
+              maxInputMW: d.maxInputMW,
+              sampleRateGHz: d.sampleRateGHz,
+            })),
+          )
+          .returning({ id: detectors.id, key: detectors.key })
+      : [],
+  );
+  const chainIds = ids(
+    plan.chains.length
+      ? await tx
+          .insert(chains)
+          .values(
+            plan.chains.map((c, position) => ({
+              missionId,
+              position,
+              key: c.id,
+              laserId: laserIds.get(c.laser)!,
+              resonatorId: resonatorIds.get(c.resonator)!,
+              detectorId: detectorIds.get(c.detector)!,
+              mode: c.mode,
+              sideband: c.sideband,
+              loOffsetGHz: c.loOffsetGHz,
+              rfInputMinGHz: c.rfInput.minGHz,
+              rfInputMaxGHz: c.rfInput.maxGHz,
+              tapFraction: c.tapFraction,
+              pathLossDB: c.pathLossDB,
+              carrierRejectionDB: c.carrierRejectionDB,
+              sharedIf: c.sharedIf,
+            })),
+          )
+          .returning({ id: chains.id, key: chains.key })
+      : [],
+  );
+  if (plan.channels.length)
+    await tx.insert(channels).values(
+      plan.channels.map((ch, position) => ({
+        missionId,
+        position,
+        key: ch.id,
+        name: ch.name,
+        chainId: chainIds.get(ch.chain)!,
+        centerGHz: ch.centerGHz,
+        bandwidthMHz: ch.bandwidthMHz,
+        dsbOffsetGHz: ch.dsbOffsetGHz,
+        integrationMs: ch.integrationMs,
+        antennaK: ch.antennaK,
+        receiverK: ch.receiverK,
+        gainStability: ch.gainStability,
+        requiredNedtK: ch.requiredNedtK,
+      })),
+    );
+}

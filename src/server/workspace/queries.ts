@@ -1,0 +1,242 @@
+import "server-only";
+import { and, asc, desc, eq, sql, type SQL } from "drizzle-orm";
+import type { AnyPgColumn } from "drizzle-orm/pg-core";
+import { db } from "@db/client";
+import {
+  activity,
+  chains,
+  channels,
+  detectors,
+  findings,
+  lasers,
+  missions,
+  planRevisions,
+  planSettings,
+  resonators,
+  type Mission,
+} from "@db/schema";
+import type { FindingsQuery } from "@/schemas/workspace";
+import { notFound } from "@/server/http";
+import type { Actor } from "@/server/auth/actor";
+import { isUuid } from "./errors";
+import {
+  chainDto,
+  channelDto,
+  detectorDto,
+  laserDto,
+  missionDto,
+  resonatorDto,
+  settingsDto,
+} from "./mappers";
+import type { Queryable } from "./tx";
+
+/** Named read queries of the workspace. Every one is scoped to the actor's team. */
+
+/** The mission of the actor's team, or 404 (also for another team's mission). */
+export async function getMissionRow(actor: Actor, missionId: string, q: Queryable = db): Promise<Mission> {
+  if (!isUuid(missionId)) throw notFound("mission");
+  const [m] = await q
+    .select()
+    .from(missions)
+    .where(and(eq(missions.id, missionId), eq(missions.teamId, actor.teamId)));
+  if (!m) throw notFound("mission");
+  return m;
+}
+
+async function latestStatus(q: Queryable, missionId: string): Promise<string> {
+  const [r] = await q
+    .select({ status: planRevisions.status })
+    .from(planRevisions)
+    .where(eq(planRevisions.missionId, missionId))
+    .orderBy(desc(planRevisions.number))
+    .limit(1);
+  return r?.status ?? "draft";
+}
+
+export async function getMission(actor: Actor, missionId: string, q: Queryable = db) {
+  const m = await getMissionRow(actor, missionId, q);
+  return missionDto(m, await latestStatus(q, m.id));
+}
+
+export async function listMissions(actor: Actor) {
+  const latest = db
+    .select({
+      missionId: planRevisions.missionId,
+      number: sql<number>`max(${planRevisions.number})`.as("number"),
+    })
+    .from(planRevisions)
+    .groupBy(planRevisions.missionId)
+    .as("latest");
+  const rows = await db
+    .select({
+      m: missions,
+      status: planRevisions.status,
+      openErrors: planRevisions.errorCount,
+      openWarnings: planRevisions.warningCount,
+      chainCount: sql<number>`(select count(*)::int from ${chains} where ${chains.missionId} = ${missions.id})`,
+      channelCount: sql<number>`(select count(*)::int from ${channels} where ${channels.missionId} = ${missions.id})`,
+    })
+    .from(missions)
+    .leftJoin(latest, eq(latest.missionId, missions.id))
+    .leftJoin(
+      planRevisions,
+      and(eq(planRevisions.missionId, missions.id), eq(planRevisions.number, latest.number)),
+    )
+    .where(eq(missions.teamId, actor.teamId))
+    .orderBy(desc(missions.updatedAt));
+  return rows.map((r) => ({
+    id: r.m.id,
+    name: r.m.name,
+    description: r.m.description,
+    status: r.status ?? "draft",
+    chainCount: Number(r.chainCount),
+    channelCount: Number(r.channelCount),
+    openErrors: r.openErrors ?? 0,
+    openWarnings: r.openWarnings ?? 0,
+    updatedAt: r.m.updatedAt.toISOString(),
+    version: r.m.version,
+  }));
+}
+
+const order = (t: { position: AnyPgColumn; createdAt: AnyPgColumn }) => [asc(t.position), asc(t.createdAt)];
+
+export async function listLasers(missionId: string, q: Queryable = db) {
+  return (await q.select().from(lasers).where(eq(lasers.missionId, missionId)).orderBy(...order(lasers))).map(laserDto);
+}
+export async function listResonators(missionId: string, q: Queryable = db) {
+  return (
+    await q.select().from(resonators).where(eq(resonators.missionId, missionId)).orderBy(...order(resonators))
+  ).map(resonatorDto);
+}
+export async function listDetectors(missionId: string, q: Queryable = db) {
+  return (
+    await q.select().from(detectors).where(eq(detectors.missionId, missionId)).orderBy(...order(detectors))
+  ).map(detectorDto);
+}
+export async function listChains(missionId: string, q: Queryable = db) {
+  return (await q.select().from(chains).where(eq(chains.missionId, missionId)).orderBy(...order(chains))).map(chainDto);
+}
+export async function listChannels(missionId: string, q: Queryable = db) {
+  return (
+    await q.select().from(channels).where(eq(channels.missionId, missionId)).orderBy(...order(channels))
+  ).map(channelDto);
+}
+
+export async function getSettings(missionId: string, q: Queryable = db) {
+  const [s] = await q.select().from(planSettings).where(eq(planSettings.missionId, missionId));
+  if (!s) throw notFound("plan settings");
+  return settingsDto(s);
+}
+
+export async function getLatestRevision(missionId: string, q: Queryable = db) {
+  const [r] = await q
+    .select()
+    .from(planRevisions)
+    .where(eq(planRevisions.missionId, missionId))
+    .orderBy(desc(planRevisions.number))
+    .limit(1);
+  return r ?? null;
+}
+
+export async function listRevisions(missionId: string) {
+  const rows = await db
+    .select({
+      number: planRevisions.number,
+      status: planRevisions.status,
+      authorName: planRevisions.authorName,
+      createdAt: planRevisions.createdAt,
+      errorCount: planRevisions.errorCount,
+      warningCount: planRevisions.warningCount,
+      infoCount: planRevisions.infoCount,
+      summary: planRevisions.summary,
+    })
+    .from(planRevisions)
+    .where(eq(planRevisions.missionId, missionId))
+    .orderBy(desc(planRevisions.number));
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
+}
+
+export async function getRevision(missionId: string, number: number) {
+  const [r] = await db
+    .select()
+    .from(planRevisions)
+    .where(and(eq(planRevisions.missionId, missionId), eq(planRevisions.number, number)));
+  if (!r) throw notFound("revision");
+  return {
+    number: r.number,
+    status: r.status,
+    authorName: r.authorName,
+    createdAt: r.createdAt.toISOString(),
+    summary: r.summary,
+    plan: r.plan,
+    result: r.result,
+  };
+}
+
+/** Findings of the latest revision, filtered by severity, chain key, channel key and code. */
+export async function listFindings(missionId: string, filter: FindingsQuery) {
+  const latest = await getLatestRevision(missionId);
+  if (!latest) return { revision: null, findings: [] };
+  const conds: SQL[] = [eq(findings.revisionId, latest.id)];
+  if (filter.severity) conds.push(eq(findings.severity, filter.severity));
+  if (filter.chain) conds.push(eq(findings.chainKey, filter.chain));
+  if (filter.channel) conds.push(eq(findings.channelKey, filter.channel));
+  if (filter.code) conds.push(eq(findings.code, filter.code));
+  const rows = await db
+    .select()
+    .from(findings)
+    .where(and(...conds))
+    .orderBy(asc(findings.position));
+  return {
+    revision: latest.number,
+    findings: rows.map((f) => ({
+      code: f.code,
+      severity: f.severity,
+      chain: f.chainKey,
+      channel: f.channelKey,
+      message: f.message,
+      data: f.data,
+    })),
+  };
+}
+
+export async function listActivity(missionId: string, limit = 500) {
+  const rows = await db
+    .select()
+    .from(activity)
+    .where(eq(activity.missionId, missionId))
+    .orderBy(desc(activity.at), desc(activity.revisionAfter))
+    .limit(limit);
+  return rows.map((a) => ({
+    at: a.at.toISOString(),
+    actorName: a.actorName,
+    action: a.action,
+    entity: a.entity,
+    summary: a.summary,
+    revision: a.revisionAfter,
+    revisionBefore: a.revisionBefore,
+  }));
+}
+
+/** Channels with their chain key, in stored order, for the CSV export. */
+export async function listChannelsForCsv(missionId: string) {
+  const rows = await db
+    .select({ ch: channels, chainKey: chains.key })
+    .from(channels)
+    .innerJoin(chains, eq(chains.id, channels.chainId))
+    .where(eq(channels.missionId, missionId))
+    .orderBy(asc(channels.position), asc(channels.createdAt));
+  return rows.map(({ ch, chainKey }) => ({
+    key: ch.key,
+    name: ch.name,
+    chain: chainKey,
+    centerGHz: ch.centerGHz,
+    bandwidthMHz: ch.bandwidthMHz,
+    dsbOffsetGHz: ch.dsbOffsetGHz,
+    integrationMs: ch.integrationMs,
+    antennaK: ch.antennaK,
+    receiverK: ch.receiverK,
+    gainStability: ch.gainStability,
+    requiredNedtK: ch.requiredNedtK,
+  }));
+}
