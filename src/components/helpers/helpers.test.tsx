@@ -5,6 +5,7 @@ import { OpticalFrequency } from "./OpticalFrequency";
 import { ReceiverNoise } from "./ReceiverNoise";
 import { ResonatorSizing } from "./ResonatorSizing";
 import { WavelengthGrid } from "./WavelengthGrid";
+import { ChannelNotation } from "./ChannelNotation";
 
 /** Text of the element carrying data-testid, tags stripped (server render, no DOM needed). */
 function byTestId(html: string, id: string): string {
@@ -80,5 +81,22 @@ describe("helper components (first render, server-side)", () => {
     expect(html).toContain("N = 6");
     expect(html).toContain("+20.0 GHz");
     expect(renderToString(<OpticalFrequency thz={Number.NaN} />)).toContain("—");
+  });
+});
+
+describe("ChannelNotation (first render, server-side)", () => {
+  it("expands the MHS channel 4 notation into its two passbands", () => {
+    const html = renderToString(<ChannelNotation initialText="183.311 ± 3.00 GHz, 2 × 1000 MHz" onApply={() => {}} />);
+    // MHS channel table: passbands [179.811, 180.811] and [185.811, 186.811] GHz
+    expect(byTestId(html, "cn-passband-1")).toMatch(/^179\.8110 – 180\.8110/);
+    expect(byTestId(html, "cn-passband-2")).toMatch(/^185\.8110 – 186\.8110/);
+    expect(html).toContain(">Apply channel<");
+  });
+
+  it("names the part that did not parse", () => {
+    const html = renderToString(<ChannelNotation initialText="57.290344 ± 0.3222 ± 0.048" />);
+    expect(html).toContain("Notation: quadruple-sideband");
+    const bw = renderToString(<ChannelNotation initialText="183.31 ± 7.0" initialBandwidth="wide" />);
+    expect(bw).toContain("Bandwidth: “wide” is not a bandwidth");
   });
 });

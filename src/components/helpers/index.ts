@@ -3,3 +3,4 @@ export { ResonatorSizing, type ResonatorSizingProps, type ResonatorApplyValue } 
 export { DriftBudget, type DriftBudgetProps } from "./DriftBudget";
 export { ReceiverNoise, type ReceiverNoiseProps } from "./ReceiverNoise";
 export { OpticalFrequency, type OpticalFrequencyProps } from "./OpticalFrequency";
+export { ChannelNotation, type ChannelNotationProps } from "./ChannelNotation";

@@ -1,7 +1,7 @@
 "use client";
 
 import { useState } from "react";
-import { DriftBudget, OpticalFrequency, ReceiverNoise, ResonatorSizing, WavelengthGrid } from "@/components/helpers";
+import { ChannelNotation, DriftBudget, OpticalFrequency, ReceiverNoise, ResonatorSizing, WavelengthGrid } from "@/components/helpers";
 
 interface Applied {
   what: string;
@@ -45,6 +45,14 @@ export function ToolsBoard() {
         />
         <DriftBudget initialCarrierTHz={carrierTHz} onApply={(mhz) => setApplied({ what: "drift (MHz)", value: String(mhz) })} />
         <ReceiverNoise onApply={(k) => setApplied({ what: "receiver noise (K)", value: String(k) })} />
+        <ChannelNotation
+          onApply={(ch) =>
+            setApplied({
+              what: "channel centre (GHz), sideband offset (GHz), bandwidth (MHz)",
+              value: `${ch.centerGHz}, ${ch.dsbOffsetGHz ?? "none"}, ${ch.bandwidthMHz}`,
+            })
+          }
+        />
       </div>
     </div>
   );
