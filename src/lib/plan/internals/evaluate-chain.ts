@@ -407,7 +407,8 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
 
   // ---- sampled IF: nyquist-straddle, alias-overlap
   if (fs !== null) {
-    const straddles = channels.map((c) => (c.geo ? interiorNyquistEdge(absInterval(c.geo.occupied), fs) : null));
+    // the interior of O itself (plan-format.md); folding below uses |O|
+    const straddles = channels.map((c) => (c.geo ? interiorNyquistEdge(c.geo.occupied, fs) : null));
     channels.forEach((c, i) => {
       const edge = straddles[i];
       if (!c.geo || edge === null || edge === undefined) return;

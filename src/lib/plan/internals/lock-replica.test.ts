@@ -40,5 +40,6 @@ describe("lock replica share (plan-format.md, Lock replica)", () => {
     expect(Number.isFinite(lockReplicaDB(0.06, 1e-300, 2, 0.02, 0.01))).toBe(true);
     expect(Number.isFinite(lockReplicaDB(0.06, 0.5, 1e9, 0.02, 0.01))).toBe(true);
     expect(Number.isFinite(lockOrderWeightDB(300, 0.06, 0.5, 0.02))).toBe(true);
+    expect(Number.isFinite(lockReplicaDB(1e-300, 0.5, 2, 0.02, 1e300))).toBe(true);
   });
 });

@@ -32,7 +32,8 @@ export function lockReplicaDB(fm: number, beta: number, orders: number, delta: n
     const w = lockOrderWeightDB(m, fm, beta, delta);
     const both = w + 10 * Math.log10(2); // +m and −m
     denTerms.push(both);
-    numTerms.push(both + 10 * Math.log10(Math.min(1, (m * fm) / B)));
+    // min(1, m·fm/B) in dB, formed from logarithms so it never underflows
+    numTerms.push(both + Math.min(0, 10 * (Math.log10(m) + Math.log10(fm) - Math.log10(B))));
   }
   const num = logSumDB(numTerms);
   const den = 10 * Math.log10(1 + 10 ** (logSumDB(denTerms) / 10));
