@@ -6,5 +6,9 @@ export const metadata: Metadata = { title: "Missions" };
 
 export default async function MissionsPage() {
   const { canCreateMission } = await workspaceAbilities();
-  return <MissionsList canCreate={canCreateMission} />;
+  return (
+    <main className="mx-auto max-w-7xl px-6 py-6">
+      <MissionsList canCreate={canCreateMission} />
+    </main>
+  );
 }

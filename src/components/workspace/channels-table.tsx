@@ -185,7 +185,7 @@ function ChannelTr({
         {row.worst ? (
           <button
             type="button"
-            className="flex items-center gap-1.5 text-left hover:underline"
+            className="flex items-center gap-1.5 whitespace-nowrap text-left hover:underline"
             onClick={() => onSelect?.(row.channel.key)}
             title={row.worst.message}
           >

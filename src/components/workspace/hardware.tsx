@@ -30,70 +30,127 @@ function ItemHeader({ title, onEdit, label }: { title: string; onEdit?: () => vo
   );
 }
 
-export function LaserItem({ laser, onEdit }: { laser: Laser; onEdit?: () => void }) {
+const th = "whitespace-nowrap px-2 py-1 text-left text-xs font-medium text-ink-soft";
+const td = "whitespace-nowrap px-2 py-1.5 tabular-nums align-top";
+
+function EditCell({ onEdit, label }: { onEdit?: () => void; label: string }) {
+  return onEdit ? (
+    <td className="px-1 py-1 text-right">
+      <button type="button" className={buttonClass.quiet} onClick={onEdit} aria-label={label}>
+        Edit
+      </button>
+    </td>
+  ) : null;
+}
+
+type Editable<T> = (row: T) => (() => void) | undefined;
+
+export function LaserTable({ lasers, onEdit }: { lasers: Laser[]; onEdit: Editable<Laser> }) {
+  if (lasers.length === 0) return <Empty>No laser pair yet.</Empty>;
   return (
-    <div className="rounded border border-ink/10 p-3">
-      <ItemHeader title={laser.key} onEdit={onEdit} label="laser pair" />
-      <Dl
-        rows={[
-          ["Carrier", `${formatNumber(laser.carrierTHz, 3)} THz`],
-          ["Carrier power", `${formatNumber(laser.carrierPowerMW, 2)} mW`],
-          ["LO power", `${formatNumber(laser.loPowerMW, 2)} mW`],
-          ["Reach", laser.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "GHz")).join(", ")],
-          ["Step · drift", `${formatMHz(laser.stepMHz)} MHz · ±${formatMHz(laser.driftMHz)} MHz`],
-          [
-            "PDH lock",
-            `${formatMHz(laser.lock.modulationMHz)} MHz, β ${formatNumber(laser.lock.modulationIndex, 2)}, ${laser.lock.orders} order${laser.lock.orders === 1 ? "" : "s"}`,
-          ],
-        ]}
-      />
+    <>
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse text-sm" data-testid="lasers-table">
+          <thead>
+            <tr className="border-b border-ink/20">
+              <th className={th}>Laser pair</th>
+              <th className={th}>Carrier (THz)</th>
+              <th className={th}>Carrier power (mW)</th>
+              <th className={th}>LO power (mW)</th>
+              <th className={th}>Reach (GHz)</th>
+              <th className={th}>Step (MHz)</th>
+              <th className={th}>Drift (± MHz)</th>
+              <th className={th}>PDH lock</th>
+            </tr>
+          </thead>
+          <tbody>
+            {lasers.map((l) => (
+              <tr key={l.id} className="border-b border-ink/10">
+                <td className={`${td} font-medium`}>{l.key}</td>
+                <td className={td}>{formatNumber(l.carrierTHz, 3)}</td>
+                <td className={td}>{formatNumber(l.carrierPowerMW, 2)}</td>
+                <td className={td}>{formatNumber(l.loPowerMW, 2)}</td>
+                <td className={`${td} whitespace-normal`}>{l.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "")).join(", ")}</td>
+                <td className={td}>{formatMHz(l.stepMHz)}</td>
+                <td className={td}>{formatMHz(l.driftMHz)}</td>
+                <td className={td}>
+                  {formatMHz(l.lock.modulationMHz)} MHz, β {formatNumber(l.lock.modulationIndex, 2)}, {l.lock.orders}{" "}
+                  {l.lock.orders === 1 ? "order" : "orders"}
+                </td>
+                <EditCell onEdit={onEdit(l)} label={`Edit laser pair ${l.key}`} />
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
       <LaserSafetyNote className="mt-2" />
-    </div>
+    </>
   );
 }
 
-export function ResonatorItem({ resonator, linewidthMHz, onEdit }: { resonator: Resonator; linewidthMHz?: number | null; onEdit?: () => void }) {
-  return (
-    <div className="rounded border border-ink/10 p-3">
-      <ItemHeader title={resonator.key} onEdit={onEdit} label="resonator" />
-      <Dl
-        rows={[
-          ["FSR", `${formatGHz(resonator.fsrGHz)} GHz`],
-          ["Loaded Q", formatQ(resonator.loadedQ)],
-          ...(linewidthMHz != null ? ([["Linewidth", `${formatMHz(linewidthMHz, 2)} MHz`]] as [string, string][]) : []),
-        ]}
-      />
-    </div>
-  );
-}
-
-export function DetectorItem({ detector, onEdit }: { detector: Detector; onEdit?: () => void }) {
-  return (
-    <div className="rounded border border-ink/10 p-3">
-      <ItemHeader title={detector.key} onEdit={onEdit} label="detector" />
-      <Dl
-        rows={[
-          ["IF band", formatInterval([detector.minGHz, detector.maxGHz], "GHz")],
-          ["Max input per photodiode", `${formatNumber(detector.maxInputMW, 2)} mW`],
-          ["Sample rate", detector.sampleRateGHz === null ? "not digitised directly" : `${formatGHz(detector.sampleRateGHz)} GHz`],
-        ]}
-      />
-      <LaserSafetyNote className="mt-2" />
-    </div>
-  );
-}
-
-export function HardwareColumn<T extends { id: string }>({
-  items,
-  render,
-  emptyText,
+export function ResonatorTable({
+  resonators,
+  linewidthMHz,
+  onEdit,
 }: {
-  items: T[];
-  render: (item: T) => React.ReactNode;
-  emptyText: string;
+  resonators: Resonator[];
+  linewidthMHz: (r: Resonator) => number | null | undefined;
+  onEdit: Editable<Resonator>;
 }) {
-  if (items.length === 0) return <Empty>{emptyText}</Empty>;
-  return <div className="space-y-2">{items.map((i) => <div key={i.id}>{render(i)}</div>)}</div>;
+  if (resonators.length === 0) return <Empty>No resonator yet.</Empty>;
+  return (
+    <table className="w-full border-collapse text-sm" data-testid="resonators-table">
+      <thead>
+        <tr className="border-b border-ink/20">
+          <th className={th}>Resonator</th>
+          <th className={th}>FSR (GHz)</th>
+          <th className={th}>Loaded Q</th>
+          <th className={th}>Linewidth (MHz)</th>
+        </tr>
+      </thead>
+      <tbody>
+        {resonators.map((r) => (
+          <tr key={r.id} className="border-b border-ink/10">
+            <td className={`${td} font-medium`}>{r.key}</td>
+            <td className={td}>{formatGHz(r.fsrGHz)}</td>
+            <td className={td}>{formatQ(r.loadedQ)}</td>
+            <td className={td}>{formatMHz(linewidthMHz(r), 2)}</td>
+            <EditCell onEdit={onEdit(r)} label={`Edit resonator ${r.key}`} />
+          </tr>
+        ))}
+      </tbody>
+    </table>
+  );
+}
+
+export function DetectorTable({ detectors, onEdit }: { detectors: Detector[]; onEdit: Editable<Detector> }) {
+  if (detectors.length === 0) return <Empty>No detector yet.</Empty>;
+  return (
+    <>
+      <table className="w-full border-collapse text-sm" data-testid="detectors-table">
+        <thead>
+          <tr className="border-b border-ink/20">
+            <th className={th}>Detector</th>
+            <th className={th}>IF band (GHz)</th>
+            <th className={th}>Max input per diode (mW)</th>
+            <th className={th}>Sample rate (GHz)</th>
+          </tr>
+        </thead>
+        <tbody>
+          {detectors.map((d) => (
+            <tr key={d.id} className="border-b border-ink/10">
+              <td className={`${td} font-medium`}>{d.key}</td>
+              <td className={td}>{formatInterval([d.minGHz, d.maxGHz], "")}</td>
+              <td className={td}>{formatNumber(d.maxInputMW, 2)}</td>
+              <td className={td}>{d.sampleRateGHz === null ? "not sampled" : formatGHz(d.sampleRateGHz)}</td>
+              <EditCell onEdit={onEdit(d)} label={`Edit detector ${d.key}`} />
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <LaserSafetyNote className="mt-2" />
+    </>
+  );
 }
 
 export function ChainItem({

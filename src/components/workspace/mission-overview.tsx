@@ -17,7 +17,7 @@ import { EntityEditor, KIND_LABEL, SettingsEditor } from "./entity-editor";
 import { countBySeverity } from "./findings";
 import { FindingsPanel } from "./findings-panel";
 import { ChannelsTable } from "./channels-table";
-import { ChainItem, DetectorItem, HardwareColumn, LaserItem, ResonatorItem } from "./hardware";
+import { ChainItem, DetectorTable, LaserTable, ResonatorTable } from "./hardware";
 import { formatAge, formatNumber, plural } from "./format";
 import { buttonClass, Card, ErrorNote, SENSITIVITY_TEXT, Spinner } from "./ui";
 
@@ -108,23 +108,22 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
         </p>
       ) : null}
 
-      <div className="grid gap-4 lg:grid-cols-3">
-        <Card title="Laser pairs" actions={addButton("lasers")}>
-          <HardwareColumn items={refs.lasers} emptyText="No laser pair yet." render={(l) => <LaserItem laser={l} onEdit={edit("lasers")(l)} />} />
-        </Card>
+      <Card title="Laser pairs" actions={addButton("lasers")}>
+        <LaserTable lasers={refs.lasers} onEdit={edit("lasers")} />
+      </Card>
+      <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Resonators" actions={addButton("resonators")}>
-          <HardwareColumn
-            items={refs.resonators}
-            emptyText="No resonator yet."
-            render={(r) => {
+          <ResonatorTable
+            resonators={refs.resonators}
+            onEdit={edit("resonators")}
+            linewidthMHz={(r) => {
               const chain = refs.chains.find((c) => c.resonatorId === r.id);
-              const lw = chain ? result.data?.chains.find((c) => c.id === chain.key)?.linewidthMHz : null;
-              return <ResonatorItem resonator={r} linewidthMHz={lw} onEdit={edit("resonators")(r)} />;
+              return chain ? result.data?.chains.find((c) => c.id === chain.key)?.linewidthMHz : null;
             }}
           />
         </Card>
         <Card title="Detectors" actions={addButton("detectors")}>
-          <HardwareColumn items={refs.detectors} emptyText="No detector yet." render={(d) => <DetectorItem detector={d} onEdit={edit("detectors")(d)} />} />
+          <DetectorTable detectors={refs.detectors} onEdit={edit("detectors")} />
         </Card>
       </div>
 

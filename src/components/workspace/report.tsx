@@ -137,7 +137,7 @@ export function MissionReport({ missionId }: { missionId: string }) {
                 <td className={td}>{formatMHz(l.stepMHz)}</td>
                 <td className={td}>{formatMHz(l.driftMHz)}</td>
                 <td className={td}>
-                  {formatMHz(l.lock.modulationMHz)} MHz, β {formatNumber(l.lock.modulationIndex, 2)}, {l.lock.orders} orders
+                  {formatMHz(l.lock.modulationMHz)} MHz, β {formatNumber(l.lock.modulationIndex, 2)}, {l.lock.orders} {l.lock.orders === 1 ? "order" : "orders"}
                 </td>
               </tr>
             ))}

@@ -7,5 +7,9 @@ export const metadata: Metadata = { title: "Mission" };
 export default async function MissionPage({ params }: { params: Promise<{ missionId: string }> }) {
   const { missionId } = await params;
   const { canEdit } = await workspaceAbilities();
-  return <MissionOverview missionId={missionId} canEdit={canEdit} />;
+  return (
+    <main className="mx-auto max-w-7xl px-6 py-6">
+      <MissionOverview missionId={missionId} canEdit={canEdit} />
+    </main>
+  );
 }

@@ -5,5 +5,9 @@ export const metadata: Metadata = { title: "Plan report" };
 
 export default async function MissionReportPage({ params }: { params: Promise<{ missionId: string }> }) {
   const { missionId } = await params;
-  return <MissionReport missionId={missionId} />;
+  return (
+    <main className="mx-auto max-w-7xl px-6 py-6">
+      <MissionReport missionId={missionId} />
+    </main>
+  );
 }
