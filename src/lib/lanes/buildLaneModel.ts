@@ -21,8 +21,13 @@ export const IF_ROWS = { detector: 0, slot: 1, spur0: 2 } as const;
 
 /** Most modes drawn per resonator (a very small FSR would otherwise draw hundreds). */
 const MAX_MODES = 64;
+/** Modes other than the wanted one are drawn when centred this close to the RF input passband (GHz). */
+const MODE_MARGIN_GHz = 20;
 /** Reference lines and bands are kept within this distance of the plan's own items (GHz). */
 const REFERENCE_MARGIN_GHz = 20;
+
+/** What the opening view of the GHz axis frames: the plan's own bands and offsets, not the carrier or far references. */
+const FOCUS_KINDS = new Set<LaneItem["kind"]>(["rf-input", "channel-band", "image-band", "reach", "lo", "sideband"]);
 
 type Mutable<T> = { -readonly [K in keyof T]: T[K] };
 
@@ -112,8 +117,9 @@ export function buildLaneModel(
     if (!res || !laser) continue;
     const delta = (laser.carrierTHz * 1000) / res.loadedQ;
     const wanted = chain.mode;
-    const lo = Math.max(1, Math.floor((chain.rfInput.minGHz - res.fsrGHz) / res.fsrGHz));
-    const hi = Math.max(wanted, Math.ceil((chain.rfInput.maxGHz + res.fsrGHz) / res.fsrGHz));
+    // The wanted mode and every other mode centred within MODE_MARGIN_GHz of the RF input passband.
+    const lo = Math.max(1, Math.ceil((chain.rfInput.minGHz - MODE_MARGIN_GHz) / res.fsrGHz));
+    const hi = Math.floor((chain.rfInput.maxGHz + MODE_MARGIN_GHz) / res.fsrGHz);
     const ns = new Set<number>([wanted]);
     for (let n = lo; n <= hi && ns.size < MAX_MODES; n++) ns.add(n);
     for (const n of [...ns].sort((a, b) => a - b)) {
@@ -555,7 +561,15 @@ export function buildLaneModel(
     }
   }
   if (!Number.isFinite(ilo)) [ilo, ihi] = [0, 1];
-  return { lanes, items: all, extentGHz: [lo, hi], extentIF: [Math.min(0, ilo), ihi] };
+  let flo = Infinity;
+  let fhi = -Infinity;
+  for (const it of items) {
+    if (!FOCUS_KINDS.has(it.kind)) continue;
+    flo = Math.min(flo, it.lo);
+    fhi = Math.max(fhi, it.hi);
+  }
+  if (!Number.isFinite(flo)) [flo, fhi] = [lo, hi];
+  return { lanes, items: all, extentGHz: [lo, hi], focusGHz: [flo, fhi], extentIF: [Math.min(0, ilo), ihi] };
 }
 
 function laneAxis(lanes: readonly Lane[], id: string): "ghz" | "if" {

@@ -71,7 +71,7 @@ export function demoPlan(channels: number): PlanInput {
         antennaK: 250,
         receiverK: 3000,
         gainStability: 0,
-        requiredNedtK: 2,
+        requiredNedtK: 5,
       });
     }
   });

@@ -164,6 +164,8 @@ export interface LaneModel {
   readonly items: readonly LaneItem[];
   /** Hull of every item on the shared GHz axis, and of every item on the IF axis. */
   readonly extentGHz: GHzPair;
+  /** Hull of the plan's own bands and offsets (RF inputs, channels, images, reach, LO): the opening view. */
+  readonly focusGHz: GHzPair;
   readonly extentIF: GHzPair;
 }
 
