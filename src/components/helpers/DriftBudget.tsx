@@ -2,7 +2,7 @@
 
 import { useId, useState } from "react";
 import { type DriftCombination, driftBudget, modeShiftPerKelvin } from "@/lib/optics";
-import { ceilToStep, formatFixed, parseNumberField } from "./format";
+import { ceilToStep, formatFixed, LN_FIT_CARRIER_THZ, parseNumberField } from "./format";
 import { attempt } from "./internals/attempt";
 import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/HelperCard";
 import { NumberField } from "./internals/NumberField";
@@ -52,7 +52,7 @@ export function DriftBudget({
     milliK: parseNumberField(milliK, "Resonator temperature stability", { min: 0 }),
     lock: parseNumberField(lock, "Lock offset", { min: 0 }),
     step: parseNumberField(step, "Tuning step", { min: 0 }),
-    carrier: parseNumberField(carrierText, "Carrier", { min: 0, exclusiveMin: true }),
+    carrier: parseNumberField(carrierText, "Carrier", LN_FIT_CARRIER_THZ),
     temp: parseNumberField(tempText, "Resonator temperature", { min: -50, max: 300 }),
     shift: parseNumberField(shiftText, "Mode shift"),
   };

@@ -12,7 +12,7 @@ import {
   radiusForFsr,
   wavelengthNmFromTHz,
 } from "@/lib/optics";
-import { formatFixed, formatSignificant, parseNumberField } from "./format";
+import { formatFixed, formatSignificant, LN_FIT_CARRIER_THZ, parseNumberField } from "./format";
 import { attempt } from "./internals/attempt";
 import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/HelperCard";
 import { NumberField } from "./internals/NumberField";
@@ -73,7 +73,7 @@ export function ResonatorSizing({
   const [qText, setQText] = useState(String(initialLoadedQ));
   const [lwText, setLwText] = useState(() => String(Number(linewidthFromQ(initialCarrierTHz, initialLoadedQ).toPrecision(6))));
 
-  const carrier = parseNumberField(carrierText, "Carrier", { min: 0, exclusiveMin: true });
+  const carrier = parseNumberField(carrierText, "Carrier", LN_FIT_CARRIER_THZ);
   const temp = parseNumberField(tempText, "Temperature", { min: -50, max: 300 });
   const radius = parseNumberField(radiusText, "Radius", { min: 0, exclusiveMin: true });
   const fsrIn = parseNumberField(fsrText, "FSR", { min: 0, exclusiveMin: true });

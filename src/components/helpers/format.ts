@@ -82,3 +82,9 @@ export function parseNumberField(text: string, label: string, rules: FieldRules 
   if (rules.max !== undefined && value > rules.max) return { ok: false, message: `${label} must be at most ${rules.max}` };
   return { ok: true, value };
 }
+
+/**
+ * Carrier range (THz) inside the LiNbO3 Sellmeier fits' 0.4–5 µm
+ * (c/5 µm = 59.96 THz, c/0.4 µm = 749.48 THz), rounded inwards.
+ */
+export const LN_FIT_CARRIER_THZ: FieldRules = { min: 60, max: 749 };

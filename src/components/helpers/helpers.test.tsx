@@ -100,3 +100,13 @@ describe("ChannelNotation (first render, server-side)", () => {
     expect(bw).toContain("Bandwidth: “wide” is not a bandwidth");
   });
 });
+
+describe("carrier outside the LiNbO3 fits", () => {
+  it("is refused at the field, naming it", () => {
+    const html = renderToString(<ResonatorSizing initialCarrierTHz={1000} onApply={() => {}} />);
+    expect(html).toContain("Carrier must be at most 749");
+    expect(byTestId(html, "rs-fsr")).toBe("—GHz");
+    const drift = renderToString(<DriftBudget initialCarrierTHz={10} />);
+    expect(drift).toContain("Carrier must be at least 60");
+  });
+});
