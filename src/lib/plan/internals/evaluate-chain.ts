@@ -93,12 +93,12 @@ function outsideBy(inner: Interval, outer: Interval): number {
   return Math.max(0, outer[0] - inner[0], inner[1] - outer[1]);
 }
 
-/** "within 12 MHz of" / "overlaps … by 3 MHz" wording for a gap. */
+/** Distance wording for a gap inside parentheses: "30 MHz away" / "touching" / "overlapping by 25 MHz". */
 function closeness(gapGHz: number): string {
-  return gapGHz >= 0 ? `comes within ${fMHz(gapGHz)} MHz of` : `overlaps by ${fMHz(-gapGHz)} MHz`;
+  if (gapGHz > 0) return `${fMHz(gapGHz)} MHz away`;
+  if (gapGHz === 0) return "touching";
+  return `overlapping by ${fMHz(-gapGHz)} MHz`;
 }
-
-const SEP = "−"; // U+2212 in sources, so ids with hyphens stay readable
 
 /**
  * Evaluate every rule of one chain at LO offset L (GHz). The chain's own
@@ -188,7 +188,7 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
       add(
         "carrier-dominates-lo",
         null,
-        `Up to ${fMW(ctx.carrierMW)} mW of residual carrier reaches detector ${ctx.detector.id}, more than the ${fMW(ctx.loMW)} mW LO (${fDB(10 * Math.log10(ctx.carrierMW / ctx.loMW))} dB above), so the carrier, not the LO, sets the shot-noise floor; ${fDB(10 * Math.log10(ctx.carrierMW / ctx.loMW))} dB more carrier rejection or LO power would balance them.`,
+        `Up to ${fMW(ctx.carrierMW)} mW of residual carrier reaches detector ${ctx.detector.id}, ${fDB(10 * Math.log10(ctx.carrierMW / ctx.loMW))} dB more than the ${fMW(ctx.loMW)} mW LO, so the carrier, not the LO, sets the shot-noise floor; that much more carrier rejection or LO power would balance them.`,
         { carrierMW: ctx.carrierMW, loMW: ctx.loMW },
       );
     }
@@ -361,10 +361,11 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
     const occ = (c.geo as SlotGeometry).occupied;
     const effGap = hit.folded ? (hit.foldedGapGHz as number) : hit.gapGHz;
     const where = hit.folded ? ` after folding at the ${fGHz(fs as number)} GHz sample rate (folded spur ${fBand(foldInterval(band.band, fs as number))}, folded band ${fBand(foldedOcc[hit.victim] as Interval)})` : "";
-    const message =
-      effGap >= 0
-        ? `Occupied IF band ${fBand(occ)} of ${c.ch.channel.id} comes within ${fMHz(effGap)} MHz of the ${spurText(band)}${where}; the guard is ${fMHz(guard)} MHz (${fMHz(guard - effGap)} MHz short).`
-        : `Occupied IF band ${fBand(occ)} of ${c.ch.channel.id} overlaps the ${spurText(band)} by ${fMHz(-effGap)} MHz${where}; the guard is ${fMHz(guard)} MHz (${fMHz(guard - effGap)} MHz short).`;
+    const relation =
+      effGap > 0
+        ? `comes within ${fMHz(effGap)} MHz of the ${spurText(band)}${where}`
+        : `overlaps the ${spurText(band)}${effGap < 0 ? ` by ${fMHz(-effGap)} MHz` : ""}${where}`;
+    const message = `Occupied IF band ${fBand(occ)} of ${c.ch.channel.id} ${relation}; the guard is ${fMHz(guard)} MHz (${fMHz(guard - effGap)} MHz short).`;
     add("spur-in-slot", hit.victim, message, {
       family: band.family,
       order: band.order,
@@ -454,7 +455,7 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
         add(
           "lock-replica",
           i,
-          `${fDB(ch.lockReplicaDB)} dB of the response of ${id} comes from outside its passband through the lock sidebands of laser ${ctx.laser.id} (±${fMHz(ctx.fm)} MHz, index ${ctx.beta}); the limit is ${fDB(limit)} dB (${fDB(ch.lockReplicaDB - limit)} dB over).`,
+          `The lock sidebands of laser ${ctx.laser.id} (±${fMHz(ctx.fm)} MHz, index ${ctx.beta}) bring ${fDB(ch.lockReplicaDB)} dB of the response of ${id} in from outside its passband; the limit is ${fDB(limit)} dB (${fDB(ch.lockReplicaDB - limit)} dB over).`,
           { lockReplicaDB: ch.lockReplicaDB, limitDB: limit },
         );
       }
@@ -472,7 +473,7 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
         add(
           "in-protected-band",
           i,
-          `Passband ${fBand(prot.p)} of ${id} lies inside ${fBand(prot.band.bandGHz)}, where all emissions are prohibited (${prot.band.source}); the receiver itself does not transmit, but keep LO light out of the resonator so nothing is re-radiated there.`,
+          `Passband ${fBand(prot.p)} of ${id} lies inside ${fBand(prot.band.bandGHz)}, where the Radio Regulations (No. 5.340) prohibit all emissions${prot.band.fromMemory ? " (band edges from memory, to be checked against the current edition)" : ""}; the receiver itself does not transmit, but keep LO light out of the resonator so nothing is re-radiated there.`,
           { passbandGHz: pair(prot.p), protectedGHz: pair(prot.band.bandGHz), source: prot.band.source, fromMemory: prot.band.fromMemory },
         );
       }

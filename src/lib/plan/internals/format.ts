@@ -16,8 +16,8 @@ export const fGHz = (v: number) => trim(v, 6);
 export const fMHz = (vGHz: number) => trim(vGHz * 1000, 3);
 /** A level in dB. */
 export const fDB = (v: number) => trim(v, 2);
-/** A temperature in K (4 significant digits, at least to 1 mK). */
-export const fK = (v: number) => (Math.abs(v) >= 1 ? trim(v, 3) : Number(v.toPrecision(4)).toString());
+/** A temperature in K (5 significant digits). */
+export const fK = (v: number) => (Number.isFinite(v) ? String(Number(v.toPrecision(5)) + 0) : String(v));
 /** A power in mW. */
 export const fMW = (v: number) => trim(v, 4);
 /** An interval in GHz, "1.475–1.525 GHz". */
