@@ -1,0 +1,1 @@
+export { findingKeyOf as findingKey } from "./internals/finding-key";
