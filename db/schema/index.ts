@@ -3,3 +3,4 @@
 export * from "./auth";
 export * from "./mail";
 export * from "./workspace";
+export * from "./review";

@@ -156,7 +156,7 @@ describe("nextReviewState: model-based sequences", () => {
     fc.assert(
       fc.property(fc.commands(commands, { maxCommands: 60 }), fc.subarray(KEYS), (cmds, initialErrors) => {
         const sys: Sys = { state: "draft", errors: [...initialErrors], waived: new Set(), history: [] };
-        fc.modelRun(() => ({ model: { state: "draft" }, real: sys }), cmds);
+        fc.modelRun(() => ({ model: { state: "draft" } as Model, real: sys }), cmds);
         // Whole-history check: every entry into "baselined" is a lead/owner baseline with nothing unwaived.
         for (const h of sys.history)
           if (h.to === "baselined" && h.from !== "baselined") {
