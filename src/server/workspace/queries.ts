@@ -59,29 +59,20 @@ export async function getMission(actor: Actor, missionId: string, q: Queryable =
 }
 
 export async function listMissions(actor: Actor) {
-  const latest = db
-    .select({
-      missionId: planRevisions.missionId,
-      number: sql<number>`max(${planRevisions.number})`.as("number"),
-    })
-    .from(planRevisions)
-    .groupBy(planRevisions.missionId)
-    .as("latest");
+  const latest = (col: string) =>
+    sql.raw(
+      `(select r.${col} from plan_revisions r where r.mission_id = "missions"."id" order by r.number desc limit 1)`,
+    );
   const rows = await db
     .select({
       m: missions,
-      status: planRevisions.status,
-      openErrors: planRevisions.errorCount,
-      openWarnings: planRevisions.warningCount,
+      status: sql<string | null>`${latest("status")}`,
+      openErrors: sql<number | null>`${latest("error_count")}`,
+      openWarnings: sql<number | null>`${latest("warning_count")}`,
       chainCount: sql<number>`(select count(*)::int from ${chains} where ${chains.missionId} = ${missions.id})`,
       channelCount: sql<number>`(select count(*)::int from ${channels} where ${channels.missionId} = ${missions.id})`,
     })
     .from(missions)
-    .leftJoin(latest, eq(latest.missionId, missions.id))
-    .leftJoin(
-      planRevisions,
-      and(eq(planRevisions.missionId, missions.id), eq(planRevisions.number, latest.number)),
-    )
     .where(eq(missions.teamId, actor.teamId))
     .orderBy(desc(missions.updatedAt));
   return rows.map((r) => ({
@@ -91,8 +82,8 @@ export async function listMissions(actor: Actor) {
     status: r.status ?? "draft",
     chainCount: Number(r.chainCount),
     channelCount: Number(r.channelCount),
-    openErrors: r.openErrors ?? 0,
-    openWarnings: r.openWarnings ?? 0,
+    openErrors: Number(r.openErrors ?? 0),
+    openWarnings: Number(r.openWarnings ?? 0),
     updatedAt: r.m.updatedAt.toISOString(),
     version: r.m.version,
   }));
