@@ -219,7 +219,7 @@ describe("feasibility map: properties on random small plans", () => {
       }),
       { numRuns: 60 },
     );
-  });
+  }, 60_000);
 
   it("agrees with the lean per-offset evaluation at many points", () => {
     fc.assert(
@@ -233,7 +233,7 @@ describe("feasibility map: properties on random small plans", () => {
       }),
       { numRuns: 200 },
     );
-  });
+  }, 60_000);
 
   it("widening reach never removes a feasible offset", () => {
     fc.assert(
@@ -255,7 +255,7 @@ describe("feasibility map: properties on random small plans", () => {
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000);
 
   it("adding a channel never adds a feasible offset", () => {
     fc.assert(
@@ -274,7 +274,7 @@ describe("feasibility map: properties on random small plans", () => {
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000);
 
   it("lists feasible intervals in increasing L, longer than 1 kHz, and excluded codes that are never empty", () => {
     fc.assert(
@@ -293,5 +293,5 @@ describe("feasibility map: properties on random small plans", () => {
       }),
       { numRuns: 200 },
     );
-  });
+  }, 60_000);
 });

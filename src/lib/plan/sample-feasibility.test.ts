@@ -50,7 +50,7 @@ describe("sampleFeasibility (brute-force reference)", () => {
           const b = pieces[i + 1]!;
           if (a.hi !== b.lo || a.hi - a.lo <= 2 * step || b.hi - b.lo <= 2 * step) continue;
           const x = a.hi;
-          const near = samples.filter((s) => Math.abs(s.L - x) <= step);
+          const near = samples.filter((s) => Math.abs(s.L - x) <= step * (1 + 1e-6));
           const kinds = new Set(near.map((s) => s.codes.join()));
           expect({ edge: x, transition: kinds.size > 1 }).toEqual({ edge: x, transition: true });
         }

@@ -35,10 +35,11 @@ export function sampleFeasibility(plan: Plan, chainId: string, stepGHz: number):
   if (!(stepGHz > 0)) throw new Error("stepGHz must be greater than 0");
   const out: FeasibilitySample[] = [];
   for (const [r0, r1] of mergedReach(plan, chainId)) {
-    const n = Math.floor((r1 - r0) / stepGHz);
-    for (let i = 0; i <= n + 1; i++) {
-      const L = i <= n ? r0 + i * stepGHz : r1;
-      if (i === n + 1 && L - (r0 + n * stepGHz) <= 0) break;
+    // r0, r0 + step, … strictly below r1 (by more than a billionth of a step), then r1 itself
+    const offsets: number[] = [];
+    for (let i = 0; r0 + i * stepGHz < r1 - stepGHz * 1e-9; i++) offsets.push(r0 + i * stepGHz);
+    offsets.push(r1);
+    for (const L of offsets) {
       const codes = new Set<FindingCode>();
       for (const f of checkChainAtOffset(plan, chainId, L)) {
         if (f.severity === "error" && L_DEPENDENT_ERROR_CODES.includes(f.code)) codes.add(f.code);

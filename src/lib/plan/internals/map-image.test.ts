@@ -42,7 +42,7 @@ describe("image rule of the map", () => {
       }),
       { numRuns: 40 },
     );
-  });
+  }, 60_000);
 
   it("combRadius is where the comb falls to the level", () => {
     fc.assert(
@@ -82,7 +82,7 @@ describe("image rule of the map", () => {
       }),
       { numRuns: 300 },
     );
-  });
+  }, 60_000);
 
   it("the monotone-run search finds exactly the crossings a point-by-point scan of the grid finds", () => {
     fc.assert(
@@ -101,7 +101,7 @@ describe("image rule of the map", () => {
       }),
       { numRuns: 150 },
     );
-  });
+  }, 60_000);
 
   it("the image windows of example 1 by hand: the rule fires only where X' nears the 183.31 GHz mode", () => {
     // ∫W over [183.305, 183.315] for δ = 19.34 MHz is ≈ 8.64e-3 GHz; the level

@@ -45,7 +45,7 @@ describe("piecewise-linear interval functions of L", () => {
       }),
       { numRuns: 500 },
     );
-  });
+  }, 60_000);
 
   it("clipFn matches the intersection with a band, and is undefined exactly where it is empty", () => {
     fc.assert(
@@ -65,7 +65,7 @@ describe("piecewise-linear interval functions of L", () => {
       }),
       { numRuns: 500 },
     );
-  });
+  }, 60_000);
 
   it("foldFn matches the Nyquist fold of the band at every L (zone −1 exactly where it straddles k·fs/2, k ≥ 1)", () => {
     fc.assert(
@@ -90,7 +90,7 @@ describe("piecewise-linear interval functions of L", () => {
       }),
       { numRuns: 500 },
     );
-  });
+  }, 60_000);
 
   it("straddleSet, outsideSet and withinGuardSet hold exactly where the plain tests fire", () => {
     fc.assert(
@@ -116,7 +116,7 @@ describe("piecewise-linear interval functions of L", () => {
       }),
       { numRuns: 1000 },
     );
-  });
+  }, 60_000);
 
   it("a constant gap equal to the guard is a tie decided in favour of passing", () => {
     // two parallel bands 0.05 apart (e.g. slots of two channels on the same side of the LO)

@@ -1,5 +1,5 @@
 import { CODE_BIT, type MapModel } from "./map-model";
-import { imageFires, makeComb } from "./map-image";
+import { combRadius, imageFires, makeComb } from "./map-image";
 
 /**
  * The L-dependent error codes of one chain at one LO offset, evaluated
@@ -53,6 +53,25 @@ export function makePointEvaluator(m: MapModel): (L: number) => number {
   const fHi = new Float64Array(n);
   const zone = new Float64Array(n); // −1: straddles (left out of alias-overlap)
   const tmp: [number, number] = [0, 0];
+  // image rule: it cannot fire unless X' comes within r of a mode centre
+  // (plan-format.md, "Feasibility map and place": ∫Wᵢ ≤ B·max C over X')
+  const imageRadius = m.channels.map((ch) =>
+    ch.ssb ? combRadius(comb, Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / ch.widthGHz)) : -1,
+  );
+  const imageCandidate = (i: number, L: number): boolean => {
+    const r = imageRadius[i] as number;
+    if (r < 0) return false;
+    if (r >= m.fsr / 2) return true;
+    const b = m.channels[i]!.bands[0]!;
+    const lo = 2 * L - b[1];
+    const hi = 2 * L - b[0];
+    const n = Math.round((lo + hi) / 2 / m.fsr);
+    for (let k = n - 1; k <= n + 1; k++) {
+      const c = k * m.fsr;
+      if (lo <= c + r && hi >= c - r) return true;
+    }
+    return false;
+  };
   // error spur families: carrier-beat, lock-lo (±m·fm), widened by D; lock-self fixed
   const movingOffsets: number[] = [0];
   for (let k = 1; k <= m.lockOrders; k++) movingOffsets.push(-k * m.fm, k * m.fm);
@@ -103,7 +122,9 @@ export function makePointEvaluator(m: MapModel): (L: number) => number {
       oLo[i] = lo;
       oHi[i] = hi;
       if (lo < m.detMin - TOL || hi > m.detMax + TOL) mask |= CODE_BIT["if-outside-detector"];
-      if (ch.ssb && !(mask & CODE_BIT["image-response"]) && imageFires(comb, m, ch, L)) mask |= CODE_BIT["image-response"];
+      if (ch.ssb && !(mask & CODE_BIT["image-response"]) && imageCandidate(i, L) && imageFires(comb, m, ch, L)) {
+        mask |= CODE_BIT["image-response"];
+      }
       if (h !== null) {
         foldInto(lo, hi, h, tmp);
         fLo[i] = tmp[0];

@@ -24,14 +24,43 @@ export function mapPieces(m: MapModel): MapPiece[] {
   for (const [r0, r1] of m.reach) {
     const sets = firingSets(m, r0, r1);
     const xs: number[] = [];
-    const ds: number[] = []; // +bit index+1 for an opening, −(index+1) for a closing
+    const ds: number[] = []; // +(index+1) for an opening, −(index+1) for a closing
     MAP_CODES.forEach((code, i) => {
-      for (const [lo0, hi0] of sets[code]) {
-        const lo = Math.max(lo0, r0);
-        const hi = Math.min(hi0, r1);
+      // union of this code's firing intervals first: far fewer events to sort.
+      // Starts and ends are sorted separately (native typed-array sorts); the
+      // union is where the count of open intervals is positive, and an end
+      // equal to a start joins the two (starts are taken first).
+      const list = sets[code];
+      const starts = new Float64Array(list.length);
+      const ends = new Float64Array(list.length);
+      let k = 0;
+      for (const iv of list) {
+        const lo = Math.max(iv[0], r0);
+        const hi = Math.min(iv[1], r1);
         if (!(hi - lo > MERGE_GHZ)) continue;
-        xs.push(lo, hi);
-        ds.push(i + 1, -(i + 1));
+        starts[k] = lo;
+        ends[k] = hi;
+        k++;
+      }
+      const st = starts.subarray(0, k).sort();
+      const en = ends.subarray(0, k).sort();
+      let a = 0;
+      let b = 0;
+      let open = 0;
+      let from = 0;
+      while (b < k) {
+        if (a < k && (st[a] as number) <= (en[b] as number)) {
+          if (open === 0) from = st[a] as number;
+          open++;
+          a++;
+        } else {
+          open--;
+          if (open === 0) {
+            xs.push(from, en[b] as number);
+            ds.push(i + 1, -(i + 1));
+          }
+          b++;
+        }
       }
     });
     const order = Array.from(xs.keys()).sort((a, b) => (xs[a] as number) - (xs[b] as number));

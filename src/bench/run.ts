@@ -1,0 +1,130 @@
+/**
+ * Plan engine benchmark (`npm run bench`).
+ *
+ * 1. Median time of a full `checkPlan` (map and place included) of the
+ *    clean demo plan `docs/examples/clean.plan.json` (falls back to the
+ *    worked example 2 fixture when the demo plan is missing; the output
+ *    says which).
+ * 2. For a generated 64-channel chain (spurMaxOrder 7, a 300 GHz reach,
+ *    a sampled IF so that folding and aliasing are exercised): the
+ *    feasibility map computed exactly, and by a 1 MHz grid that evaluates
+ *    the L-dependent error codes at every grid point with the lean
+ *    per-offset evaluation; their times, the ratio, and whether they agree
+ *    at every grid point.
+ *
+ * All data here is invented demo data.
+ */
+import { existsSync, readFileSync } from "node:fs";
+import { fileURLToPath } from "node:url";
+import { type Plan, parsePlan } from "@/schemas/plan";
+import { checkPlan } from "@/lib/plan/check-plan";
+import { feasibilityMap } from "@/lib/plan/feasibility-map";
+import { placeLo } from "@/lib/plan/place-lo";
+import { buildMapModel, codesOfMask } from "@/lib/plan/internals/map-model";
+import { makePointEvaluator } from "@/lib/plan/internals/map-point";
+import { mapPieces } from "@/lib/plan/internals/map-sweep";
+import { generatedChainPlan } from "./generated-chain";
+
+const root = fileURLToPath(new URL("../../", import.meta.url));
+
+function median(xs: number[]): number {
+  const s = [...xs].sort((a, b) => a - b);
+  const m = s.length >> 1;
+  return s.length % 2 ? (s[m] as number) : ((s[m - 1] as number) + (s[m] as number)) / 2;
+}
+
+function mustParse(input: unknown, what: string): Plan {
+  const r = parsePlan(input);
+  if (!r.ok) throw new Error(`${what} is not a valid plan: ${r.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+  return r.plan;
+}
+
+/** Time `fn` `runs` times after `warm` warm-up calls; returns the median in ms. */
+function timeMedian(fn: () => unknown, runs: number, warm: number): number {
+  for (let i = 0; i < warm; i++) fn();
+  const t: number[] = [];
+  for (let i = 0; i < runs; i++) {
+    const a = performance.now();
+    fn();
+    t.push(performance.now() - a);
+  }
+  return median(t);
+}
+
+function fullCheckSection(): void {
+  const demo = `${root}docs/examples/clean.plan.json`;
+  const fallback = `${root}tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json`;
+  const file = existsSync(demo) ? demo : fallback;
+  const plan = mustParse(JSON.parse(readFileSync(file, "utf8")), file);
+  const ms = timeMedian(() => checkPlan(plan), 400, 100);
+  const nCh = plan.channels.length;
+  console.log(`full checkPlan of ${file.slice(root.length)} (${plan.chains.length} chains, ${nCh} channels):`);
+  console.log(`  median ${ms.toFixed(3)} ms over 400 runs (target < 2 ms) ${ms < 2 ? "PASS" : "MISS"}`);
+}
+
+function mapSection(): void {
+  const plan = mustParse(generatedChainPlan(), "generated chain");
+  const model = buildMapModel(plan, "G");
+  const exactMs = timeMedian(() => feasibilityMap(plan, "G"), 15, 3);
+  const map = feasibilityMap(plan, "G");
+  const pieces = mapPieces(model);
+
+  // 1 MHz grid over the reach, lean per-offset evaluation at every point
+  const [r0, r1] = model.reach[0] as [number, number];
+  const n = Math.round((r1 - r0) * 1000);
+  const evalAt = makePointEvaluator(model);
+  const gridMask = new Uint8Array(n + 1);
+  const t0 = performance.now();
+  for (let i = 0; i <= n; i++) gridMask[i] = evalAt(r0 + i / 1000);
+  const gridMs = performance.now() - t0;
+
+  // agreement: walk the pieces alongside the grid
+  let agreeInterior = 0;
+  let disagreeInterior = 0;
+  let onEdge = 0;
+  let onEdgeOutside = 0;
+  const examples: string[] = [];
+  let p = 0;
+  for (let i = 0; i <= n; i++) {
+    const L = r0 + i / 1000;
+    while (p + 1 < pieces.length && (pieces[p] as { hi: number }).hi < L) p++;
+    const piece = pieces[p]!;
+    const g = gridMask[i] as number;
+    const nearLo = L - piece.lo < 1e-6 && p > 0;
+    const nearHi = piece.hi - L < 1e-6 && p + 1 < pieces.length;
+    if (nearLo || nearHi) {
+      // a grid point on a map edge: the code set there is decided by the tie rule and must
+      // lie between the intersection and the union of the two neighbouring pieces' sets
+      onEdge++;
+      const other = pieces[nearLo ? p - 1 : p + 1]!;
+      const inter = piece.mask & other.mask;
+      const union = piece.mask | other.mask;
+      if ((g & inter) !== inter || (g & ~union) !== 0) {
+        onEdgeOutside++;
+        if (examples.length < 5) examples.push(`L=${L.toFixed(6)} grid ${codesOfMask(g)} vs ${codesOfMask(piece.mask)} | ${codesOfMask(other.mask)}`);
+      }
+    } else if (g === piece.mask) agreeInterior++;
+    else {
+      disagreeInterior++;
+      if (examples.length < 5) examples.push(`L=${L.toFixed(6)} grid ${codesOfMask(g)} vs map ${codesOfMask(piece.mask)}`);
+    }
+  }
+
+  const feasibleGHz = map.feasibleGHz.reduce((s, iv) => s + iv[1] - iv[0], 0);
+  console.log(`generated chain: ${model.channels.length} channels, spurMaxOrder ${plan.settings.spurMaxOrder}, reach [${r0}, ${r1}] GHz, fs ${model.halfFs === null ? "none" : model.halfFs * 2} GHz`);
+  const place = placeLo(plan, "G", map.feasibleGHz);
+  console.log(`  exact map: median ${exactMs.toFixed(2)} ms over 15 runs; ${map.feasibleGHz.length} feasible intervals (${feasibleGHz.toFixed(3)} GHz), ${map.excludedGHz.length} excluded intervals; place ${place.placeGHz ?? place.placeReason} GHz`);
+  console.log(`  feasible: ${map.feasibleGHz.map((iv) => `[${iv[0].toFixed(4)}, ${iv[1].toFixed(4)}]`).join(" ")}`);
+  console.log(`  1 MHz grid: ${n + 1} points in ${(gridMs / 1000).toFixed(2)} s (${((gridMs / (n + 1)) * 1000).toFixed(2)} µs per point)`);
+  console.log(`  ratio grid/exact: ${(gridMs / exactMs).toFixed(0)}× (target ≥ 100×) ${gridMs / exactMs >= 100 ? "PASS" : "MISS"}`);
+  console.log(
+    `  agreement: ${agreeInterior} of ${agreeInterior + disagreeInterior} grid points off the map's edges identical; ` +
+      `${onEdge} grid points lie on a map edge (within 1 kHz), ${onEdge - onEdgeOutside} of them between the neighbouring sets`,
+  );
+  const identical = disagreeInterior === 0 && onEdgeOutside === 0;
+  console.log(`  identical answers at every grid point: ${identical ? "YES" : "NO"}`);
+  for (const e of examples) console.log(`    ${e}`);
+}
+
+fullCheckSection();
+mapSection();
