@@ -156,6 +156,7 @@ export interface MutationRevision {
 export interface TuningPreview {
   intervals: Interval[];
   points: number;
+  isolatedGHz?: number[];
   rejectedRows: { row: number; column?: string; message: string }[] | number;
 }
 

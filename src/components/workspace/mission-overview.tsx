@@ -78,9 +78,15 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
             <span>
               Revision <span className="font-semibold tabular-nums" data-testid="revision-number">{latest ?? "–"}</span>
             </span>
-            <span className="text-sev-error">{plural(counts.error, "error")}</span>
-            <span className="text-sev-warning">{plural(counts.warning, "warning")}</span>
-            <span className="text-sev-info">{counts.info} info</span>
+            {result.data ? (
+              <>
+                <span className="text-sev-error">{plural(counts.error, "error")}</span>
+                <span className="text-sev-warning">{plural(counts.warning, "warning")}</span>
+                <span className="text-sev-info">{counts.info} info</span>
+              </>
+            ) : result.isLoading ? null : (
+              <span className="text-ink-soft">not checked yet</span>
+            )}
             <span className="text-ink-soft">changed {formatAge(mission.data?.updatedAt)}</span>
             {busy ? <Spinner label="Re-checking…" /> : null}
           </p>

@@ -3,6 +3,7 @@
 import { useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import { useRef, useState } from "react";
+import { CHANNEL_COLUMNS } from "@/lib/imports";
 import { api, ApiError } from "@/queries/api";
 import { invalidateMission, useCollectionQuery } from "@/queries/missions";
 import type { ChannelUploadPreview, DetectorResponsePreview, Interval, TuningPreview } from "@/queries/types";
@@ -121,8 +122,9 @@ function TuningMapUpload({ missionId }: { missionId: string }) {
   return (
     <Card title="Tuning map (measured LO offsets)">
       <p className="mb-2 text-sm text-ink-soft">
-        A CSV of measured LO offsets (GHz) that laser 2 reached. Points closer than the gap are joined into one reachable interval;
-        the preview shows the intervals before they replace the laser pair&apos;s reach.
+        A CSV with a header row and an <code className="font-mono text-xs">offsetGHz</code> column: the measured LO offsets that laser 2
+        reached (other columns are ignored; a blank offset marks a setpoint with no measurement). Offsets closer than the gap are joined
+        into one reachable interval; the preview shows the intervals before they replace the laser pair&apos;s reach.
       </p>
       <div className="flex flex-wrap items-end gap-3">
         <label className="text-sm font-medium">
@@ -153,7 +155,13 @@ function TuningMapUpload({ missionId }: { missionId: string }) {
         <div className="mt-3 space-y-2" data-testid="tuning-preview">
           <p className="text-sm">
             {preview.points} points → {preview.intervals.length} interval{preview.intervals.length === 1 ? "" : "s"}
-            {rejected ? <span className="text-sev-warning"> · {rejected} row{rejected === 1 ? "" : "s"} skipped</span> : null}
+            {rejected ? <span className="text-sev-warning"> · {rejected} row{rejected === 1 ? "" : "s"} without a measurement</span> : null}
+            {preview.isolatedGHz && preview.isolatedGHz.length > 0 ? (
+              <span className="text-sev-warning">
+                {" "}
+                · {preview.isolatedGHz.length} isolated offset{preview.isolatedGHz.length === 1 ? "" : "s"} left out (no neighbour within the gap)
+              </span>
+            ) : null}
           </p>
           <ReachStrip current={mergedCoverage(laser.reach)} next={preview.intervals} />
           <ul className="text-sm tabular-nums">
@@ -200,8 +208,14 @@ function ChannelListUpload({ missionId }: { missionId: string }) {
   return (
     <Card title="Channel list">
       <p className="mb-2 text-sm text-ink-soft">
-        A CSV with one channel per row (columns named as the channel fields, the chain by its plan id). Every row is checked; nothing is
-        saved unless all rows are valid.
+        A CSV with one channel per row and the columns {CHANNEL_COLUMNS.map((c, i) => (
+          <span key={c}>
+            {i ? ", " : ""}
+            <code className="font-mono text-xs">{c}</code>
+          </span>
+        ))}{" "}
+        (the chain by its plan id; DSB offset, gain stability and required NEΔT may be left out). Channels are matched by id: new ids are
+        added, existing ones updated, others kept. Every row is checked; nothing is saved unless all rows are valid.
       </p>
       <div className="flex flex-wrap items-end gap-3">
         <FileInput id="channels-file" label="Channel list" onFile={(f) => { setFile(f); setPreview(null); setPhase({ state: "idle" }); }} />
@@ -286,8 +300,9 @@ function DetectorResponseUpload({ missionId }: { missionId: string }) {
   return (
     <Card title="Detector response">
       <p className="mb-2 text-sm text-ink-soft">
-        A CSV of the measured response (frequency in GHz, response in dB) of photodiode and IF chain. The usable band is where the
-        response stays within the chosen drop below its peak.
+        A CSV with the columns <code className="font-mono text-xs">frequencyGHz</code> and{" "}
+        <code className="font-mono text-xs">responseDB</code>: the measured response of photodiode and IF chain. The usable band is
+        where the response stays within the chosen drop below its peak.
       </p>
       <div className="flex flex-wrap items-end gap-3">
         <label className="text-sm font-medium">
