@@ -38,6 +38,34 @@ export function ruleRank(code: FindingCode): number {
   return RULE_ORDER.indexOf(code);
 }
 
+/**
+ * Severity of each rule (plan-format.md, rules table). `slot-overlap` is a
+ * warning instead when the chain has `sharedIf`; `spur-in-slot` is info for
+ * the harmonic and intermodulation families.
+ */
+export const RULE_SEVERITY: Readonly<Record<FindingCode, Severity>> = {
+  "lo-uncovered": "error",
+  "lo-in-band": "error",
+  "dsb-lo-off-centre": "warning",
+  "lo-off-step": "warning",
+  "band-outside-rf-input": "error",
+  "mode-detuned": "error",
+  "band-wider-than-mode": "warning",
+  "if-outside-detector": "error",
+  "slot-overlap": "error",
+  "image-response": "error",
+  "spur-in-slot": "error",
+  "nyquist-straddle": "error",
+  "alias-overlap": "error",
+  "noise-folding": "warning",
+  "lock-replica": "warning",
+  "lock-inside-mode": "warning",
+  "carrier-dominates-lo": "warning",
+  "pd-overload": "error",
+  "nedt-unmet": "error",
+  "in-protected-band": "info",
+};
+
 /** Codes of the per-chain rules (`channel: null`). */
 export const CHAIN_LEVEL_CODES: readonly FindingCode[] = [
   "lo-uncovered",

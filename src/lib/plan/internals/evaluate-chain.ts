@@ -1,5 +1,5 @@
 import type { Finding, FindingCode, JsonValue, Severity, Spur } from "../types";
-import { ruleRank } from "../types";
+import { RULE_SEVERITY, ruleRank } from "../types";
 import { protectedBandHolding } from "@/lib/reference";
 import type { ChainContext, ChannelContext } from "./chain-context";
 import { fBand, fDB, fGHz, fK, fMHz, fMW, pair } from "./format";
@@ -48,28 +48,6 @@ interface Hit {
   foldedGapGHz: number | null;
 }
 
-const SEVERITY: Record<FindingCode, Severity> = {
-  "lo-uncovered": "error",
-  "lo-in-band": "error",
-  "dsb-lo-off-centre": "warning",
-  "lo-off-step": "warning",
-  "band-outside-rf-input": "error",
-  "mode-detuned": "error",
-  "band-wider-than-mode": "warning",
-  "if-outside-detector": "error",
-  "slot-overlap": "error",
-  "image-response": "error",
-  "spur-in-slot": "error",
-  "nyquist-straddle": "error",
-  "alias-overlap": "error",
-  "noise-folding": "warning",
-  "lock-replica": "warning",
-  "lock-inside-mode": "warning",
-  "carrier-dominates-lo": "warning",
-  "pd-overload": "error",
-  "nedt-unmet": "error",
-  "in-protected-band": "info",
-};
 
 /**
  * Make freshly built finding data JSON-safe in place: −0 becomes 0 and
@@ -111,7 +89,7 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
   const fs = ctx.sampleRate;
   const chainFindings: Finding[] = [];
   const perChannel: Finding[][] = ctx.channels.map(() => []);
-  const add = (code: FindingCode, channelIndex: number | null, message: string, data: { [k: string]: JsonValue }, severity: Severity = SEVERITY[code]) => {
+  const add = (code: FindingCode, channelIndex: number | null, message: string, data: { [k: string]: JsonValue }, severity: Severity = RULE_SEVERITY[code]) => {
     const f: Finding = {
       code,
       severity,
