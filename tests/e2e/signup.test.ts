@@ -52,6 +52,7 @@ it("signs up, confirms the e-mail, creates a team and lands on Missions", async 
   expect(await switcher.locator("option:checked").textContent()).toContain("E2E receiver team (owner)");
   expect(await page.getByRole("link", { name: "Missions" }).getAttribute("aria-current")).toBe("page");
 
+  await page.waitForLoadState("networkidle").catch(() => undefined);
   const file = await screenshot(page, "e2e-signup");
   expect(existsSync(file)).toBe(true);
   expect(statSync(file).size).toBeGreaterThan(5_000);

@@ -308,7 +308,7 @@ describe("teams, invitations and roles", () => {
     expect((await extra.fetch("/api/team")).status).toBe(403);
   });
 
-  it("the last owner cannot leave (409) and stays owner; other members can leave", async () => {
+  it("the last owner cannot leave, demote or remove themselves (409) and stays owner; other members can leave", async () => {
     const res = await t.owner.fetch("/api/team/leave", { method: "POST" });
     expect(res.status).toBe(409);
     const body = await res.json();
@@ -317,6 +317,13 @@ describe("teams, invitations and roles", () => {
     expect(team.role).toBe("owner");
     const direct = await t.owner.postJson("/api/auth/organization/leave", { organizationId: t.teamId });
     expect(direct.status).toBe(400);
+    // Nor demote or remove themselves.
+    const self = team.members.find((m: { email: string }) => m.email === t.owner.email);
+    const demote = await t.owner.fetch(`/api/team/members/${self.id}`, { method: "PATCH", json: { role: "lead" } });
+    expect(demote.status).toBe(409);
+    const removeSelf = await t.owner.fetch(`/api/team/members/${self.id}`, { method: "DELETE" });
+    expect(removeSelf.status).toBe(409);
+    expect((await (await t.owner.fetch("/api/team")).json()).role).toBe("owner");
 
     const leaver = await newVerifiedUser("leaver");
     await invite(t.owner, t.teamId, leaver.email, "viewer");

@@ -4,6 +4,7 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import Link from "next/link";
 import { useActionState } from "react";
 import type { z } from "zod";
+import { submitKeepingInput } from "@/components/forms/submit";
 import { Field, FormMessage, primaryButton } from "@/components/forms/field";
 import {
   ForgotPasswordSchema,
@@ -27,6 +28,7 @@ function useZodForm<S extends z.ZodType>(schema: S, action: FormAction, id: stri
     onValidate: ({ formData }) => parseWithZod(formData, { schema }),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
+    onSubmit: submitKeepingInput(formAction),
   });
   return { form, fields: fields as Record<string, any>, formAction, pending };
 }

@@ -2,6 +2,7 @@
 import { getFormProps, getSelectProps, useForm } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useActionState } from "react";
+import { submitKeepingInput } from "@/components/forms/submit";
 import { Field, FormMessage } from "@/components/forms/field";
 import type { FormAction } from "@/components/auth/forms";
 import { InviteSchema } from "@/schemas/auth";
@@ -23,6 +24,7 @@ export function InviteForm({ action, roles }: { action: FormAction; roles: reado
     onValidate: ({ formData }) => parseWithZod(formData, { schema: InviteSchema }),
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
+    onSubmit: submitKeepingInput(formAction),
   });
   const roleProps = getSelectProps(fields.role);
   return (
