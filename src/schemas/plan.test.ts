@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { formatPath, jsonErrorOffset, parsePlan, parsePlanText, PLAN_LIMITS, type PlanIssue } from "./plan";
+import { formatPath, jsonErrorOffset, parsePlan, parsePlanText, planSchema, PLAN_LIMITS, type PlanIssue } from "./plan";
 import { validPlanInput } from "../../tests/fixtures/valid-plan";
 
 // The document is edited through loosely typed records so tests can write
@@ -445,6 +445,23 @@ describe("all errors are reported, in document order", () => {
       { path: "chains[0].rfInput", message: "must be an object, not an array" },
       { path: "channels[0]", message: "must be an object, not a string" },
     ]);
+  });
+});
+
+describe("planSchema used directly (forms, other callers)", () => {
+  it("accepts the valid plan and applies the same defaults", () => {
+    const direct = planSchema.safeParse(validPlanInput());
+    const viaParse = parsePlan(validPlanInput());
+    expect(direct.success).toBe(true);
+    expect(viaParse.ok && direct.data).toEqual(viaParse.ok ? viaParse.plan : null);
+  });
+  it("enforces the cross-field rules too", () => {
+    const doc = validPlanInput() as Doc;
+    doc.chains[1].laser = "LP1";
+    doc.channels[0].chain = "Q";
+    const r = planSchema.safeParse(doc);
+    expect(r.success).toBe(false);
+    expect(r.error?.issues.map((i) => i.path.join("."))).toEqual(["chains.1.laser", "channels.0.chain"]);
   });
 });
 
