@@ -31,7 +31,7 @@ export function TeamSwitcher({
         name="teamId"
         defaultValue={activeId ?? ""}
         onChange={() => ref.current?.requestSubmit()}
-        className="max-w-[16rem] rounded border border-white/30 bg-ink-soft px-2 py-1 text-sm text-white"
+        className="max-w-[22rem] rounded border border-white/30 bg-ink-soft px-2 py-1 text-sm text-white"
       >
         {activeId ? null : (
           <option value="" disabled>
