@@ -4,7 +4,7 @@
  * get 401; a member of another team gets 404 for every mission route (the
  * mission's existence is never revealed).
  */
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import {
   closeTestPool,
   createTeam,
@@ -219,6 +219,9 @@ beforeAll(async () => {
 }, 240_000);
 
 afterAll(closeTestPool);
+
+// The app under test may share a loaded machine: allow slow answers (each test makes many requests).
+vi.setConfig({ testTimeout: 180_000 });
 
 describe("workspace routes × roles", () => {
   for (const c of CASES) {

@@ -43,7 +43,9 @@ export function staleVersion(current: unknown, what: string): HttpError {
 
 /** PostgreSQL unique violation on a `…_key_uq` index → 400 naming `key`. */
 export function mapDbError(err: unknown, what: string): unknown {
-  const e = err as { code?: string; constraint?: string };
+  // drizzle wraps the driver's error; the PostgreSQL fields sit on `cause`.
+  const wrapped = err as { code?: string; cause?: unknown };
+  const e = (wrapped && !wrapped.code && wrapped.cause ? wrapped.cause : err) as { code?: string; constraint?: string };
   if (e && e.code === "23505" && typeof e.constraint === "string" && e.constraint.endsWith("_key_uq"))
     return invalidInput([{ path: "key", message: `another ${what} of this mission already uses this key` }]);
   if (e && e.code === "23503")

@@ -69,8 +69,8 @@ export async function listMissions(actor: Actor) {
       status: sql<string | null>`${latest("status")}`,
       openErrors: sql<number | null>`${latest("error_count")}`,
       openWarnings: sql<number | null>`${latest("warning_count")}`,
-      chainCount: sql<number>`(select count(*)::int from ${chains} where ${chains.missionId} = ${missions.id})`,
-      channelCount: sql<number>`(select count(*)::int from ${channels} where ${channels.missionId} = ${missions.id})`,
+      chainCount: sql<number>`${sql.raw('(select count(*)::int from chains c where c.mission_id = "missions"."id")')}`,
+      channelCount: sql<number>`${sql.raw('(select count(*)::int from channels c where c.mission_id = "missions"."id")')}`,
     })
     .from(missions)
     .where(eq(missions.teamId, actor.teamId))
