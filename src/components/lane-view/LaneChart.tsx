@@ -58,11 +58,8 @@ function Axis({ domain, width, y, title }: { domain: Domain; width: number; y: n
 
 function itemAria(it: LaneItem): string {
   const sev = it.severity ? `, ${it.severity}${it.codes.length ? `: ${it.codes.join(", ")}` : ""}` : "";
-  const facts = it.facts
-    .slice(0, 3)
-    .map(([k, v]) => `${k} ${v}`)
-    .join("; ");
-  return `${it.label}${sev}. ${facts}`;
+  const where = it.lo === it.hi ? `at ${it.lo.toFixed(4)} GHz` : `${it.lo.toFixed(4)} to ${it.hi.toFixed(4)} GHz`;
+  return `${it.label}, ${where}${sev}`;
 }
 
 interface LaneRowsProps {
@@ -84,7 +81,7 @@ function sameItems(a: readonly LaneItem[], b: readonly LaneItem[]): boolean {
   for (let i = 0; i < a.length; i++) {
     const x = a[i]!;
     const y = b[i]!;
-    if (x.id !== y.id || x.lo !== y.lo || x.hi !== y.hi || x.severity !== y.severity || x.codes.join() !== y.codes.join() || x.facts !== y.facts && x.facts.join() !== y.facts.join())
+    if (x.id !== y.id || x.lo !== y.lo || x.hi !== y.hi || x.severity !== y.severity || x.label !== y.label || x.codes.join() !== y.codes.join())
       return false;
   }
   return true;
@@ -263,7 +260,9 @@ const LaneRows = memo(
 
 /** The lane view's chart: lanes stacked over a shared GHz axis and an IF axis, zoomable and pannable. */
 export function LaneChart({ model, width, domain, ifDomain, selectedId, onZoom, onSelect, onZoomToItem, onLoDrag, onLoNudge }: LaneChartProps) {
-  const layout = useMemo(() => chartLayout(model), [model]);
+  // The layout depends only on the lanes and their rows; keep it (and the lane boxes the memoised lanes compare) across re-checks.
+  const laneKey = model.lanes.map((l) => `${l.id}:${l.rows}`).join("|");
+  const layout = useMemo(() => chartLayout(model), [laneKey]); // eslint-disable-line react-hooks/exhaustive-deps
   const svgRef = useRef<SVGSVGElement>(null);
   const [hover, setHover] = useState<Hover | null>(null);
   const inner = Math.max(50, width - MARGIN_LEFT - MARGIN_RIGHT);

@@ -18,7 +18,7 @@ import {
 import { LaneChart } from "./LaneChart";
 import { LaneTable } from "./LaneTable";
 import { Legend } from "./Legend";
-import { useLiveRecheck } from "./useLiveRecheck";
+import { useLiveRecheck, type FrameTime } from "./useLiveRecheck";
 import { SEVERITY_COLOUR } from "./vocabulary";
 
 export interface SaveOutcome {
@@ -36,7 +36,7 @@ export interface LaneViewProps {
   /** Save a chain's LO as a new plan revision; absent on read-only views. */
   onSaveLo?: (chainId: string, loOffsetGHz: number) => Promise<SaveOutcome>;
   /** Called with the time of every live re-check frame (ms). */
-  onFrame?: (ms: number) => void;
+  onFrame?: (t: FrameTime) => void;
 }
 
 function fmt(v: number, d = 3): string {
@@ -60,9 +60,9 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
   useEffect(() => {
     onFrameRef.current = onFrame;
   });
-  const reportFrame = useCallback((ms: number) => {
-    if (frameText.current) frameText.current.textContent = ` · last re-check + render ${ms.toFixed(1)} ms`;
-    onFrameRef.current?.(ms);
+  const reportFrame = useCallback((t: FrameTime) => {
+    if (frameText.current) frameText.current.textContent = ` · last re-check + render ${t.workMs.toFixed(1)} ms`;
+    onFrameRef.current?.(t);
   }, []);
   const live = useLiveRecheck(plan, result, reportFrame);
   const reference = useMemo(() => laneReference(), []);
@@ -122,25 +122,29 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
     if (slot) setIfDomain(clampDomain(zoomToItem(slot.lo, slot.hi, 1, IF_LIMITS), ifBounds, IF_LIMITS));
   };
 
-  const mirrorOf = useCallback((chain: string) => model.lanes.find((l) => l.id === `optical:${chain}`)?.mirror ?? 1, [model.lanes]);
+  // Handlers passed to the chart stay the same across re-checks (the memoised lanes compare them).
+  const latest = useRef({ lanes: model.lanes, plan: live.plan });
+  useEffect(() => {
+    latest.current = { lanes: model.lanes, plan: live.plan };
+  });
+  const { moveLo, setLo } = live;
   const onLoDrag = useCallback(
     (chain: string, drawn: number, phase: "start" | "move" | "end") => {
       if (phase === "start") return;
-      live.moveLo(chain, mirrorOf(chain) * drawn);
+      const mirror = latest.current.lanes.find((l) => l.id === `optical:${chain}`)?.mirror ?? 1;
+      moveLo(chain, mirror * drawn);
     },
-    [live, mirrorOf],
+    [moveLo],
   );
-  const stepOf = (chain: string) => {
-    const c = live.plan.chains.find((x) => x.id === chain);
-    const l = live.plan.lasers.find((x) => x.id === c?.laser);
-    return l && l.stepMHz > 0 ? l.stepMHz / 1000 : 0.001;
-  };
   const onLoNudge = useCallback(
     (chain: string, steps: number) => {
-      const c = live.plan.chains.find((x) => x.id === chain);
-      if (c) live.setLo(chain, c.loOffsetGHz + steps * stepOf(chain));
+      const plan = latest.current.plan;
+      const c = plan.chains.find((x) => x.id === chain);
+      const l = plan.lasers.find((x) => x.id === c?.laser);
+      const step = l && l.stepMHz > 0 ? l.stepMHz / 1000 : 0.001;
+      if (c) setLo(chain, c.loOffsetGHz + steps * step);
     },
-    [live], // eslint-disable-line react-hooks/exhaustive-deps
+    [setLo],
   );
 
   // Keep the details panel on the live version of the selected item.

@@ -1,6 +1,7 @@
 "use client";
 
 import { useCallback, useEffect, useRef, useState } from "react";
+import { flushSync } from "react-dom";
 import type { Plan } from "@/schemas/plan";
 import { checkPlan, type ResultDocument } from "@/lib/plan";
 import { recheckAtOffset } from "@/lib/lanes";
@@ -20,19 +21,25 @@ function snap(plan: Plan, chainId: string, L: number): number {
   return Number((Math.round(L / step) * step).toFixed(9));
 }
 
+/** Time of one live re-check: `workMs` = re-check + React render and commit + style and layout; `frameMs` = to the next animation frame. */
+export interface FrameTime {
+  workMs: number;
+  frameMs: number;
+}
+
 /**
  * The working plan and result of the lane view, re-checked in the browser
  * whenever a chain's LO moves. Moves are coalesced to one re-check per
- * animation frame; each frame's time from the start of the re-check to the
- * frame after React commits is reported through `onFrame` (milliseconds).
+ * animation frame; the update is committed synchronously and layout forced,
+ * so `onFrame` gets the time of the whole update and the time to the next
+ * animation frame (milliseconds).
  */
-export function useLiveRecheck(initialPlan: Plan, initialResult: ResultDocument | null, onFrame?: (ms: number) => void) {
+export function useLiveRecheck(initialPlan: Plan, initialResult: ResultDocument | null, onFrame?: (t: FrameTime) => void) {
   const [state, setState] = useState<LiveState>(() => ({ plan: initialPlan, result: initialResult ?? checkPlan(initialPlan) }));
   const [error, setError] = useState<string | null>(null);
   const stateRef = useRef(state);
   const pending = useRef<{ chain: string; L: number } | null>(null);
   const raf = useRef<number | null>(null);
-  const started = useRef<number | null>(null);
   const ctxCache = useRef<{ plan: Plan; chain: string; ctx: ChainContext } | null>(null);
 
   // A new plan from the server (after a save or a refetch) replaces the working copy.
@@ -44,12 +51,11 @@ export function useLiveRecheck(initialPlan: Plan, initialResult: ResultDocument 
   }
   useEffect(() => {
     stateRef.current = state;
-    if (started.current !== null) {
-      const t0 = started.current;
-      started.current = null;
-      requestAnimationFrame(() => onFrame?.(performance.now() - t0));
-    }
-  }, [state, onFrame]);
+  }, [state]);
+  const onFrameRef = useRef(onFrame);
+  useEffect(() => {
+    onFrameRef.current = onFrame;
+  });
 
   const run = useCallback(() => {
     raf.current = null;
@@ -69,10 +75,15 @@ export function useLiveRecheck(initialPlan: Plan, initialResult: ResultDocument 
         ctxCache.current = cached;
       }
       const next = recheckAtOffset(cur.plan, cur.result, p.chain, L, cached.ctx);
-      started.current = t0;
       stateRef.current = next;
-      setState(next);
-      setError(null);
+      flushSync(() => {
+        setState(next);
+        setError(null);
+      });
+      // Reading a layout property makes the browser apply styles and lay out now.
+      void document.body.offsetHeight;
+      const workMs = performance.now() - t0;
+      requestAnimationFrame(() => onFrameRef.current?.({ workMs, frameMs: performance.now() - t0 }));
     } catch (e) {
       setError(`The re-check failed: ${(e as Error).message}`);
     }

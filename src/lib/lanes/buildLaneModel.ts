@@ -31,7 +31,17 @@ const FOCUS_KINDS = new Set<LaneItem["kind"]>(["rf-input", "channel-band", "imag
 
 type Mutable<T> = { -readonly [K in keyof T]: T[K] };
 
-function item(p: Partial<Mutable<LaneItem>> & Pick<LaneItem, "id" | "lane" | "kind" | "row" | "lo" | "hi" | "label">): LaneItem {
+type ItemInput = Omit<Partial<Mutable<LaneItem>>, "facts"> &
+  Pick<LaneItem, "id" | "lane" | "kind" | "row" | "lo" | "hi" | "label"> & { facts?: () => [string, string][] };
+
+/**
+ * One item. Its facts (formatted numbers) are only worked out when first
+ * read — tooltips, details and the table read a few items, while a live
+ * re-check rebuilds thousands of them on every frame.
+ */
+function item(p: ItemInput): LaneItem {
+  const { facts, ...rest } = p;
+  let cached: [string, string][] | null = null;
   return {
     chain: null,
     channel: null,
@@ -40,8 +50,11 @@ function item(p: Partial<Mutable<LaneItem>> & Pick<LaneItem, "id" | "lane" | "ki
     order: null,
     codes: [],
     severity: null,
-    facts: [],
-    ...p,
+    ...rest,
+    get facts() {
+      cached ??= facts ? facts() : [];
+      return cached;
+    },
   };
 }
 
@@ -109,7 +122,7 @@ export function buildLaneModel(
         hi: chain.rfInput.maxGHz,
         chain: chain.id,
         label: `RF input of chain ${chain.id}`,
-        facts: [["passband", ghzRange(chain.rfInput.minGHz, chain.rfInput.maxGHz)]],
+        facts: () => [["passband", ghzRange(chain.rfInput.minGHz, chain.rfInput.maxGHz)]],
       }),
     );
     const res = resonatorOf.get(chain.resonator);
@@ -138,7 +151,7 @@ export function buildLaneModel(
           chain: chain.id,
           label: `${n === wanted ? "wanted " : ""}mode ${s * n} of ${res.id} (chain ${chain.id})`,
           codes: n === wanted ? ["wanted"] : [],
-          facts: [
+          facts: () => [
             ["mode", `n = ${s * n}${n === wanted ? " (wanted)" : ""}`],
             ["centre", `${ghz(centre)} GHz (offset ${ghz(s * centre)} GHz)`],
             ["linewidth δ", mhz(delta)],
@@ -183,7 +196,7 @@ export function buildLaneModel(
           label: d === null ? `channel ${ch.name}` : `channel ${ch.name}, ${j === 0 ? "lower" : "upper"} passband`,
           codes: uniqueCodes(fs),
           severity: worstSeverity(fs),
-          facts,
+          facts: () => facts,
         }),
       );
       if (chain) {
@@ -203,12 +216,13 @@ export function buildLaneModel(
             label: `wanted sideband of ${ch.name}${d === null ? "" : j === 0 ? " (lower passband)" : " (upper passband)"}`,
             codes: uniqueCodes(fs.filter((f) => f.code === "lo-in-band")),
             severity: worstSeverity(fs.filter((f) => f.code === "lo-in-band")),
-            facts: [["optical offset", ghzRange(x[0], x[1])], ["RF passband", ghzRange(c - B / 2, c + B / 2)]],
+            facts: () => [["optical offset", ghzRange(x[0], x[1])], ["RF passband", ghzRange(c - B / 2, c + B / 2)]],
           }),
         );
       }
     });
-    if (r?.imageGHz) {
+    const img = r?.imageGHz ?? null;
+    if (r && img) {
       const imgF = fs.filter((f) => f.code === "image-response");
       items.push(
         item({
@@ -216,15 +230,15 @@ export function buildLaneModel(
           lane: "rf",
           kind: "image-band",
           row: RF_ROWS.image,
-          lo: r.imageGHz[0],
-          hi: r.imageGHz[1],
+          lo: img[0],
+          hi: img[1],
           chain: ch.chain,
           channel: ch.id,
           label: `image of ${ch.name}`,
           codes: uniqueCodes(imgF),
           severity: worstSeverity(imgF),
-          facts: [
-            ["image band", ghzRange(r.imageGHz[0], r.imageGHz[1])],
+          facts: () => [
+            ["image band", ghzRange(img[0], img[1])],
             ["image rejection", r.imageRejectionDB === null ? "no image response" : num(r.imageRejectionDB, 2, "dB")],
           ],
         }),
@@ -274,7 +288,7 @@ export function buildLaneModel(
           hi,
           chain: chain.id,
           label: `reach of laser pair ${laser.id}`,
-          facts: [["offsets", ghzRange(rg.minGHz, rg.maxGHz)]],
+          facts: () => [["offsets", ghzRange(rg.minGHz, rg.maxGHz)]],
         }),
       );
     });
@@ -290,7 +304,7 @@ export function buildLaneModel(
           hi,
           chain: chain.id,
           label: `feasible LO offsets`,
-          facts: [
+          facts: () => [
             ["offsets", ghzRange(a, b)],
             ["width", mhz(b - a)],
           ],
@@ -311,7 +325,7 @@ export function buildLaneModel(
           label: `blocked LO offsets (${ex.codes.join(", ")})`,
           codes: ex.codes,
           severity: "error",
-          facts: [
+          facts: () => [
             ["offsets", ghzRange(ex.bandGHz[0], ex.bandGHz[1])],
             ["width", mhz(ex.bandGHz[1] - ex.bandGHz[0])],
             ["blocked by", ex.codes.join(", ")],
@@ -329,7 +343,7 @@ export function buildLaneModel(
         hi: 0,
         chain: chain.id,
         label: `carrier (laser 1) of chain ${chain.id}`,
-        facts: [["carrier", laser ? `${ghz(laser.carrierTHz, 6)} THz` : "—"], ["offset", "0 GHz"]],
+        facts: () => [["carrier", laser ? `${ghz(laser.carrierTHz, 6)} THz` : "—"], ["offset", "0 GHz"]],
       }),
     );
     if (laser) {
@@ -348,7 +362,7 @@ export function buildLaneModel(
               chain: chain.id,
               order: m,
               label: `lock sideband ${sign > 0 ? "+" : "−"}${m}·fm`,
-              facts: [
+              facts: () => [
                 ["offset", `${ghz(x)} GHz`],
                 ["fm", mhz(fm)],
                 ["order", String(m)],
@@ -375,7 +389,7 @@ export function buildLaneModel(
         label: `LO (laser 2) of chain ${chain.id}`,
         codes: loCodes,
         severity: blockedHere.length > 0 ? "error" : worstSeverity(loFindings),
-        facts: [
+        facts: () => [
           ["LO offset", `${ghz(L)} GHz`],
           ["drift", `± ${mhz(D)}`],
           ["feasibility map", feasibleHere ? "inside a feasible interval" : blockedHere.length ? `blocked by ${loCodes.join(", ")}` : "outside the feasible set"],
@@ -396,7 +410,7 @@ export function buildLaneModel(
           hi: det.maxGHz,
           chain: chain.id,
           label: `detector ${det.id} usable band`,
-          facts: [["band", ghzRange(det.minGHz, det.maxGHz)]],
+          facts: () => [["band", ghzRange(det.minGHz, det.maxGHz)]],
         }),
       );
       const fsr = det.sampleRateGHz ?? null;
@@ -414,7 +428,7 @@ export function buildLaneModel(
               chain: chain.id,
               order: k,
               label: `Nyquist edge ${k}·fs/2`,
-              facts: [["frequency", `${ghz(k * half)} GHz`], ["sample rate", `${ghz(fsr)} GHz`]],
+              facts: () => [["frequency", `${ghz(k * half)} GHz`], ["sample rate", `${ghz(fsr)} GHz`]],
             }),
           );
         }
@@ -423,11 +437,13 @@ export function buildLaneModel(
     for (const ch of plan.channels) {
       if (ch.chain !== chain.id) continue;
       const r = chanResult.get(ch.id);
-      if (!r?.ifSlotGHz || !r.occupiedGHz) continue;
+      const slot = r?.ifSlotGHz ?? null;
+      const occ = r?.occupiedGHz ?? null;
+      if (!r || !slot || !occ) continue;
       const fs = findingsByChannel.get(ch.id) ?? [];
       const codes = uniqueCodes(fs);
       const sev = worstSeverity(fs);
-      const [g0, g1] = [r.occupiedGHz[0] - guard, r.occupiedGHz[1] + guard];
+      const [g0, g1] = [occ[0] - guard, occ[1] + guard];
       items.push(
         item({
           id: `${iLane}:guard:${ch.id}`,
@@ -439,35 +455,35 @@ export function buildLaneModel(
           chain: chain.id,
           channel: ch.id,
           label: `guard band of ${ch.name}`,
-          facts: [["occupied ± guard", ghzRange(g0, g1)], ["guard", mhz(guard)]],
+          facts: () => [["occupied ± guard", ghzRange(g0, g1)], ["guard", mhz(guard)]],
         }),
         item({
           id: `${iLane}:occupied:${ch.id}`,
           lane: iLane,
           kind: "occupied",
           row: IF_ROWS.slot,
-          lo: r.occupiedGHz[0],
-          hi: r.occupiedGHz[1],
+          lo: occ[0],
+          hi: occ[1],
           chain: chain.id,
           channel: ch.id,
           label: `occupied band of ${ch.name} (slot ± drift)`,
-          facts: [["occupied", ghzRange(r.occupiedGHz[0], r.occupiedGHz[1])], ["drift", `± ${mhz(D)}`]],
+          facts: () => [["occupied", ghzRange(occ[0], occ[1])], ["drift", `± ${mhz(D)}`]],
         }),
         item({
           id: `${iLane}:slot:${ch.id}`,
           lane: iLane,
           kind: "if-slot",
           row: IF_ROWS.slot,
-          lo: r.ifSlotGHz[0],
-          hi: r.ifSlotGHz[1],
+          lo: slot[0],
+          hi: slot[1],
           chain: chain.id,
           channel: ch.id,
           label: `IF slot of ${ch.name}`,
           codes,
           severity: sev,
-          facts: [
-            ["IF slot", ghzRange(r.ifSlotGHz[0], r.ifSlotGHz[1])],
-            ["occupied", ghzRange(r.occupiedGHz[0], r.occupiedGHz[1])],
+          facts: () => [
+            ["IF slot", ghzRange(slot[0], slot[1])],
+            ["occupied", ghzRange(occ[0], occ[1])],
             ["NEΔT", num(r.nedtK, 3, "K")],
             ["image rejection", r.imageRejectionDB === null ? "—" : num(r.imageRejectionDB, 2, "dB")],
             ["lock replica", num(r.lockReplicaDB, 2, "dB")],
@@ -494,7 +510,7 @@ export function buildLaneModel(
           label: `${sp.family} spur ${sp.source}, order ${sp.order}`,
           codes: sp.hits.length ? ["spur-in-slot"] : [],
           severity: spurSeverity(sp.family, sp.order, sp.hits.length),
-          facts: [
+          facts: () => [
             ["band", ghzRange(sp.bandGHz[0], sp.bandGHz[1])],
             ["family", sp.family],
             ["order", String(sp.order)],
@@ -529,7 +545,7 @@ export function buildLaneModel(
         lo: b.minGHz,
         hi: b.maxGHz,
         label: `protected passive band ${ghz(b.minGHz)}–${ghz(b.maxGHz)} GHz`,
-        facts: [["band", ghzRange(b.minGHz, b.maxGHz)], ["source", b.source]],
+        facts: () => [["band", ghzRange(b.minGHz, b.maxGHz)], ["source", b.source]],
       }),
     );
   });
@@ -544,7 +560,7 @@ export function buildLaneModel(
         lo: l.centreGHz,
         hi: l.centreGHz,
         label: `${l.label} line`,
-        facts: [["centre", `${ghz(l.centreGHz)} GHz`], ["source", l.source]],
+        facts: () => [["centre", `${ghz(l.centreGHz)} GHz`], ["source", l.source]],
       }),
     );
   });

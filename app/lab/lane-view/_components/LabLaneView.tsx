@@ -4,6 +4,7 @@ import { useMemo } from "react";
 import { parsePlan } from "@/schemas/plan";
 import { demoPlan } from "@/lib/lanes";
 import { LaneView } from "@/components/lane-view/LaneView";
+import type { FrameTime } from "@/components/lane-view/useLiveRecheck";
 import ex1 from "../../../../tests/fixtures/plans/ex1-single-channel.plan.json";
 import ex2 from "../../../../tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json";
 
@@ -12,12 +13,12 @@ const FIXTURES: Record<string, unknown> = { ex1, ex2 };
 declare global {
   interface Window {
     /** Frame times of the live re-check (ms), read by the lane view benchmark. */
-    __laneFrames?: number[];
+    __laneFrames?: FrameTime[];
   }
 }
 
-function recordFrame(ms: number) {
-  (window.__laneFrames ??= []).push(ms);
+function recordFrame(t: FrameTime) {
+  (window.__laneFrames ??= []).push(t);
 }
 
 export function LabLaneView({ name }: { name: string }) {

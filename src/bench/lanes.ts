@@ -1,0 +1,86 @@
+/**
+ * Lane view benchmark (`npm run bench:lanes`): opens the lab page with the
+ * invented 64-channel plan in Chromium (Debian's /usr/bin/chromium through
+ * playwright-core) against a running app (HETEROLANE_BENCH_URL, default
+ * http://localhost:3000), drags one chain's LO for N frames
+ * (HETEROLANE_BENCH_FRAMES, default 120) and prints the median and
+ * 95th-percentile time per frame measured in the page: re-check + React
+ * render and commit + style and layout ("work"), and the time to the next
+ * animation frame ("frame"). Target: work ≤ 16 ms. Starts nothing but
+ * Chromium.
+ */
+import { mkdtempSync, rmSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { chromium } from "playwright-core";
+
+interface FrameTime {
+  workMs: number;
+  frameMs: number;
+}
+
+function quantile(sorted: number[], q: number): number {
+  if (sorted.length === 0) return Number.NaN;
+  const i = Math.min(sorted.length - 1, Math.max(0, Math.ceil(q * sorted.length) - 1));
+  return sorted[i]!;
+}
+
+async function main() {
+  const base = (process.env.HETEROLANE_BENCH_URL ?? "http://localhost:3000").replace(/\/$/, "");
+  const frames = Math.max(10, Number(process.env.HETEROLANE_BENCH_FRAMES ?? 120));
+  const chain = process.env.HETEROLANE_BENCH_CHAIN ?? "wv183";
+  const userDir = mkdtempSync(join(tmpdir(), "heterolane-bench-"));
+  const context = await chromium.launchPersistentContext(userDir, {
+    executablePath: "/usr/bin/chromium",
+    headless: true,
+    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    viewport: { width: 1400, height: 1000 },
+  });
+  try {
+    const page = context.pages()[0] ?? (await context.newPage());
+    await page.goto(`${base}/lab/lane-view?plan=demo64`, { waitUntil: "load", timeout: 180_000 });
+    const handle = page.locator(`[data-item="optical:${chain}:lo"]`);
+    await handle.waitFor({ timeout: 180_000 });
+    const box = await handle.boundingBox();
+    if (!box) throw new Error("The LO handle is not visible.");
+    const x0 = box.x + box.width / 2;
+    const y0 = box.y + box.height - 6;
+    await page.mouse.move(x0, y0);
+    await page.mouse.down();
+    // Warm-up: a few moves before measuring.
+    for (let i = 0; i < 5; i++) await page.mouse.move(x0 + i * 2, y0);
+    await page.evaluate(() => {
+      window.__laneFrames = [];
+    });
+    for (let i = 0; i < frames; i++) {
+      // Sweep ±40 px about the start (several GHz at the opening zoom), crossing feasible and blocked offsets.
+      const dx = 40 * Math.sin((2 * Math.PI * i) / 60);
+      await page.mouse.move(x0 + dx, y0);
+      await page.evaluate(() => new Promise<void>((r) => requestAnimationFrame(() => requestAnimationFrame(() => r()))));
+    }
+    await page.mouse.up();
+    const times = (await page.evaluate(() => window.__laneFrames ?? [])) as FrameTime[];
+    if (times.length === 0) throw new Error("No frame was measured: the drag did not move the LO.");
+    const work = times.map((t) => t.workMs).sort((a, b) => a - b);
+    const frame = times.map((t) => t.frameMs).sort((a, b) => a - b);
+    const status = await page.locator(`[data-testid="lo-status-${chain}"]`).textContent();
+    console.log(`lane view, 64-channel demo plan, chain ${chain}: ${times.length} re-check frames measured of ${frames} moves`);
+    console.log(`  re-check + render (work): median ${quantile(work, 0.5).toFixed(2)} ms, p95 ${quantile(work, 0.95).toFixed(2)} ms, max ${work[work.length - 1]!.toFixed(2)} ms (target ≤ 16 ms)`);
+    console.log(`  to next animation frame:  median ${quantile(frame, 0.5).toFixed(2)} ms, p95 ${quantile(frame, 0.95).toFixed(2)} ms`);
+    console.log(`  LO status after the drag: ${status?.trim()}`);
+  } finally {
+    await context.close();
+    rmSync(userDir, { recursive: true, force: true });
+  }
+}
+
+declare global {
+  interface Window {
+    __laneFrames?: FrameTime[];
+  }
+}
+
+main().catch((e: unknown) => {
+  console.error(`bench:lanes failed: ${(e as Error).message}`);
+  process.exit(1);
+});
