@@ -37,7 +37,7 @@ export MAIL_FROM="${MAIL_FROM:-Heterolane <no-reply@heterolane.local>}"
 export HETEROLANE_DEV_MAIL="${HETEROLANE_DEV_MAIL:-1}"
 
 node_modules/.bin/tsx db/migrate.ts
-node_modules/.bin/tsx db/seed.ts
+node_modules/.bin/tsx --conditions=react-server db/seed.ts
 ensure_build
 
 set -m
