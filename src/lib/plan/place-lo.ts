@@ -32,12 +32,14 @@ export function placeLo(plan: Plan, chainId: string, feasibleGHz: readonly (read
   const multiples = (lo: number, hi: number): [number, number] | null => {
     if (stepMHz === 0) return null;
     let kLo = Math.ceil((lo * 1000) / stepMHz);
-    while (value(kLo - 1) >= lo - TOL) kLo--;
-    while (value(kLo) < lo - TOL) kLo++;
     let kHi = Math.floor((hi * 1000) / stepMHz);
-    while (value(kHi + 1) <= hi + TOL) kHi++;
-    while (value(kHi) > hi + TOL) kHi--;
-    return kLo <= kHi ? [kLo, kHi] : null;
+    // one correction step each way for rounding (the index estimate is off by at most one;
+    // loops here could never end when k·step cannot change by one step in double precision)
+    if (value(kLo - 1) >= lo - TOL) kLo--;
+    else if (value(kLo) < lo - TOL) kLo++;
+    if (value(kHi + 1) <= hi + TOL) kHi++;
+    else if (value(kHi) > hi + TOL) kHi--;
+    return Number.isFinite(kLo) && Number.isFinite(kHi) && kLo <= kHi ? [kLo, kHi] : null;
   };
 
   let best: { lo: number; hi: number; widthKHz: number; mid: number; ks: [number, number] | null } | null = null;

@@ -74,6 +74,61 @@ export function combRadius(c: Comb, level: number): number {
   return Math.min(r, c.fsr / 2);
 }
 
+/**
+ * Most grid points evaluated on one piece. Only absurd inputs (a piece
+ * millions of linewidths long inside an image window) reach it; the step
+ * is then coarser than min(δ, B)/16.
+ */
+export const MAX_GRID_POINTS = 2_000_000;
+
+/** Most mode windows enumerated; beyond it the whole range is searched. */
+const MAX_WINDOWS = 10_000;
+
+/**
+ * The L windows inside [lo, hi] where the image rule can fire for an SSB
+ * channel: `X'` must meet `±rfInput` (elsewhere `∫Wᵢ = 0`) and come within
+ * `r` of a mode centre, where `C(r) = 10^(−threshold/10)·∫W/B`
+ * (since `∫Wᵢ ≤ B·max C` over `X'`). Sorted and merged.
+ */
+export function imageWindows(c: Comb, m: MapModel, ch: MapChannel, lo: number, hi: number): [number, number][] {
+  const band = ch.bands[0];
+  if (!band) return [];
+  const [xl, xh] = band;
+  const level = Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / ch.widthGHz);
+  const r = combRadius(c, level);
+  if (r < 0) return [];
+  const out: [number, number][] = [];
+  for (const [e1, e2] of [
+    [-m.rfMax, -m.rfMin],
+    [m.rfMin, m.rfMax],
+  ] as const) {
+    // X' = [2L − xh, 2L − xl] meets [e1, e2]
+    const a = Math.max(lo, (e1 + xl) / 2);
+    const b = Math.min(hi, (e2 + xh) / 2);
+    if (!(b > a)) continue;
+    const nFirst = Math.ceil((e1 - r) / c.fsr);
+    const nLast = Math.floor((e2 + r) / c.fsr);
+    if (r >= c.fsr / 2 || !(nLast - nFirst < MAX_WINDOWS)) {
+      out.push([a, b]);
+      continue;
+    }
+    for (let n = nFirst; n <= nLast; n++) {
+      // X' within r of n·fsr: 2L − xh ≤ n·fsr + r and 2L − xl ≥ n·fsr − r
+      const wlo = Math.max(a, (n * c.fsr - r + xl) / 2);
+      const whi = Math.min(b, (n * c.fsr + r + xh) / 2);
+      if (whi > wlo) out.push([wlo, whi]);
+    }
+  }
+  out.sort((p, q) => p[0] - q[0]);
+  const merged: [number, number][] = [];
+  for (const w of out) {
+    const last = merged[merged.length - 1];
+    if (last && w[0] <= last[1]) last[1] = Math.max(last[1], w[1]);
+    else merged.push(w);
+  }
+  return merged;
+}
+
 /** Bisection bracket width for an image-rule map edge (GHz). */
 export const IMAGE_EDGE_BRACKET = 1e-6;
 
@@ -109,28 +164,11 @@ export function imageFiringIntervals(
   if (!band || !ch.ssb || !(hi > lo)) return [];
   const [xl, xh] = band;
   const B = ch.widthGHz;
-  const level = Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / B);
-  const r = combRadius(c, level);
-  if (r < 0) return [];
-  // Image band within r of mode n·fsr: 2L − xh ≤ n·fsr + r and 2L − xl ≥ n·fsr − r.
-  const windows: [number, number][] = [];
-  if (r >= c.fsr / 2) windows.push([lo, hi]);
-  else {
-    const nFirst = Math.ceil((2 * lo - xh - r) / c.fsr);
-    const nLast = Math.floor((2 * hi - xl + r) / c.fsr);
-    for (let n = nFirst; n <= nLast; n++) {
-      const wlo = Math.max(lo, (n * c.fsr - r + xl) / 2);
-      const whi = Math.min(hi, (n * c.fsr + r + xh) / 2);
-      if (whi > wlo) {
-        const last = windows[windows.length - 1];
-        if (last && wlo <= last[1]) last[1] = Math.max(last[1], whi);
-        else windows.push([wlo, whi]);
-      }
-    }
-  }
+  const windows = imageWindows(c, m, ch, lo, hi);
   const kinks: number[] = [];
   for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) kinks.push((e + xh) / 2, (e + xl) / 2);
   const step = Math.min(m.linewidth, B) / 16;
+  const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
   const fires = (L: number) => imageFires(c, m, ch, L);
   const out: [number, number][] = [];
   const push = (a: number, b: number) => {
@@ -146,7 +184,7 @@ export function imageFiringIntervals(
     for (let i = 0; i + 1 < cuts.length; i++) {
       const p = cuts[i] as number;
       const q = cuts[i + 1] as number;
-      const n = Math.max(1, Math.ceil((q - p) / step));
+      const n = gridCount(p, q);
       const gridL = (j: number) => (j === n ? q : p + ((q - p) * j) / n);
       const states = new Map<number, boolean>();
       const state = (j: number): boolean => {
@@ -161,7 +199,10 @@ export function imageFiringIntervals(
       const splits: number[] = [];
       const kFirst = Math.ceil((p - centreSum) / quarter);
       const kLast = Math.floor((q - centreSum) / quarter);
-      for (let k = kFirst; k <= kLast; k++) {
+      if (!(kLast - kFirst < n)) {
+        // more monotone runs than grid points (fsr far below the grid step): every grid point is its own run
+        for (let j = 0; j < n; j++) splits.push(j);
+      } else for (let k = kFirst; k <= kLast; k++) {
         const Lk = k * quarter + centreSum;
         if (Lk > p && Lk < q) {
           const j = Math.min(n - 1, Math.floor(((Lk - p) / (q - p)) * n));
@@ -222,27 +263,11 @@ export function imageFiringIntervalsByScan(
   if (!band || !ch.ssb || !(hi > lo)) return [];
   const [xl, xh] = band;
   const B = ch.widthGHz;
-  const level = Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / B);
-  const r = combRadius(c, level);
-  if (r < 0) return [];
-  const windows: [number, number][] = [];
-  if (r >= c.fsr / 2) windows.push([lo, hi]);
-  else {
-    const nFirst = Math.ceil((2 * lo - xh - r) / c.fsr);
-    const nLast = Math.floor((2 * hi - xl + r) / c.fsr);
-    for (let n = nFirst; n <= nLast; n++) {
-      const wlo = Math.max(lo, (n * c.fsr - r + xl) / 2);
-      const whi = Math.min(hi, (n * c.fsr + r + xh) / 2);
-      if (whi > wlo) {
-        const last = windows[windows.length - 1];
-        if (last && wlo <= last[1]) last[1] = Math.max(last[1], whi);
-        else windows.push([wlo, whi]);
-      }
-    }
-  }
+  const windows = imageWindows(c, m, ch, lo, hi);
   const kinks: number[] = [];
   for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) kinks.push((e + xh) / 2, (e + xl) / 2);
   const step = Math.min(m.linewidth, B) / 16;
+  const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
   const fires = (L: number) => imageFires(c, m, ch, L);
   const out: [number, number][] = [];
   const push = (a: number, b: number) => {
@@ -256,7 +281,7 @@ export function imageFiringIntervalsByScan(
     for (let i = 0; i + 1 < cuts.length; i++) {
       const p = cuts[i] as number;
       const q = cuts[i + 1] as number;
-      const n = Math.max(1, Math.ceil((q - p) / step));
+      const n = gridCount(p, q);
       let prevL = p;
       let prev = fires(p);
       let openAt: number | null = prev ? p : null;

@@ -1,5 +1,6 @@
 import { CODE_BIT, type MapModel } from "./map-model";
 import { combRadius, imageFires, makeComb } from "./map-image";
+import { MAX_LOCK_ORDER_ENUMERATED } from "./spurs";
 
 /**
  * The L-dependent error codes of one chain at one LO offset, evaluated
@@ -74,9 +75,23 @@ export function makePointEvaluator(m: MapModel): (L: number) => number {
   };
   // error spur families: carrier-beat, lock-lo (±m·fm), widened by D; lock-self fixed
   const movingOffsets: number[] = [0];
-  for (let k = 1; k <= m.lockOrders; k++) movingOffsets.push(-k * m.fm, k * m.fm);
+  // lock orders up to the engine's enumeration limit whose band can reach the detector
+  // somewhere in the reach (|L ± k·fm| − D ≤ detMax)
+  const M = Math.min(m.lockOrders, MAX_LOCK_ORDER_ENUMERATED);
+  const reachIF = m.detMax + m.drift;
+  const rLo = m.reach.length ? m.reach[0]![0] : 0;
+  const rHi = m.reach.length ? m.reach[m.reach.length - 1]![1] : 0;
+  for (const [sign, lo, hi] of [
+    [-1, rLo - reachIF, rHi + reachIF],
+    [1, -rHi - reachIF, -rLo + reachIF],
+  ] as const) {
+    const kLo = Math.max(1, Math.ceil(lo / m.fm));
+    const kHi = Math.min(M, Math.floor(hi / m.fm));
+    for (let k = kLo; k <= kHi; k++) movingOffsets.push(sign * k * m.fm);
+  }
   const fixedTones: number[] = [];
-  for (let k = 1; k <= 2 * m.lockOrders; k++) fixedTones.push(k * m.fm);
+  const kSelf = Math.min(2 * M, Math.floor(m.detMax / m.fm));
+  for (let k = 1; k <= kSelf; k++) fixedTones.push(k * m.fm);
   const spurCount = movingOffsets.length + fixedTones.length;
   const sLo = new Float64Array(spurCount);
   const sHi = new Float64Array(spurCount);

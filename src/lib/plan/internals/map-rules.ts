@@ -1,6 +1,7 @@
 import type { MapChannel, MapCode, MapModel } from "./map-model";
 import { MAP_CODES } from "./map-model";
 import { imageFiringIntervals, makeComb } from "./map-image";
+import { MAX_LOCK_ORDER_ENUMERATED } from "./spurs";
 import {
   absFn,
   clipFn,
@@ -85,18 +86,32 @@ export function slotFn(ch: MapChannel, r0: number, r1: number): IFn {
   return out;
 }
 
-/** The error spur bands of the chain (carrier-beat, lock-lo, lock-self) on [r0, r1], detector-clipped. */
+/**
+ * The error spur bands of the chain (carrier-beat, lock-lo, lock-self) on
+ * [r0, r1], detector-clipped. Lock orders are enumerated up to the engine's
+ * limit `MAX_LOCK_ORDER_ENUMERATED` (as the per-offset check does), and only
+ * those whose band can reach the detector band for some L in [r0, r1].
+ */
 export function errorSpurFns(m: MapModel, r0: number, r1: number): IFn[] {
   const D = m.drift;
   const out: IFn[] = [];
   const moving = (c: number): IFn =>
     clipFn(absFn([{ from: r0, to: r1, lo: lin(c - D, 1), hi: lin(c + D, 1) }]), m.detMin, m.detMax);
   out.push(moving(0)); // carrier-beat |L| ± D
-  for (let k = 1; k <= m.lockOrders; k++) {
-    out.push(moving(-k * m.fm)); // |L − k·fm| ± D
-    out.push(moving(k * m.fm)); // |L + k·fm| ± D
+  const M = Math.min(m.lockOrders, MAX_LOCK_ORDER_ENUMERATED);
+  const reachIF = m.detMax + D;
+  // |L − k·fm| ± D meets the detector only if k·fm ∈ [r0 − reachIF, r1 + reachIF];
+  // |L + k·fm| ± D only if k·fm ∈ [−r1 − reachIF, −r0 + reachIF]
+  for (const [sign, lo, hi] of [
+    [-1, r0 - reachIF, r1 + reachIF],
+    [1, -r1 - reachIF, -r0 + reachIF],
+  ] as const) {
+    const kLo = Math.max(1, Math.ceil(lo / m.fm));
+    const kHi = Math.min(M, Math.floor(hi / m.fm));
+    for (let k = kLo; k <= kHi; k++) out.push(moving(sign * k * m.fm));
   }
-  for (let k = 1; k <= 2 * m.lockOrders; k++) {
+  const kSelf = Math.min(2 * M, Math.floor(m.detMax / m.fm));
+  for (let k = 1; k <= kSelf; k++) {
     const f = k * m.fm; // lock-self, fixed tone
     if (f >= m.detMin && f <= m.detMax) out.push([{ from: r0, to: r1, lo: lin(f, 0), hi: lin(f, 0) }]);
   }
