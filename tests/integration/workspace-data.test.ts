@@ -273,3 +273,32 @@ describe("plan export/import round trip", () => {
     );
   }, 240_000);
 });
+
+describe("missions", () => {
+  it("refuses bad mission input, answers 413 to an oversized plan, and deletes a mission with everything in it", async () => {
+    const empty = await call(team.engineer, "POST", "/api/v1/missions", { name: "  " });
+    expect(empty.status).toBe(400);
+    expect(empty.body.error.issues).toEqual([{ path: "name", message: "is required" }]);
+    const extra = await call(team.engineer, "POST", "/api/v1/missions", { name: "ok", colour: "red" });
+    expect(extra.status).toBe(400);
+    const id = await missionWithPlan(team.engineer, validPlanInput());
+    const huge = { ...validPlanInput(), name: "x".repeat(5_100_000) };
+    const big = await call(team.engineer, "POST", `${M(id)}/plan`, huge);
+    expect(big.status).toBe(413);
+    const m = (await call(team.owner, "GET", M(id))).body;
+    const stale = await call(team.owner, "DELETE", `${M(id)}?version=${m.version - 1}`);
+    expect(stale.status).toBe(409);
+    expect((await call(team.viewer, "GET", M(id))).status).toBe(200);
+    const del = await call(team.owner, "DELETE", `${M(id)}?version=${m.version}`);
+    expect(del.status).toBe(200);
+    expect((await call(team.viewer, "GET", M(id))).status).toBe(404);
+    const { rows } = await testPool().query(
+      `select (select count(*) from lasers where mission_id = $1)::int as lasers,
+              (select count(*) from channels where mission_id = $1)::int as channels,
+              (select count(*) from plan_revisions where mission_id = $1)::int as revisions,
+              (select count(*) from activity where team_id = $2 and action = 'delete' and summary like '%' || $1 || '%')::int as logged`,
+      [id, team.teamId],
+    );
+    expect(rows[0]).toEqual({ lasers: 0, channels: 0, revisions: 0, logged: 1 });
+  });
+});
