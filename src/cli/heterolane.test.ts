@@ -9,8 +9,13 @@ import { validPlanInput } from "../../tests/fixtures/valid-plan";
 // cases never reach the engine; tests/reference/cli-check.test.ts covers
 // valid documents against checkPlan.
 const TSX = "node_modules/.bin/tsx";
-function cli(args: string[], input?: string) {
-  const r = spawnSync(TSX, ["src/cli/heterolane.ts", ...args], { input, encoding: "utf8", timeout: 30_000 });
+function cli(args: string[], input?: string, env: NodeJS.ProcessEnv = {}) {
+  const r = spawnSync(TSX, ["src/cli/heterolane.ts", ...args], {
+    input,
+    encoding: "utf8",
+    timeout: 30_000,
+    env: { ...process.env, INIT_CWD: undefined, ...env },
+  });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 
@@ -41,6 +46,11 @@ describe("heterolane command line (input errors)", { timeout: 60_000 }, () => {
     const sub = join(dir, "folder");
     mkdirSync(sub);
     expect(cli(["check", sub]).stderr).toMatch(/is a directory/);
+  });
+  it("a relative file name is read from the folder the command was typed in (npm's INIT_CWD)", () => {
+    writeFileSync(join(dir, "here.json"), "[");
+    const r = cli(["check", "here.json"], undefined, { INIT_CWD: dir });
+    expect(r).toEqual({ code: 2, stdout: "", stderr: "(document): not valid JSON: unexpected end of input at line 1, column 2\n" });
   });
   it("malformed JSON on stdin: exit 2 with the position", () => {
     const r = cli(["check", "-"], '{\n  "format": "heterolane.plan/1",\n  "name": }');

@@ -8,6 +8,7 @@
  * files and malformed JSON), 1 for an internal fault.
  */
 import { readFile } from "node:fs/promises";
+import { resolve } from "node:path";
 import { runCheck, type CheckOutcome } from "./run-check";
 
 const USAGE = `Usage: heterolane check <plan.json | ->
@@ -55,7 +56,9 @@ async function main(argv: string[]): Promise<CheckOutcome> {
   const source = rest[0]!;
   let text: string;
   try {
-    text = source === "-" ? await readStdin() : await readFile(source, "utf8");
+    // `npm run` starts the script in the project folder; INIT_CWD is where
+    // the person typed the command, so relative names are read from there.
+    text = source === "-" ? await readStdin() : await readFile(resolve(process.env.INIT_CWD ?? process.cwd(), source), "utf8");
   } catch (e) {
     return { exitCode: 2, stdout: "", stderr: `(document): cannot read ${JSON.stringify(source)}: ${describeReadError(e)}\n` };
   }

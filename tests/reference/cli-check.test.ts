@@ -10,7 +10,14 @@ import { parsePlanText } from "@/schemas/plan";
 const ROOT = join(__dirname, "../..");
 const TSX = join(ROOT, "node_modules/.bin/tsx");
 function cli(args: string[], input?: string) {
-  const r = spawnSync(TSX, ["src/cli/heterolane.ts", ...args], { cwd: ROOT, input, encoding: "utf8", timeout: 30_000 });
+  const r = spawnSync(TSX, ["src/cli/heterolane.ts", ...args], {
+    cwd: ROOT,
+    input,
+    encoding: "utf8",
+    timeout: 30_000,
+    // Relative names are read from INIT_CWD when npm sets it; these are relative to the project.
+    env: { ...process.env, INIT_CWD: ROOT },
+  });
   return { code: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 function expectedResult(file: string) {
