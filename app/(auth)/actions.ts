@@ -4,6 +4,7 @@ import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { auth } from "@/server/auth/auth";
 import { authError, isNextControlFlow, safeNext } from "@/server/auth/errors";
+import { consumeFormAttempt, type LimitedForm } from "@/server/auth/form-rate-limit";
 import { emailIsRegistered, listTeamsOf } from "@/server/auth/queries";
 import {
   ForgotPasswordSchema,
@@ -15,6 +16,12 @@ import {
 
 const TOO_MANY = "Too many attempts from this address. Wait a minute and try again.";
 
+/** A form-level refusal when this client has made too many attempts (see form-rate-limit.ts). */
+async function limited(form: LimitedForm): Promise<string[] | null> {
+  const wait = await consumeFormAttempt(form, await headers());
+  return wait > 0 ? [`Too many attempts from this address. Try again in ${wait} s.`] : null;
+}
+
 function verifyCallback(next: string | undefined): string {
   const n = safeNext(next, "");
   return n ? `/verify-email/result?next=${encodeURIComponent(n)}` : "/verify-email/result";
@@ -23,6 +30,8 @@ function verifyCallback(next: string | undefined): string {
 export async function signUpAction(_prev: unknown, formData: FormData) {
   const submission = parseWithZod(formData, { schema: SignUpSchema });
   if (submission.status !== "success") return submission.reply();
+  const tooMany = await limited("sign-up");
+  if (tooMany) return submission.reply({ formErrors: tooMany });
   const { name, email, password } = submission.value;
   const next = formData.get("next");
   if (await emailIsRegistered(email)) {
@@ -52,6 +61,8 @@ export async function signUpAction(_prev: unknown, formData: FormData) {
 export async function signInAction(_prev: unknown, formData: FormData) {
   const submission = parseWithZod(formData, { schema: SignInSchema });
   if (submission.status !== "success") return submission.reply();
+  const tooMany = await limited("sign-in");
+  if (tooMany) return submission.reply({ formErrors: tooMany });
   const { email, password, next } = submission.value;
   let userId: string;
   try {
@@ -79,6 +90,8 @@ export async function signInAction(_prev: unknown, formData: FormData) {
 export async function forgotPasswordAction(_prev: unknown, formData: FormData) {
   const submission = parseWithZod(formData, { schema: ForgotPasswordSchema });
   if (submission.status !== "success") return submission.reply();
+  const tooMany = await limited("forgot-password");
+  if (tooMany) return submission.reply({ formErrors: tooMany });
   try {
     await auth.api.requestPasswordReset({
       body: { email: submission.value.email, redirectTo: "/reset-password" },
@@ -96,6 +109,8 @@ export async function forgotPasswordAction(_prev: unknown, formData: FormData) {
 export async function resetPasswordAction(_prev: unknown, formData: FormData) {
   const submission = parseWithZod(formData, { schema: ResetPasswordSchema });
   if (submission.status !== "success") return submission.reply();
+  const tooMany = await limited("reset-password");
+  if (tooMany) return submission.reply({ formErrors: tooMany });
   try {
     await auth.api.resetPassword({
       body: { token: submission.value.token, newPassword: submission.value.password },
@@ -119,6 +134,8 @@ export async function resetPasswordAction(_prev: unknown, formData: FormData) {
 export async function resendVerificationAction(_prev: unknown, formData: FormData) {
   const submission = parseWithZod(formData, { schema: ResendVerificationSchema });
   if (submission.status !== "success") return submission.reply();
+  const tooMany = await limited("resend-verification");
+  if (tooMany) return submission.reply({ formErrors: tooMany });
   try {
     await auth.api.sendVerificationEmail({
       body: { email: submission.value.email, callbackURL: "/verify-email/result" },
