@@ -312,28 +312,39 @@ export function LaneChart({ model, width, domain, ifDomain, selectedId, onZoom, 
   }, [inner]);
 
   // Background drag pans; LO drag moves the LO.
-  const drag = useRef<{ kind: "pan"; axis: "ghz" | "if"; lastX: number } | { kind: "lo"; chain: string } | null>(null);
+  const drag = useRef<{ kind: "pan"; axis: "ghz" | "if"; lastX: number; startX: number; pointer: number; captured: boolean } | { kind: "lo"; chain: string } | null>(null);
+  // A click that ends a pan or an LO drag must not clear the selection.
+  const dragged = useRef(false);
   const onPointerDown = (e: React.PointerEvent<SVGSVGElement>) => {
     if (drag.current) return;
+    dragged.current = false;
     const r = e.currentTarget.getBoundingClientRect();
     const y = e.clientY - r.top;
-    drag.current = { kind: "pan", axis: y < layout.ifSection[0] ? "ghz" : "if", lastX: e.clientX };
-    e.currentTarget.setPointerCapture(e.pointerId);
+    // Pointer capture only once the pointer really moves, so clicks still reach the item under it.
+    drag.current = { kind: "pan", axis: y < layout.ifSection[0] ? "ghz" : "if", lastX: e.clientX, startX: e.clientX, pointer: e.pointerId, captured: false };
   };
   const onLoPointerDown = useMemo(
     () => (item: LaneItem, e: React.PointerEvent) => {
       if (!item.chain || !onLoDrag) return;
       e.stopPropagation();
       drag.current = { kind: "lo", chain: item.chain };
+      dragged.current = true;
       svgRef.current?.setPointerCapture(e.pointerId);
+      onSelect(item);
       onLoDrag(item.chain, item.lo, "start");
     },
-    [onLoDrag],
+    [onLoDrag, onSelect],
   );
   const onPointerMove = (e: React.PointerEvent<SVGSVGElement>) => {
     const d = drag.current;
     if (!d) return;
     if (d.kind === "pan") {
+      if (!d.captured) {
+        if (Math.abs(e.clientX - d.startX) < 4) return;
+        d.captured = true;
+        dragged.current = true;
+        e.currentTarget.setPointerCapture(d.pointer);
+      }
       const dx = e.clientX - d.lastX;
       if (dx === 0) return;
       d.lastX = e.clientX;
@@ -367,7 +378,10 @@ export function LaneChart({ model, width, domain, ifDomain, selectedId, onZoom, 
         onPointerMove={onPointerMove}
         onPointerUp={onPointerUp}
         onPointerCancel={() => (drag.current = null)}
-        onClick={() => onSelect(null)}
+        onClick={() => {
+          if (!dragged.current) onSelect(null);
+          dragged.current = false;
+        }}
         data-testid="lane-chart"
       >
         <defs>
