@@ -362,7 +362,8 @@ function DetailsPanel({ item, result, onZoom }: { item: LaneItem | null; result:
     );
   const related = result.findings.filter((f) => {
     if (item.channel) return f.channel === item.channel && (item.kind !== "image-band" || f.code === "image-response");
-    if (item.kind === "lo" || item.kind === "blocked" || item.kind === "feasible") return f.chain === item.chain && f.channel === null;
+    if (item.kind === "lo" || item.kind === "blocked" || item.kind === "feasible")
+      return f.chain === item.chain && (f.channel === null || (item.kind === "lo" && item.codes.includes(f.code)));
     if (item.kind === "spur") return f.chain === item.chain && f.code === "spur-in-slot";
     return false;
   });
