@@ -31,6 +31,7 @@ import {
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { inTransaction, lockMission, type Queryable, type Tx } from "./tx";
 import { getMissionRow } from "./queries";
+import { assemblePlan } from "./assemble";
 
 /* eslint-disable @typescript-eslint/no-explicit-any -- one table-driven service for five entity kinds */
 type AnyRow = { id: string; key: string; version: number; missionId: string; position: number } & Record<string, any>;
@@ -115,6 +116,33 @@ export async function getEntity(actor: Actor, missionId: string, kind: EntityKin
   return KINDS[kind].dto(await findRow(db, kind, missionId, id, false));
 }
 
+/** Plan-document field names that differ from the entity form's. */
+const FORM_FIELD: Record<string, string> = { id: "key", laser: "laserId", resonator: "resonatorId", detector: "detectorId", chain: "chainId" };
+
+/**
+ * Re-checks after a row change; when the assembled plan is invalid, issues
+ * about the changed row are renamed to the form's fields (`chains[1].laser`
+ * → `laserId`) so a form can show them beside the field; issues about other
+ * rows keep their plan-document path.
+ */
+async function checkAfter(tx: Tx, missionId: string, actor: Actor, kind: EntityKind, key: string, note: Parameters<typeof saveAndCheck>[3]) {
+  try {
+    return await saveAndCheck(tx, missionId, actor, note);
+  } catch (e) {
+    if (!(e instanceof HttpError) || e.code !== "invalid-plan" || !e.issues) throw e;
+    const plan = await assemblePlan(tx, missionId);
+    const index = (plan[kind] as { id: string }[]).findIndex((r) => r.id === key);
+    const prefix = `${kind}[${index}].`;
+    const issues = e.issues.map((i) => {
+      if (index < 0 || !i.path.startsWith(prefix)) return i;
+      const rest = i.path.slice(prefix.length);
+      const head = rest.split(/[.[]/)[0] ?? rest;
+      return { ...i, path: (FORM_FIELD[head] ?? head) + rest.slice(head.length) };
+    });
+    throw new HttpError(e.status, e.code, e.message, issues, e.extra);
+  }
+}
+
 export type MutationResult = { entity: Record<string, unknown>; revision: RevisionInfo };
 
 export async function createEntity(actor: Actor, missionId: string, kind: EntityKind, body: unknown): Promise<MutationResult> {
@@ -137,7 +165,7 @@ export async function createEntity(actor: Actor, missionId: string, kind: Entity
     } catch (e) {
       throw mapDbError(e, k.singular);
     }
-    const revision = await saveAndCheck(tx, missionId, actor, {
+    const revision = await checkAfter(tx, missionId, actor, kind, row.key, {
       action: "create",
       entity: `${k.singular} ${row.key}`,
       summary: `Added ${k.singular} ${row.key}.`,
@@ -180,7 +208,7 @@ export async function updateEntity(
     const fields = Object.keys(changes).filter(
       (f) => JSON.stringify(k.inputOf(current)[f]) !== JSON.stringify((input as Record<string, unknown>)[f]),
     );
-    const revision = await saveAndCheck(tx, missionId, actor, {
+    const revision = await checkAfter(tx, missionId, actor, kind, row.key, {
       action: "update",
       entity: `${k.singular} ${row.key}`,
       summary: fields.length
