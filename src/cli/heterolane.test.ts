@@ -9,7 +9,7 @@ import { validPlanInput } from "../../tests/fixtures/valid-plan";
 // cases never reach the engine; tests/reference/cli-check.test.ts covers
 // valid documents against checkPlan.
 const TSX = "node_modules/.bin/tsx";
-function cli(args: string[], input?: string, env: NodeJS.ProcessEnv = {}) {
+function cli(args: string[], input?: string, env: Record<string, string | undefined> = {}) {
   const r = spawnSync(TSX, ["src/cli/heterolane.ts", ...args], {
     input,
     encoding: "utf8",
