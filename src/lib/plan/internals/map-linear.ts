@@ -123,9 +123,35 @@ function foldLin(f: Lin, z: number, h: number): Lin {
   return z % 2 === 0 ? { a: f.a - z * h, b: f.b } : { a: (z + 1) * h - f.a, b: -f.b };
 }
 
-/** One folded piece: `zone` is the Nyquist zone of a band that does not straddle, −1 when it straddles. */
+/**
+ * One folded piece: `zone` is the Nyquist zone of a band that does not
+ * straddle, `STRADDLES` (−1) when it straddles, `UNRESOLVED` (−2) where the
+ * zone edges were not enumerated (see `MAX_ZONE_CROSSINGS`).
+ */
 export interface FoldedPiece extends Piece {
   zone: number;
+}
+export const STRADDLES = -1;
+export const UNRESOLVED = -2;
+
+/**
+ * Most zone edges enumerated on one piece. Real plans stay far below it (a
+ * 300 GHz reach sampled at 1 GS/s has 600); only absurd magnitudes (a reach
+ * of 1e300 GHz, a sample rate of 1e-299 GHz) exceed it. Beyond it a piece
+ * is left unresolved: folded to all of `[0, fs/2]` and treated as firing
+ * (conservatively) by the rules that fold — the exact map there would have
+ * more intervals than can be listed.
+ */
+export const MAX_ZONE_CROSSINGS = 20_000;
+
+/** How many multiples of h the edges of a piece cross (an estimate, ≥ the exact count − 2). */
+function zoneCrossings(p: Piece, h: number): number {
+  return (Math.abs(at(p.lo, p.to) - at(p.lo, p.from)) + Math.abs(at(p.hi, p.to) - at(p.hi, p.from))) / h;
+}
+
+/** The band is wider than `w` over the whole piece (its width is linear in L). */
+function widerThan(p: Piece, w: number): boolean {
+  return at(p.hi, p.from) - at(p.lo, p.from) > w && at(p.hi, p.to) - at(p.lo, p.to) > w;
 }
 
 /**
@@ -137,6 +163,15 @@ export interface FoldedPiece extends Piece {
 export function foldFn(fn: IFn, h: number): FoldedPiece[] {
   const out: FoldedPiece[] = [];
   for (const p of fn) {
+    if (widerThan(p, 2 * h)) {
+      // holds a whole zone everywhere: folds onto all of [0, h] and straddles
+      out.push({ from: p.from, to: p.to, lo: lin(0, 0), hi: lin(h, 0), zone: STRADDLES });
+      continue;
+    }
+    if (!(zoneCrossings(p, h) <= MAX_ZONE_CROSSINGS)) {
+      out.push({ from: p.from, to: p.to, lo: lin(0, 0), hi: lin(h, 0), zone: UNRESOLVED });
+      continue;
+    }
     const pts: number[] = [];
     multipleCrossings(p.lo, h, p.from, p.to, pts);
     multipleCrossings(p.hi, h, p.from, p.to, pts);
@@ -260,6 +295,12 @@ export function outsideSet(fn: IFn, min: number, max: number, out: LSet): void {
 /** Where the interior of `[lo, hi]` holds a multiple `k·h`, k ≥ 1. */
 export function straddleSet(fn: IFn, h: number, out: LSet): void {
   for (const p of fn) {
+    if ((widerThan(p, h) && at(p.hi, p.from) > h && at(p.hi, p.to) > h) || !(zoneCrossings(p, h) <= MAX_ZONE_CROSSINGS)) {
+      // wider than a zone and reaching past h: some k·h (k ≥ 1) is always inside;
+      // or too many zone edges to enumerate: marked as firing (conservative, see MAX_ZONE_CROSSINGS)
+      out.push([p.from, p.to]);
+      continue;
+    }
     const l0 = at(p.lo, p.from);
     const l1 = at(p.lo, p.to);
     const h0 = at(p.hi, p.from);

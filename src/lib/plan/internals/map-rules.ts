@@ -11,6 +11,8 @@ import {
   straddleSet,
   widen,
   withinGuardSet,
+  STRADDLES,
+  UNRESOLVED,
   type FoldedPiece,
   type IFn,
   type Lin,
@@ -151,7 +153,8 @@ export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
       straddleSet(O, h, sets["nyquist-straddle"]);
       const f = foldFn(O, h);
       folded.push(f);
-      foldedClear.push(f.filter((p) => p.zone >= 0));
+      // alias-overlap leaves straddling bands out; unresolved pieces stay in (and fire, conservatively)
+      foldedClear.push(f.filter((p) => p.zone !== STRADDLES));
     }
   }
 
@@ -172,7 +175,7 @@ export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
   }
 
   if (h !== null) {
-    const differentZone = (p: FoldedPiece, q: FoldedPiece) => p.zone !== q.zone;
+    const differentZone = (p: FoldedPiece, q: FoldedPiece) => p.zone !== q.zone || p.zone === UNRESOLVED;
     for (let i = 0; i < n; i++) {
       for (let j = i + 1; j < n; j++) {
         withinGuardSet(foldedClear[i]!, foldedClear[j]!, g, sets["alias-overlap"], differentZone);
