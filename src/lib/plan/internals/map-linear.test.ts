@@ -1,7 +1,22 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { absInterval, intersect } from "./intervals";
-import { absFn, at, clipFn, foldFn, lin, straddleSet, withinGuardSet, outsideSet, type IFn, type LSet, type Piece } from "./map-linear";
+import {
+  absFn,
+  at,
+  clipFn,
+  foldFn,
+  lin,
+  MAX_ZONE_CROSSINGS,
+  outsideSet,
+  straddleSet,
+  STRADDLES,
+  UNRESOLVED,
+  withinGuardSet,
+  type IFn,
+  type LSet,
+  type Piece,
+} from "./map-linear";
 import { foldInterval, interiorNyquistEdge } from "./nyquist";
 
 /**
@@ -127,5 +142,31 @@ describe("piecewise-linear interval functions of L", () => {
     expect(out).toEqual([]);
     withinGuardSet(a, b, 0.05 + 2e-9, out);
     expect(out).toEqual([[0, 10]]);
+  });
+
+  it("work stays bounded: wide bands fold in closed form, endless zone edges are left unresolved", () => {
+    // a band 10 GHz wide with fs/2 = 2 holds a whole zone at every L: [0, 2], straddling, one piece
+    const wide: IFn = [{ from: -1e12, to: 1e12, lo: lin(1e12 + 5, 1), hi: lin(1e12 + 15, 1) }];
+    expect(foldFn(wide, 2)).toEqual([{ from: -1e12, to: 1e12, lo: lin(0, 0), hi: lin(2, 0), zone: STRADDLES }]);
+    const st: LSet = [];
+    straddleSet(wide, 2, st);
+    expect(st).toEqual([[-1e12, 1e12]]);
+    // a narrow band sweeping far more zone edges than the limit: one unresolved piece, and the
+    // straddle rule marked as firing over it (conservative)
+    const sweep: IFn = [{ from: 0, to: 1e9, lo: lin(0.5, 1), hi: lin(0.51, 1) }];
+    expect(1e9 / 2).toBeGreaterThan(MAX_ZONE_CROSSINGS);
+    const folded = foldFn(sweep, 2);
+    expect(folded).toHaveLength(1);
+    expect(folded[0]!.zone).toBe(UNRESOLVED);
+    const st2: LSet = [];
+    straddleSet(sweep, 2, st2);
+    expect(st2).toEqual([[0, 1e9]]);
+    // below the limit the same band is enumerated exactly: it straddles 2k for L in (2k − 0.51, 2k − 0.5)
+    const short: IFn = [{ from: 0, to: 10, lo: lin(0.5, 1), hi: lin(0.51, 1) }];
+    const st3: LSet = [];
+    straddleSet(short, 2, st3);
+    expect(st3.length).toBe(5);
+    expect(st3[0]![0]).toBeCloseTo(1.49, 12);
+    expect(st3[0]![1]).toBeCloseTo(1.5, 12);
   });
 });
