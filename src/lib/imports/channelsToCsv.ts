@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { CHANNEL_COLUMNS } from "./internals/channelColumns";
+import { CHANNEL_COLUMNS, TEXT_CHANNEL_COLUMNS, guardText } from "./internals/channelColumns";
 
 export interface ChannelCsvSource {
   key: string;
@@ -17,14 +17,16 @@ export interface ChannelCsvSource {
 
 /**
  * Writes channels as the CSV that parseChannelCsv reads back (same columns,
- * numbers in their shortest exact decimal form, null as a blank cell), so an
+ * numbers in their shortest exact decimal form, null as a blank cell, text
+ * that a spreadsheet would run as a formula guarded by an apostrophe), so an
  * export imported again gives the same channels.
  */
 export function channelsToCsv(channels: readonly ChannelCsvSource[]): string {
   const data = channels.map((c) =>
     CHANNEL_COLUMNS.map((col) => {
       const v = c[col];
-      return v === null ? "" : String(v);
+      if (v === null) return "";
+      return TEXT_CHANNEL_COLUMNS.has(col) ? guardText(String(v)) : String(v);
     }),
   );
   return Papa.unparse({ fields: [...CHANNEL_COLUMNS], data }, { newline: "\r\n", quotes: false }) + "\r\n";

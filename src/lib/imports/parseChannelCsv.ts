@@ -1,6 +1,12 @@
 import { channelSchema, type ChannelInput } from "@/schemas/workspace";
 import { readCsv, readNumber, type FileIssue } from "./internals/csv";
-import { BLANK_ALLOWED, CHANNEL_COLUMNS, NUMERIC_CHANNEL_COLUMNS, REQUIRED_CHANNEL_COLUMNS } from "./internals/channelColumns";
+import {
+  BLANK_ALLOWED,
+  CHANNEL_COLUMNS,
+  NUMERIC_CHANNEL_COLUMNS,
+  REQUIRED_CHANNEL_COLUMNS,
+  unguardText,
+} from "./internals/channelColumns";
 
 export interface ChannelCsvRow {
   row: number;
@@ -27,7 +33,7 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
   const firstRowOfKey = new Map<string, number>();
   const rows: ChannelCsvRow[] = table.records.map((rec) => {
     const errors: ChannelCsvRow["errors"] = [];
-    const input: Record<string, unknown> = { key: rec.cells.key ?? "", name: rec.cells.name ?? "" };
+    const input: Record<string, unknown> = { key: unguardText(rec.cells.key ?? ""), name: unguardText(rec.cells.name ?? "") };
     for (const col of NUMERIC_CHANNEL_COLUMNS) {
       const cell = rec.cells[col] ?? "";
       if (cell === "" && BLANK_ALLOWED.has(col)) continue;
@@ -35,7 +41,7 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
       if (n.ok) input[col] = n.value;
       else errors.push({ column: col, message: n.message });
     }
-    const chainKey = rec.cells.chain ?? "";
+    const chainKey = unguardText(rec.cells.chain ?? "");
     const chainId = chainByKey.get(chainKey);
     if (chainKey === "") errors.push({ column: "chain", message: "is empty (a chain key is required)" });
     else if (!chainId) errors.push({ column: "chain", message: `no chain has the key "${chainKey.slice(0, 64)}"` });

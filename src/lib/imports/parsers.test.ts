@@ -99,7 +99,10 @@ describe("parseDetectorResponse", () => {
 
 const channelArb = fc.record({
   key: fc.stringMatching(/^[A-Za-z0-9][A-Za-z0-9._-]{0,8}$/),
-  name: fc.string({ minLength: 1, maxLength: 20 }).filter((s) => s.trim() === s && s.length > 0),
+  name: fc
+    .tuple(fc.constantFrom("", "=", "+", "-", "@", "'", "'="), fc.string({ minLength: 1, maxLength: 20 }))
+    .map(([head, tail]) => head + tail)
+    .filter((s) => s.trim() === s && s.length > 0),
   chain: fc.constantFrom("A", "B"),
   centerGHz: fc.double({ min: 1, max: 400, noNaN: true }),
   bandwidthMHz: fc.double({ min: 0.1, max: 500, noNaN: true }),
@@ -130,6 +133,14 @@ describe("channel CSV", () => {
       }),
       { numRuns: 60 },
     );
+  });
+
+  it("guards text a spreadsheet would run as a formula and reads it back unchanged", () => {
+    const src = { key: "f1", name: "=HYPERLINK(\"x\")", chain: "A", centerGHz: 1, bandwidthMHz: 1, dsbOffsetGHz: null, integrationMs: 1, antennaK: 1, receiverK: 1, gainStability: 0, requiredNedtK: null };
+    const csv = channelsToCsv([src]);
+    expect(csv.split("\r\n")[1]).toBe('f1,"\'=HYPERLINK(""x"")",A,1,1,,1,1,1,0,');
+    const back = parseChannelCsv(csv, CHAINS);
+    expect(back.ok && back.rows[0]?.channel?.name).toBe(src.name);
   });
 
   it("lists every bad cell by row and column and is valid only when no row has errors", () => {

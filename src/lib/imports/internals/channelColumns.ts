@@ -37,3 +37,20 @@ export const NUMERIC_CHANNEL_COLUMNS = [
 
 /** Columns whose blank cell means null (or the default 0 for gainStability). */
 export const BLANK_ALLOWED = new Set<string>(["dsbOffsetGHz", "gainStability", "requiredNedtK"]);
+
+/** Text columns of the channel CSV. */
+export const TEXT_CHANNEL_COLUMNS = new Set<string>(["key", "name", "chain"]);
+
+/**
+ * Spreadsheet formula guard (OWASP, "CSV Injection"): a text cell starting
+ * with = + - @ or a tab/carriage return (after any apostrophes) is written
+ * with one more leading apostrophe, which spreadsheets show as text; the
+ * reader removes exactly that apostrophe, so the pair is a bijection.
+ */
+const GUARDED = /^'*[=+\-@\t\r]/;
+export function guardText(cell: string): string {
+  return GUARDED.test(cell) ? `'${cell}` : cell;
+}
+export function unguardText(cell: string): string {
+  return cell.startsWith("'") && GUARDED.test(cell.slice(1)) ? cell.slice(1) : cell;
+}
