@@ -5,25 +5,16 @@
  * Screenshots go to HETEROLANE_TEST_OUTPUT (default test-output).
  */
 import { readFileSync } from "node:fs";
-import { mkdir } from "node:fs/promises";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { chromium, type Browser, type BrowserContext, type Page } from "playwright-core";
+import type { Page } from "playwright-core";
 import { BASE_URL, closeTestPool, makeTeamWithRoles, type TeamWithRoles, type TestClient } from "../setup/auth-helpers";
+import { launchBrowser, screenshot } from "../setup/browser";
 
-// Debian's Chromium, never a downloaded browser (docs: stack.md).
-const launchBrowser = () =>
-  chromium.launch({
-    executablePath: "/usr/bin/chromium",
-    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
-  });
-
-const OUT = process.env.HETEROLANE_TEST_OUTPUT ?? "test-output";
 // Example 1 of the plan format (one 10 MHz channel at the 183.31 GHz water-vapour line; NEΔT 17.92 K against 20 K).
 const PLAN = JSON.parse(readFileSync(path.join(__dirname, "../fixtures/plans/ex1-single-channel.plan.json"), "utf8"));
 
 let team: TeamWithRoles;
-let browser: Browser;
 let missionId = "";
 let channel: { id: string; version: number; requiredNedtK: number | null };
 
@@ -33,22 +24,22 @@ async function json(c: TestClient, p: string, init: Parameters<TestClient["fetch
   return { status: res.status, body: text ? JSON.parse(text) : null };
 }
 
-async function pageAs(c: TestClient): Promise<{ ctx: BrowserContext; page: Page }> {
-  const ctx = await browser.newContext({ viewport: { width: 1400, height: 1000 } });
+/** A fresh Chromium signed in as `c` (its session cookies copied into the browser). */
+async function pageAs(c: TestClient): Promise<{ ctx: { close(): Promise<void> }; page: Page }> {
+  const ctx = await launchBrowser({ width: 1400, height: 1000 });
   const host = new URL(BASE_URL).hostname;
-  await ctx.addCookies([...c.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })));
-  const page = await ctx.newPage();
+  await ctx.context.addCookies([...c.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })));
+  const page = ctx.page;
   page.setDefaultTimeout(120_000);
   page.setDefaultNavigationTimeout(180_000);
   return { ctx, page };
 }
 
 async function shot(page: Page, name: string) {
-  await page.screenshot({ path: path.join(OUT, `workspace-${name}.png`), fullPage: true });
+  await screenshot(page, `workspace-${name}`);
 }
 
 beforeAll(async () => {
-  await mkdir(OUT, { recursive: true });
   team = await makeTeamWithRoles();
   const created = await json(team.engineer, "/api/v1/missions", { method: "POST", json: { name: "E2E workspace mission (test data)" } });
   expect(created.status).toBe(201);
@@ -59,11 +50,9 @@ beforeAll(async () => {
   expect(list.status).toBe(200);
   channel = list.body.channels[0];
   expect(channel.requiredNedtK).toBe(20);
-  browser = await launchBrowser();
 }, 300_000);
 
 afterAll(async () => {
-  await browser?.close();
   await closeTestPool();
 });
 

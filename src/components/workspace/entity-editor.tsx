@@ -26,6 +26,7 @@ import {
   laserGroups,
   resonatorDefaults,
   resonatorGroups,
+  nextKey,
   rowToFormValue,
   settingsGroups,
 } from "./entity-specs";
@@ -44,6 +45,8 @@ export interface Refs {
   resonators: Resonator[];
   detectors: Detector[];
   chains: Chain[];
+  /** Plan ids of the channels already in the mission (for the next free id). */
+  channelKeys: string[];
 }
 
 const opts = (rows: { id: string; key: string }[]) => rows.map((r) => ({ value: r.id, label: r.key }));
@@ -51,11 +54,19 @@ const opts = (rows: { id: string; key: string }[]) => rows.map((r) => ({ value: 
 function specFor(kind: Collection, refs: Refs): { groups: FieldGroup[]; schema: unknown; defaults: Record<string, unknown> } {
   switch (kind) {
     case "lasers":
-      return { groups: laserGroups(), schema: laserSchema, defaults: laserDefaults };
+      return { groups: laserGroups(), schema: laserSchema, defaults: { ...laserDefaults, key: nextKey(refs.lasers.map((r) => r.key), "LP") } };
     case "resonators":
-      return { groups: resonatorGroups(), schema: resonatorSchema, defaults: resonatorDefaults };
+      return {
+        groups: resonatorGroups(),
+        schema: resonatorSchema,
+        defaults: { ...resonatorDefaults, key: nextKey(refs.resonators.map((r) => r.key), "R") },
+      };
     case "detectors":
-      return { groups: detectorGroups(), schema: detectorSchema, defaults: detectorDefaults };
+      return {
+        groups: detectorGroups(),
+        schema: detectorSchema,
+        defaults: { ...detectorDefaults, key: nextKey(refs.detectors.map((r) => r.key), "D") },
+      };
     case "chains":
       return {
         groups: chainGroups({ lasers: opts(refs.lasers), resonators: opts(refs.resonators), detectors: opts(refs.detectors) }),
@@ -72,16 +83,9 @@ function specFor(kind: Collection, refs: Refs): { groups: FieldGroup[]; schema: 
       return {
         groups: channelGroups({ chains: opts(refs.chains) }),
         schema: channelSchema,
-        defaults: { ...channelDefaults, chainId: refs.chains[0]?.id ?? "" },
+        defaults: { ...channelDefaults, key: nextKey(refs.channelKeys, "ch"), chainId: refs.chains[0]?.id ?? "" },
       };
   }
-}
-
-/** The first of `preferred` not yet used, else prefix + the next free number. */
-export function nextKey(used: readonly string[], prefix: string, preferred: readonly string[] = []): string {
-  const taken = new Set(used);
-  for (const p of preferred) if (!taken.has(p)) return p;
-  for (let i = 1; ; i++) if (!taken.has(`${prefix}${i}`)) return `${prefix}${i}`;
 }
 
 /** Create or edit one entity of the mission (the row is null for a new one). */

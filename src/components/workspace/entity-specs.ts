@@ -214,3 +214,10 @@ export function rowToFormValue(row: Record<string, unknown>): Record<string, unk
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, missionId: _m, revision: _r, ...rest } = row;
   return rest;
 }
+
+/** The first of `preferred` not yet used, else prefix + the lowest free number (new plan ids). */
+export function nextKey(used: readonly string[], prefix: string, preferred: readonly string[] = []): string {
+  const taken = new Set(used);
+  for (const p of preferred) if (!taken.has(p)) return p;
+  for (let i = 1; ; i++) if (!taken.has(`${prefix}${i}`)) return `${prefix}${i}`;
+}

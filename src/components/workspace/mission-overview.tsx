@@ -42,6 +42,7 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
     resonators: resonators.data ?? [],
     detectors: detectors.data ?? [],
     chains: chains.data ?? [],
+    channelKeys: (channels.data ?? []).map((c) => c.key),
   };
   const findings = result.data?.findings ?? [];
   const counts = countBySeverity(findings);

@@ -30,7 +30,7 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
   const [query, setQuery] = useState("");
   const [status, setStatus] = useState("");
   const [creating, setCreating] = useState(false);
-  const rows = missions.data ?? [];
+  const rows = useMemo(() => missions.data ?? [], [missions.data]);
   const statuses = useMemo(() => [...new Set(rows.map((m) => m.status))].sort(), [rows]);
   const shown = useMemo(
     () =>
