@@ -99,12 +99,14 @@ export function ActionButton({
   label,
   confirmText,
   danger = false,
+  large = false,
 }: {
   action: SmallAction;
   fields: Record<string, string>;
   label: string;
   confirmText?: string;
   danger?: boolean;
+  large?: boolean;
 }) {
   const [state, formAction, pending] = useActionState(action, undefined);
   return (
@@ -121,8 +123,12 @@ export function ActionButton({
       <button
         type="submit"
         disabled={pending}
-        className={`rounded border px-2 py-1 text-xs ${
-          danger ? "border-sev-error/40 text-sev-error hover:bg-red-50" : "border-ink/30 hover:bg-ink-faint"
+        className={`rounded border ${large ? "px-4 py-2 text-sm font-medium" : "px-2 py-1 text-xs"} ${
+          danger
+            ? "border-sev-error/40 text-sev-error hover:bg-red-50"
+            : large
+              ? "border-ink bg-ink text-white hover:bg-ink-soft"
+              : "border-ink/30 hover:bg-ink-faint"
         }`}
       >
         {label}

@@ -111,8 +111,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ id:
       </h1>
       {intro}
       <div className="flex flex-wrap items-start gap-3">
-        <ActionButton action={acceptInvitationAction} fields={{ invitationId: inv.id }} label="Accept and join the team" />
-        <ActionButton action={declineInvitationAction} fields={{ invitationId: inv.id }} label="Decline" danger />
+        <ActionButton action={acceptInvitationAction} fields={{ invitationId: inv.id }} label="Accept and join the team" large />
+        <ActionButton action={declineInvitationAction} fields={{ invitationId: inv.id }} label="Decline" danger large />
       </div>
     </>
   );
