@@ -8,12 +8,21 @@ import type { Actor } from "@/server/auth/actor";
 import { assemblePlan } from "./assemble";
 import { getMissionRow } from "./queries";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
-import { inTransaction, lockMission, type Tx } from "./tx";
+import { inTransaction, lockMission, type Queryable, type Tx } from "./tx";
 
-/** The `heterolane.plan/1` document of the mission's current draft. */
-export async function getPlanDocument(actor: Actor, missionId: string) {
-  await getMissionRow(actor, missionId);
-  return assemblePlan(db, missionId);
+/**
+ * The `heterolane.plan/1` document of the mission's current draft. No team
+ * check: callers check access first (getMissionRow) or pass a mission they
+ * already hold.
+ */
+export async function getPlanDocument(missionId: string, q: Queryable = db) {
+  return assemblePlan(q, missionId);
+}
+
+/** The draft plan document of a mission of the actor's team (404 otherwise). */
+export async function exportPlanDocument(actor: Actor, missionId: string) {
+  const m = await getMissionRow(actor, missionId);
+  return assemblePlan(db, m.id);
 }
 
 /**

@@ -1,9 +1,9 @@
-import { CAN, getPlanDocument, guarded, importPlanDocument, json, readJsonBody } from "@/server/workspace";
+import { CAN, exportPlanDocument, guarded, importPlanDocument, json, readJsonBody } from "@/server/workspace";
 
 type P = "missionId";
 
 export const GET = guarded<P>(CAN.export, "export the plan", async ({ actor, params }) =>
-  json(await getPlanDocument(actor, params.missionId)),
+  json(await exportPlanDocument(actor, params.missionId)),
 );
 
 export const POST = guarded<P>(CAN.import, "import plans", async ({ request, actor, params }) =>
