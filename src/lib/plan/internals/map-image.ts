@@ -186,13 +186,19 @@ export function imageFiringIntervals(
       const q = cuts[i + 1] as number;
       const n = gridCount(p, q);
       const gridL = (j: number) => (j === n ? q : p + ((q - p) * j) / n);
-      const states = new Map<number, boolean>();
+      // the last two grid states are remembered (run ends are read twice)
+      let j1 = -1;
+      let v1 = false;
+      let j2 = -1;
+      let v2 = false;
       const state = (j: number): boolean => {
-        let v = states.get(j);
-        if (v === undefined) {
-          v = fires(gridL(j));
-          states.set(j, v);
-        }
+        if (j === j1) return v1;
+        if (j === j2) return v2;
+        const v = fires(gridL(j));
+        j2 = j1;
+        v2 = v1;
+        j1 = j;
+        v1 = v;
         return v;
       };
       // runs of grid indices between the monotone split points

@@ -31,8 +31,8 @@ export function mapPieces(m: MapModel): MapPiece[] {
       // union is where the count of open intervals is positive, and an end
       // equal to a start joins the two (starts are taken first).
       const list = sets[code];
-      const starts = new Float64Array(list.length);
-      const ends = new Float64Array(list.length);
+      const starts = list.length > 64 ? new Float64Array(list.length) : new Array<number>(list.length);
+      const ends = list.length > 64 ? new Float64Array(list.length) : new Array<number>(list.length);
       let k = 0;
       for (const iv of list) {
         const lo = Math.max(iv[0], r0);
@@ -42,8 +42,10 @@ export function mapPieces(m: MapModel): MapPiece[] {
         ends[k] = hi;
         k++;
       }
-      const st = starts.subarray(0, k).sort();
-      const en = ends.subarray(0, k).sort();
+      // typed arrays sort numerically without a comparator; short plain arrays need one
+      const byValue = (x: number, y: number) => x - y;
+      const st = starts instanceof Float64Array ? starts.subarray(0, k).sort() : starts.slice(0, k).sort(byValue);
+      const en = ends instanceof Float64Array ? ends.subarray(0, k).sort() : ends.slice(0, k).sort(byValue);
       let a = 0;
       let b = 0;
       let open = 0;
