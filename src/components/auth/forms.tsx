@@ -31,7 +31,7 @@ function useZodForm<S extends z.ZodType>(schema: S, action: FormAction, id: stri
     onSubmit: submitKeepingInput(formAction),
   });
   // Every auth form field is a single string; one cast instead of one per form.
-  return { form, fields: fields as unknown as Record<string, FieldMetadata<string | undefined>>, formAction, pending };
+  return { form, fields: fields as unknown as { [K in keyof z.input<S>]-?: FieldMetadata<string | undefined> }, formAction, pending };
 }
 
 export function SignUpForm({ action, next, email }: { action: FormAction; next?: string; email?: string }) {
