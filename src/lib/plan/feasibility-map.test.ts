@@ -194,6 +194,15 @@ describe("feasibility map: hand-worked small cases", () => {
     expect(mid[1]).toBeCloseTo(186.235, 9);
   });
 
+  it("a chain with no channels is limited by its reach and drift only; no reach gives an empty map", () => {
+    // reach [150, 200], D = 0.02: feasible [150.02, 199.98]
+    const bare = feasibilityMap(example1((p) => void (p.channels = [])), "A");
+    expect(bare.feasibleGHz).toEqual([[150.02, 199.98]]);
+    expect(bare.excludedGHz.map((e) => e.codes)).toEqual([["lo-uncovered"], ["lo-uncovered"]]);
+    const none = feasibilityMap(example1((p) => void (p.lasers[0]!.reach = [])), "A");
+    expect(none).toEqual({ feasibleGHz: [], excludedGHz: [] });
+  });
+
   it("the codes are the map-shaping codes of the contract, in rules-table order", () => {
     expect([...MAP_CODES]).toEqual([...L_DEPENDENT_ERROR_CODES]);
   });
