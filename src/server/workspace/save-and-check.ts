@@ -5,6 +5,7 @@ import { parsePlan } from "@/schemas/plan";
 import { checkPlan, type ResultDocument } from "@/lib/plan";
 import { HttpError } from "@/server/http";
 import type { Actor } from "@/server/auth/actor";
+import { onPlanEdited } from "@/server/review/on-plan-edited";
 import { assemblePlan } from "./assemble";
 import type { Tx } from "./tx";
 
@@ -50,6 +51,8 @@ export async function saveAndCheck(tx: Tx, missionId: string, actor: Actor, note
     .where(eq(planRevisions.missionId, missionId));
   const before = max === null ? null : Number(max);
   const number = (before ?? 0) + 1;
+  // Review: a revision is never modified; an edit during a review withdraws it (src/server/review).
+  await onPlanEdited(tx, missionId, actor);
   const info: RevisionInfo = {
     number,
     errorCount: count("error"),
