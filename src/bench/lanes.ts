@@ -38,7 +38,11 @@ async function main() {
   });
   try {
     const page = context.pages()[0] ?? (await context.newPage());
-    await page.goto(`${base}/lab/lane-view?plan=demo64`, { waitUntil: "load", timeout: 180_000 });
+    // HETEROLANE_BENCH_PATH can point at another page that renders the lab view (e.g. a static production bundle).
+    const pagePath = process.env.HETEROLANE_BENCH_PATH ?? "/lab/lane-view?plan=demo64";
+    await page.goto(`${base}${pagePath}`, { waitUntil: "load", timeout: 180_000 });
+    // Wait for hydration (the server-rendered chart is there before its handlers are).
+    await page.locator('[data-testid="lane-view"][data-ready="1"]').waitFor({ timeout: 180_000 });
     const handle = page.locator(`[data-item="optical:${chain}:lo"]`);
     await handle.waitFor({ timeout: 180_000 });
     const box = await handle.boundingBox();

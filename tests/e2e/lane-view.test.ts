@@ -55,7 +55,8 @@ describe("lane view", () => {
     const { page } = await pageAs(team.engineer);
     await page.goto(`${BASE_URL}/missions/${missionId}/lanes`);
     // RF lane: the channel passband; optical-offset lane: the LO; IF lane: the channel's slot.
-    await page.locator('[data-item="rf:channel:wv1:0"]').waitFor({ timeout: 120_000 });
+    await page.locator('[data-testid="lane-view"][data-ready="1"]').waitFor({ timeout: 120_000 });
+    await page.locator('[data-item="rf:channel:wv1:0"]').waitFor();
     await page.locator('[data-item="optical:A:lo"]').waitFor();
     await page.locator('[data-item="if:A:slot:wv1"]').waitFor();
     expect(await page.locator('[data-kind="feasible"]').count()).toBeGreaterThan(0);

@@ -4,7 +4,7 @@ import { memo, useEffect, useMemo, useRef, useState } from "react";
 import { Group } from "@visx/group";
 import { scaleLinear } from "@visx/scale";
 import { formatTicks, visibleItems, type Domain, type LaneItem, type LaneModel } from "@/lib/lanes";
-import { FAMILY_LOOK, KIND_LOOK, SEVERITY_COLOUR, markerPath, orderShape } from "./vocabulary";
+import { FAMILY_LOOK, KIND_LOOK, SEVERITY_COLOUR, markerPath, markerPathAt, orderShape } from "./vocabulary";
 import { AXIS_H, MARGIN_LEFT, MARGIN_RIGHT, ROW_PAD, chartLayout, type LaneBox } from "./layout";
 
 export interface LaneChartProps {
@@ -30,6 +30,8 @@ interface Hover {
 }
 
 const MIN_PX = 2;
+/** Above this many visible spur products in one lane, they are drawn as merged paths (zoom in, or use the table view, to reach each one). */
+const DENSE_SPURS = 120;
 
 function Axis({ domain, width, y, title }: { domain: Domain; width: number; y: number; title: string }) {
   const inner = width - MARGIN_LEFT - MARGIN_RIGHT;
@@ -61,6 +63,162 @@ function itemAria(it: LaneItem): string {
   const where = it.lo === it.hi ? `at ${it.lo.toFixed(4)} GHz` : `${it.lo.toFixed(4)} to ${it.hi.toFixed(4)} GHz`;
   return `${it.label}, ${where}${sev}`;
 }
+
+interface ItemMarkProps {
+  it: LaneItem;
+  x0: number;
+  x1: number;
+  y: number;
+  h: number;
+  boxY: number;
+  boxH: number;
+  selected: boolean;
+  onHover: (h: Hover | null) => void;
+  onSelect: (item: LaneItem) => void;
+  onZoomToItem: (item: LaneItem) => void;
+  onLoPointerDown?: (item: LaneItem, e: React.PointerEvent) => void;
+  onLoNudge?: (chain: string, steps: number) => void;
+}
+
+/** One mark; skipped on re-render when its place, look and findings are unchanged. */
+const ItemMark = memo(
+  function ItemMark({ it, x0, x1, y, h, boxY, boxH, selected, onHover, onSelect, onZoomToItem, onLoPointerDown, onLoNudge }: ItemMarkProps) {
+      const look = KIND_LOOK[it.kind];
+      const sevStroke = it.severity ? SEVERITY_COLOUR[it.severity] : look.stroke;
+      const common = {
+        tabIndex: 0,
+        role: "button" as const,
+        "aria-label": itemAria(it),
+        "data-item": it.id,
+        "data-kind": it.kind,
+        className: "hl-item",
+        onPointerEnter: (e: React.PointerEvent) => onHover({ item: it, x: e.clientX, y: e.clientY }),
+        onPointerLeave: () => onHover(null),
+        onFocus: (e: React.FocusEvent<SVGGElement>) => {
+          const r = e.currentTarget.getBoundingClientRect();
+          onHover({ item: it, x: r.left + r.width / 2, y: r.bottom });
+        },
+        onBlur: () => onHover(null),
+        onClick: (e: React.MouseEvent) => {
+          e.stopPropagation();
+          onSelect(it);
+        },
+        onKeyDown: (e: React.KeyboardEvent) => {
+          if (e.key === "Enter" || e.key === " ") {
+            e.preventDefault();
+            onSelect(it);
+          } else if (e.key === "z" || e.key === "Z") {
+            e.preventDefault();
+            onZoomToItem(it);
+          } else if (it.kind === "lo" && it.chain && onLoNudge && (e.key === "ArrowLeft" || e.key === "ArrowRight")) {
+            e.preventDefault();
+            onLoNudge(it.chain, (e.key === "ArrowRight" ? 1 : -1) * (e.shiftKey ? 100 : 1));
+          }
+        },
+      };
+      const outline = selected ? { stroke: "#111", strokeWidth: 2 } : {};
+      switch (it.kind) {
+        case "line-centre":
+        case "nyquist-edge":
+          return (
+            <g {...common}>
+              <rect x={x0 - 3} y={boxY} width={x1 - x0 + 6} height={boxH} fill="transparent" />
+              <line x1={(x0 + x1) / 2} x2={(x0 + x1) / 2} y1={boxY} y2={boxY + boxH} stroke={look.stroke} strokeDasharray={look.dash} strokeWidth={selected ? 2 : 1} />
+              {it.kind === "line-centre" ? <path d={markerPath("diamond", 3.5)} transform={`translate(${(x0 + x1) / 2},${y + h / 2})`} fill={look.stroke} /> : null}
+            </g>
+          );
+        case "carrier":
+          return (
+            <g {...common}>
+              <rect x={x0 - 3} y={boxY} width={x1 - x0 + 6} height={boxH} fill="transparent" />
+              <line x1={(x0 + x1) / 2} x2={(x0 + x1) / 2} y1={boxY + 2} y2={boxY + boxH - 2} stroke={look.stroke} strokeWidth={selected ? 3 : 2} />
+            </g>
+          );
+        case "lock-sideband":
+          return (
+            <g {...common}>
+              <line x1={(x0 + x1) / 2} x2={(x0 + x1) / 2} y1={y + 2} y2={y + h} stroke={look.stroke} strokeWidth={selected ? 2.5 : 1.5} />
+              <path d={markerPath(orderShape(it.order), 2.5)} transform={`translate(${(x0 + x1) / 2},${y + 2})`} fill={look.fill} />
+            </g>
+          );
+        case "lo": {
+          const cx = (x0 + x1) / 2;
+          const colour = it.severity === "error" ? SEVERITY_COLOUR.error : look.fill;
+          return (
+            <g
+              key={it.id}
+              {...common}
+              aria-label={`${itemAria(it)}. Drag, or use the left and right arrow keys, to move the LO.`}
+              style={{ cursor: "ew-resize" }}
+              onPointerDown={(e) => onLoPointerDown?.(it, e)}
+            >
+              <rect x={cx - 9} y={boxY} width={18} height={boxH} fill="transparent" />
+              <line x1={cx} x2={cx} y1={boxY + 1} y2={boxY + boxH - 1} stroke={colour} strokeWidth={2} />
+              <path d={`M ${cx - 7} ${y + h + 2} L ${cx + 7} ${y + h + 2} L ${cx} ${y - 2} Z`} fill={colour} stroke={selected ? "#111" : look.stroke} strokeWidth={selected ? 2 : 1} />
+            </g>
+          );
+        }
+        case "spur": {
+          const fam = it.family ? FAMILY_LOOK[it.family] : null;
+          const colour = fam?.colour ?? "#666";
+          const cx = (x0 + x1) / 2;
+          const wide = x1 - x0 > 6;
+          return (
+            <g {...common}>
+              {wide ? <rect x={x0} y={y + 1} width={x1 - x0} height={h - 2} fill={`url(#${fam?.pattern ?? "hl-pat-diag"})`} stroke={colour} strokeWidth={0.8} /> : null}
+              <path
+                d={markerPath(orderShape(it.order), 3)}
+                transform={`translate(${cx},${y + h / 2})`}
+                fill={it.severity === "error" || it.severity === "info" ? colour : "#fff"}
+                stroke={it.severity === "error" ? SEVERITY_COLOUR.error : colour}
+                strokeWidth={it.severity === "error" ? 1.8 : 1}
+              />
+              {selected ? <rect x={x0 - 2} y={y - 1} width={x1 - x0 + 4} height={h + 2} fill="none" stroke="#111" strokeWidth={1.5} /> : null}
+            </g>
+          );
+        }
+        default: {
+          const background = it.kind === "reach" || it.kind === "detector-band" || it.kind === "rf-input" || it.kind === "protected-band";
+          const ry = background ? 0 : 2;
+          const yy = it.kind === "protected-band" ? boxY : y;
+          const hh = it.kind === "protected-band" ? boxH : h;
+          return (
+            <g {...common}>
+              <rect
+                x={x0}
+                y={yy}
+                width={x1 - x0}
+                height={hh}
+                rx={ry}
+                fill={look.fill}
+                fillOpacity={look.opacity}
+                stroke={it.severity && !background ? sevStroke : look.stroke}
+                strokeWidth={it.severity === "error" ? 1.8 : 1}
+                strokeDasharray={look.dash}
+                {...outline}
+              />
+            </g>
+          );
+        }
+      }
+      },
+  (a, b) =>
+    a.x0 === b.x0 &&
+    a.x1 === b.x1 &&
+    a.y === b.y &&
+    a.h === b.h &&
+    a.boxY === b.boxY &&
+    a.boxH === b.boxH &&
+    a.selected === b.selected &&
+    a.onSelect === b.onSelect &&
+    a.onZoomToItem === b.onZoomToItem &&
+    a.onLoPointerDown === b.onLoPointerDown &&
+    a.onLoNudge === b.onLoNudge &&
+    a.it.id === b.it.id &&
+    a.it.severity === b.it.severity &&
+    a.it.label === b.it.label &&
+    a.it.codes.join() === b.it.codes.join(),
+);
 
 interface LaneRowsProps {
   box: LaneBox;
@@ -94,133 +252,62 @@ const LaneRows = memo(
     const top = box.y + ROW_PAD;
     const rowY = (row: number) => top + row * box.rowH;
     const linkPairs = new Map<string, { x: number; y: number }[]>();
+    const spurCount = placed.drawn.reduce((n, d) => n + (d.item.kind === "spur" ? 1 : 0), 0);
+    const dense = spurCount > DENSE_SPURS;
+    const merged = new Map<string, { family: LaneItem["family"]; severity: LaneItem["severity"]; bands: string[]; marks: string[] }>();
+    if (dense) {
+      for (const { item: it, x0, x1 } of placed.drawn) {
+        if (it.kind !== "spur") continue;
+        const key = `${it.family}|${it.severity}`;
+        const m = merged.get(key) ?? { family: it.family, severity: it.severity, bands: [], marks: [] };
+        const y = rowY(it.row);
+        const h = box.rowH - 3;
+        if (x1 - x0 > 6) m.bands.push(`M ${x0.toFixed(1)} ${y + 1} H ${x1.toFixed(1)} V ${y + h - 1} H ${x0.toFixed(1)} Z`);
+        m.marks.push(markerPathAt(orderShape(it.order), (x0 + x1) / 2, y + h / 2, 3));
+        merged.set(key, m);
+      }
+    }
+    const denseNodes = [...merged.entries()].map(([key, m]) => {
+      const fam = m.family ? FAMILY_LOOK[m.family] : null;
+      const colour = fam?.colour ?? "#666";
+      return (
+        <g key={`dense-${key}`} aria-hidden="true">
+          {m.bands.length ? <path d={m.bands.join(" ")} fill={`url(#${fam?.pattern ?? "hl-pat-diag"})`} stroke={colour} strokeWidth={0.8} /> : null}
+          <path
+            d={m.marks.join(" ")}
+            fill={m.severity === "error" || m.severity === "info" ? colour : "#fff"}
+            stroke={m.severity === "error" ? SEVERITY_COLOUR.error : colour}
+            strokeWidth={m.severity === "error" ? 1.8 : 1}
+          />
+        </g>
+      );
+    });
     const nodes = placed.drawn.map(({ item: it, x0, x1 }) => {
-      const look = KIND_LOOK[it.kind];
+      if (dense && it.kind === "spur") return null;
       const y = rowY(it.row);
-      const h = box.rowH - 3;
-      const selected = it.id === selectedId;
-      const sevStroke = it.severity ? SEVERITY_COLOUR[it.severity] : look.stroke;
-      const common = {
-        tabIndex: 0,
-        role: "button" as const,
-        "aria-label": itemAria(it),
-        "data-item": it.id,
-        "data-kind": it.kind,
-        className: "hl-item",
-        onPointerEnter: (e: React.PointerEvent) => onHover({ item: it, x: e.clientX, y: e.clientY }),
-        onPointerLeave: () => onHover(null),
-        onFocus: (e: React.FocusEvent<SVGGElement>) => {
-          const r = e.currentTarget.getBoundingClientRect();
-          onHover({ item: it, x: r.left + r.width / 2, y: r.bottom });
-        },
-        onBlur: () => onHover(null),
-        onClick: (e: React.MouseEvent) => {
-          e.stopPropagation();
-          onSelect(it);
-        },
-        onKeyDown: (e: React.KeyboardEvent) => {
-          if (e.key === "Enter" || e.key === " ") {
-            e.preventDefault();
-            onSelect(it);
-          } else if (e.key === "z" || e.key === "Z") {
-            e.preventDefault();
-            onZoomToItem(it);
-          } else if (it.kind === "lo" && it.chain && onLoNudge && (e.key === "ArrowLeft" || e.key === "ArrowRight")) {
-            e.preventDefault();
-            onLoNudge(it.chain, (e.key === "ArrowRight" ? 1 : -1) * (e.shiftKey ? 100 : 1));
-          }
-        },
-      };
       if (it.link) {
         const list = linkPairs.get(it.link) ?? [];
         list.push({ x: (x0 + x1) / 2, y });
         linkPairs.set(it.link, list);
       }
-      const outline = selected ? { stroke: "#111", strokeWidth: 2 } : {};
-      switch (it.kind) {
-        case "line-centre":
-        case "nyquist-edge":
-          return (
-            <g key={it.id} {...common}>
-              <rect x={x0 - 3} y={box.y} width={x1 - x0 + 6} height={box.h} fill="transparent" />
-              <line x1={(x0 + x1) / 2} x2={(x0 + x1) / 2} y1={box.y} y2={box.y + box.h} stroke={look.stroke} strokeDasharray={look.dash} strokeWidth={selected ? 2 : 1} />
-              {it.kind === "line-centre" ? <path d={markerPath("diamond", 3.5)} transform={`translate(${(x0 + x1) / 2},${y + h / 2})`} fill={look.stroke} /> : null}
-            </g>
-          );
-        case "carrier":
-          return (
-            <g key={it.id} {...common}>
-              <rect x={x0 - 3} y={box.y} width={x1 - x0 + 6} height={box.h} fill="transparent" />
-              <line x1={(x0 + x1) / 2} x2={(x0 + x1) / 2} y1={box.y + 2} y2={box.y + box.h - 2} stroke={look.stroke} strokeWidth={selected ? 3 : 2} />
-            </g>
-          );
-        case "lock-sideband":
-          return (
-            <g key={it.id} {...common}>
-              <line x1={(x0 + x1) / 2} x2={(x0 + x1) / 2} y1={y + 2} y2={y + h} stroke={look.stroke} strokeWidth={selected ? 2.5 : 1.5} />
-              <path d={markerPath(orderShape(it.order), 2.5)} transform={`translate(${(x0 + x1) / 2},${y + 2})`} fill={look.fill} />
-            </g>
-          );
-        case "lo": {
-          const cx = (x0 + x1) / 2;
-          const colour = it.severity === "error" ? SEVERITY_COLOUR.error : look.fill;
-          return (
-            <g
-              key={it.id}
-              {...common}
-              aria-label={`${itemAria(it)}. Drag, or use the left and right arrow keys, to move the LO.`}
-              style={{ cursor: "ew-resize" }}
-              onPointerDown={(e) => onLoPointerDown?.(it, e)}
-            >
-              <rect x={cx - 9} y={box.y} width={18} height={box.h} fill="transparent" />
-              <line x1={cx} x2={cx} y1={box.y + 1} y2={box.y + box.h - 1} stroke={colour} strokeWidth={2} />
-              <path d={`M ${cx - 7} ${y + h + 2} L ${cx + 7} ${y + h + 2} L ${cx} ${y - 2} Z`} fill={colour} stroke={selected ? "#111" : look.stroke} strokeWidth={selected ? 2 : 1} />
-            </g>
-          );
-        }
-        case "spur": {
-          const fam = it.family ? FAMILY_LOOK[it.family] : null;
-          const colour = fam?.colour ?? "#666";
-          const cx = (x0 + x1) / 2;
-          const wide = x1 - x0 > 6;
-          return (
-            <g key={it.id} {...common}>
-              {wide ? <rect x={x0} y={y + 1} width={x1 - x0} height={h - 2} fill={`url(#${fam?.pattern ?? "hl-pat-diag"})`} stroke={colour} strokeWidth={0.8} /> : null}
-              <path
-                d={markerPath(orderShape(it.order), 3)}
-                transform={`translate(${cx},${y + h / 2})`}
-                fill={it.severity === "error" || it.severity === "info" ? colour : "#fff"}
-                stroke={it.severity === "error" ? SEVERITY_COLOUR.error : colour}
-                strokeWidth={it.severity === "error" ? 1.8 : 1}
-              />
-              {selected ? <rect x={x0 - 2} y={y - 1} width={x1 - x0 + 4} height={h + 2} fill="none" stroke="#111" strokeWidth={1.5} /> : null}
-            </g>
-          );
-        }
-        default: {
-          const background = it.kind === "reach" || it.kind === "detector-band" || it.kind === "rf-input" || it.kind === "protected-band";
-          const ry = background ? 0 : 2;
-          const yy = it.kind === "protected-band" ? box.y : y;
-          const hh = it.kind === "protected-band" ? box.h : h;
-          return (
-            <g key={it.id} {...common}>
-              <rect
-                x={x0}
-                y={yy}
-                width={x1 - x0}
-                height={hh}
-                rx={ry}
-                fill={look.fill}
-                fillOpacity={look.opacity}
-                stroke={it.severity && !background ? sevStroke : look.stroke}
-                strokeWidth={it.severity === "error" ? 1.8 : 1}
-                strokeDasharray={look.dash}
-                {...outline}
-              />
-            </g>
-          );
-        }
-      }
+      return (
+        <ItemMark
+          key={it.id}
+          it={it}
+          x0={x0}
+          x1={x1}
+          y={y}
+          h={box.rowH - 3}
+          boxY={box.y}
+          boxH={box.h}
+          selected={it.id === selectedId}
+          onHover={onHover}
+          onSelect={onSelect}
+          onZoomToItem={onZoomToItem}
+          onLoPointerDown={onLoPointerDown}
+          onLoNudge={onLoNudge}
+        />
+      );
     });
     const links = [...linkPairs.values()]
       .filter((p) => p.length === 2)
@@ -232,6 +319,12 @@ const LaneRows = memo(
     return (
       <g>
         {links}
+        {denseNodes}
+        {dense ? (
+          <text x={inner - 4} y={box.y + box.h - 4} fontSize={9.5} fill="#6b7280" textAnchor="end">
+            {spurCount} spur products drawn together: zoom in to reach each one, or use the table view
+          </text>
+        ) : null}
         {nodes}
         {placed.offLeft.length > 0 ? (
           <text x={4} y={box.y + box.h / 2 + 4} fontSize={10} fill="#2d545e" aria-label={`${placed.offLeft.length} items to the left`}>

@@ -81,9 +81,12 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
 
   const wrapRef = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(1100);
+  const [ready, setReady] = useState(false);
   useEffect(() => {
     const el = wrapRef.current;
     if (!el) return;
+    setWidth(Math.max(480, Math.floor(el.getBoundingClientRect().width)));
+    setReady(true);
     const ro = new ResizeObserver(([e]) => e && setWidth(Math.max(480, Math.floor(e.contentRect.width))));
     ro.observe(el);
     return () => ro.disconnect();
@@ -102,13 +105,18 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
     [bounds, ifBounds],
   );
 
+  // Handlers passed to the chart stay the same across re-checks (the memoised lanes compare them).
+  const latest = useRef({ lanes: model.lanes, plan: live.plan });
+  useEffect(() => {
+    latest.current = { lanes: model.lanes, plan: live.plan };
+  });
   const zoomTo = useCallback(
     (item: LaneItem) => {
-      const lane = model.lanes.find((l) => l.id === item.lane);
+      const lane = latest.current.lanes.find((l) => l.id === item.lane);
       if (lane?.axis === "if") setIfDomain(clampDomain(zoomToItem(item.lo, item.hi, 0.6, IF_LIMITS), ifBounds, IF_LIMITS));
       else setDomain(clampDomain(zoomToItem(item.lo, item.hi, 0.6, GHZ_LIMITS), bounds, GHZ_LIMITS));
     },
-    [model.lanes, bounds, ifBounds],
+    [bounds, ifBounds],
   );
 
   const zoomToChannel = (channelId: string) => {
@@ -122,11 +130,6 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
     if (slot) setIfDomain(clampDomain(zoomToItem(slot.lo, slot.hi, 1, IF_LIMITS), ifBounds, IF_LIMITS));
   };
 
-  // Handlers passed to the chart stay the same across re-checks (the memoised lanes compare them).
-  const latest = useRef({ lanes: model.lanes, plan: live.plan });
-  useEffect(() => {
-    latest.current = { lanes: model.lanes, plan: live.plan };
-  });
   const { moveLo, setLo } = live;
   const onLoDrag = useCallback(
     (chain: string, drawn: number, phase: "start" | "move" | "end") => {
@@ -177,7 +180,7 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
   };
 
   return (
-    <div className="space-y-4" data-testid="lane-view">
+    <div className="space-y-4" data-testid="lane-view" data-ready={ready ? "1" : "0"}>
       <div className="flex flex-wrap items-center gap-2 text-sm" role="toolbar" aria-label="Lane view controls">
         <div className="inline-flex overflow-hidden rounded border border-ink-faint" role="group" aria-label="View">
           {(["chart", "table"] as const).map((v) => (

@@ -89,3 +89,20 @@ export const KIND_LOOK: Record<ItemKind, KindLook> = {
   "if-slot": { fill: "#b5651d", stroke: "#7a4012", opacity: 1, name: "IF slot" },
   spur: { fill: "#888", stroke: "#555", opacity: 1, name: "spur product" },
 };
+
+/** The same marker as `markerPath`, at an absolute position (for merged paths). */
+export function markerPathAt(shape: OrderShape, cx: number, cy: number, r: number): string {
+  const p = (dx: number, dy: number) => `${(cx + dx).toFixed(1)} ${(cy + dy).toFixed(1)}`;
+  switch (shape) {
+    case "circle":
+      return `M ${p(-r, 0)} A ${r} ${r} 0 1 0 ${p(r, 0)} A ${r} ${r} 0 1 0 ${p(-r, 0)} Z`;
+    case "square":
+      return `M ${p(-r, -r)} L ${p(r, -r)} L ${p(r, r)} L ${p(-r, r)} Z`;
+    case "triangle":
+      return `M ${p(0, -r * 1.15)} L ${p(r * 1.1, r * 0.85)} L ${p(-r * 1.1, r * 0.85)} Z`;
+    case "diamond":
+      return `M ${p(0, -r * 1.2)} L ${p(r * 1.2, 0)} L ${p(0, r * 1.2)} L ${p(-r * 1.2, 0)} Z`;
+    default:
+      return `M ${p(-r, -r)} L ${p(r, r)} M ${p(r, -r)} L ${p(-r, r)}`;
+  }
+}
