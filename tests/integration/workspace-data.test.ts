@@ -96,6 +96,23 @@ describe("optimistic concurrency", () => {
   });
 });
 
+describe("concurrent edits of different rows", () => {
+  it("both succeed with consecutive revision numbers (the mission lock serialises them)", async () => {
+    const before = (await call(team.viewer, "GET", `${M()}/revisions`)).body.revisions[0].number;
+    const replies = await Promise.all(
+      ["RX1", "RX2", "RX3"].map((key, i) =>
+        call([team.engineer, team.lead, team.owner][i]!, "POST", `${M()}/resonators`, { key, fsrGHz: 100 + i, loadedQ: 1e6 }),
+      ),
+    );
+    expect(replies.map((r) => r.status)).toEqual([201, 201, 201]);
+    expect(replies.map((r) => r.body.revision.number).sort((a: number, b: number) => a - b)).toEqual([before + 1, before + 2, before + 3]);
+    const plan = (await call(team.viewer, "GET", `${M()}/plan`)).body;
+    expect(plan.resonators.map((r: { id: string }) => r.id)).toEqual(expect.arrayContaining(["RX1", "RX2", "RX3"]));
+    const positions = (await call(team.viewer, "GET", `${M()}/resonators`)).body.resonators.map((r: { key: string }) => r.key);
+    expect(new Set(positions).size).toBe(positions.length);
+  });
+});
+
 describe("invalid input is refused and nothing is saved", () => {
   it("names every bad field of a create and of an update", async () => {
     const before = await revisionCount();
