@@ -12,6 +12,7 @@ import {
   uniqueIndex,
   uuid,
 } from "drizzle-orm/pg-core";
+import { organization } from "./auth";
 
 /**
  * The mission workspace: a mission's hardware, receiver chains, channels and
@@ -39,12 +40,14 @@ const missionRef = () =>
     .notNull()
     .references(() => missions.id, { onDelete: "cascade" });
 
-/** A mission, scoped to one team (the better-auth organization id). */
+/** A mission, scoped to one team (the better-auth organization; deleting the team deletes its missions). */
 export const missions = pgTable(
   "missions",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    teamId: text("team_id").notNull(),
+    teamId: text("team_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
     name: text("name").notNull(),
     description: text("description").notNull().default(""),
     createdBy: text("created_by").notNull(),
@@ -259,7 +262,9 @@ export const activity = pgTable(
   "activity",
   {
     id: uuid("id").primaryKey().defaultRandom(),
-    teamId: text("team_id").notNull(),
+    teamId: text("team_id")
+      .notNull()
+      .references(() => organization.id, { onDelete: "cascade" }),
     missionId: uuid("mission_id").references(() => missions.id, { onDelete: "set null" }),
     actorId: text("actor_id").notNull(),
     actorName: text("actor_name").notNull(),
