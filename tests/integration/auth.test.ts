@@ -165,6 +165,19 @@ describe("sign-up, confirmation, sign-in", () => {
     expect(await userCount(first.email)).toBe(1);
   });
 
+  it("a duplicate sign-up through the API creates nothing and tells the address owner by mail", async () => {
+    const first = await signUp();
+    const again = await new TestClient().postJson("/api/auth/sign-up/email", {
+      name: "Someone Else",
+      email: first.email,
+      password: TEST_PASSWORD,
+    });
+    expect(again.status).toBe(200);
+    expect(await userCount(first.email)).toBe(1);
+    const notice = await readMail(first.email, /already have a heterolane account/i);
+    expect(notice.text).toContain("/forgot-password");
+  });
+
   it("a valid sign-up form creates the account and redirects to the check-your-inbox page", async () => {
     const email = uniqueEmail("form");
     const r = await submitPageForm(new TestClient(), "/sign-up", { name: "Form Person", email, password: TEST_PASSWORD });
@@ -246,6 +259,34 @@ describe("teams, invitations and roles", () => {
     expect(unknown.status).toBe(200);
     expect(await unknown.text()).toContain("This invitation does not exist");
   }, 120_000);
+
+  it("an invitation opened by another signed-in account says so and cannot be accepted by it", async () => {
+    const invitee = uniqueEmail("invitee");
+    const sent = await t.owner.fetch("/api/team/invitations", { method: "POST", json: { email: invitee, role: "viewer" } });
+    expect(sent.status).toBe(201);
+    const { id } = await sent.json();
+    const page = await t.engineer.fetch(`/invitations/${id}`);
+    expect(page.status).toBe(200);
+    expect(await page.text()).toContain('data-invitation-state="other-account"');
+    const accept = await t.engineer.postJson("/api/auth/organization/accept-invitation", { invitationId: id });
+    expect(accept.status).toBe(403);
+  }, 120_000);
+
+  it("nobody can make a team they do not belong to their active team", async () => {
+    const outsider = await newVerifiedUser("outsider");
+    const own = await createTeam(outsider, "Outsider team");
+    const res = await outsider.postJson("/api/auth/organization/set-active", { organizationId: t.teamId });
+    expect(res.status).toBe(403);
+    // better-auth also clears the active team on such a refusal: the person
+    // acts in no team (403 no-team) until they choose one of their own.
+    const none = await outsider.fetch("/api/team");
+    expect(none.status).toBe(403);
+    expect((await none.json()).error.code).toBe("no-team");
+    expect((await outsider.postJson("/api/auth/organization/set-active", { organizationId: own })).status).toBe(200);
+    const team = await (await outsider.fetch("/api/team")).json();
+    expect(team.team.id).toBe(own);
+    expect(team.members).toHaveLength(1);
+  });
 
   it("a viewer may not invite (403), nor an engineer", async () => {
     for (const who of [t.viewer, t.engineer]) {

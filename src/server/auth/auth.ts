@@ -8,7 +8,7 @@ import * as schema from "@db/schema";
 import { ac, roles } from "@/lib/permissions";
 import { serverEnv } from "@/server/env";
 import { listTeamsOf } from "./queries";
-import { invitationMail, resetPasswordMail, sendMail, verificationMail } from "@/server/mail";
+import { existingAccountMail, invitationMail, resetPasswordMail, sendMail, verificationMail } from "@/server/mail";
 
 /**
  * The one better-auth instance (docs/decisions/003-auth-and-roles.md).
@@ -34,6 +34,14 @@ export const auth = betterAuth({
     resetPasswordTokenExpiresIn: 60 * 60,
     sendResetPassword: async ({ user, url }) => {
       await sendMail(resetPasswordMail(user.email, user.name, url));
+    },
+    // A sign-up through the API with a registered address gets a generic
+    // answer (no probing of addresses); the owner of the address is told.
+    onExistingUserSignUp: async ({ user }) => {
+      const base = env.BETTER_AUTH_URL;
+      await sendMail(
+        existingAccountMail(user.email, user.name, new URL("/sign-in", base).toString(), new URL("/forgot-password", base).toString()),
+      );
     },
   },
   emailVerification: {

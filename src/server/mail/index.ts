@@ -1,2 +1,2 @@
 export { sendMail, type OutgoingMail } from "./transport";
-export { verificationMail, resetPasswordMail, invitationMail } from "./messages";
+export { existingAccountMail, invitationMail, resetPasswordMail, verificationMail } from "./messages";

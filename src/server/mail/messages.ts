@@ -46,3 +46,18 @@ export function invitationMail(to: string, inviter: string, team: string, role: 
     html: layout(lines, { label: "Open the invitation", url }, footer),
   };
 }
+
+export function existingAccountMail(to: string, name: string, signInUrl: string, resetUrl: string): OutgoingMail {
+  const lines = [
+    `Hello ${name},`,
+    "Someone tried to create a Heterolane account with this e-mail address, which already has one. No new account was made.",
+    `If it was you, sign in instead, or choose a new password: ${resetUrl}`,
+  ];
+  const footer = "If it was not you, you can ignore this message; nothing changed.";
+  return {
+    to,
+    subject: "You already have a Heterolane account",
+    text: `${lines.join("\n\n")}\n\nSign in: ${signInUrl}\n\n${footer}\n`,
+    html: layout(lines, { label: "Sign in", url: signInUrl }, footer),
+  };
+}
