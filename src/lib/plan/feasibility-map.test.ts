@@ -244,6 +244,36 @@ describe("feasibility map: properties on random small plans", () => {
     );
   }, 60_000);
 
+  it("agrees with the full per-offset check on plans with many Nyquist zones, wide reach and DSB channels", () => {
+    const dense = fc
+      .tuple(
+        arbitrarySmallPlanInput({ maxChannels: 5 }),
+        fc.double({ min: 0.2, max: 3, noNaN: true }),
+        fc.double({ min: 0, max: 40, noNaN: true }),
+        fc.integer({ min: 1, max: 6 }),
+        fc.boolean(),
+      )
+      .map(([p, fs, ext, orders, dsbAll]) => {
+        const kHz = (x: number) => Math.round(x * 1e6) / 1e6;
+        p.detectors[0]!.sampleRateGHz = kHz(fs);
+        const r = p.lasers[0]!.reach[0]!;
+        r.minGHz -= kHz(ext);
+        r.maxGHz += kHz(ext);
+        p.lasers[0]!.lock.orders = orders;
+        if (dsbAll) for (const c of p.channels) c.dsbOffsetGHz ??= kHz(c.bandwidthMHz / 2000 + 0.3);
+        return parseOrThrow(p);
+      });
+    fc.assert(
+      fc.property(dense, (plan) => {
+        const pieces = mapPieces(buildMapModel(plan, "A"));
+        for (const { L, piece } of interiorPoints(pieces, [0.5])) {
+          expect({ L, codes: fullCheckCodes(plan, "A", L) }).toEqual({ L, codes: codesOfMask(piece.mask) });
+        }
+      }),
+      { numRuns: 40 },
+    );
+  }, 120_000);
+
   it("widening reach never removes a feasible offset", () => {
     fc.assert(
       fc.property(arbitrarySmallPlanInput(), fc.double({ min: 0, max: 3, noNaN: true }), fc.double({ min: 0, max: 3, noNaN: true }), (input, wl, wh) => {
