@@ -122,6 +122,54 @@ describe("mission workspace", () => {
     await ctx.close();
   }, 300_000);
 
+  it("an engineer previews uploads before applying them", async () => {
+    const { ctx, page } = await pageAs(team.engineer);
+    await page.goto(`${BASE_URL}/missions/${missionId}/uploads`);
+    // Tuning map: offsets every 20 MHz over 176–190 GHz and 192–195 GHz; with a 50 MHz gap, two intervals.
+    const offsets = [
+      ...Array.from({ length: 701 }, (_, i) => (176 + i * 0.02).toFixed(3)),
+      ...Array.from({ length: 151 }, (_, i) => (192 + i * 0.02).toFixed(3)),
+    ];
+    await page.locator("#tuning-file").setInputFiles({
+      name: "tuning.csv",
+      mimeType: "text/csv",
+      buffer: Buffer.from(`offsetGHz\n${offsets.join("\n")}\n`),
+    });
+    await page.getByRole("button", { name: "Preview" }).first().click();
+    const tuning = page.getByTestId("tuning-preview");
+    await tuning.waitFor();
+    const text = await tuning.innerText();
+    expect(text).toMatch(/852 points → 2 intervals/);
+    expect(text).toMatch(/176\.000–190\.000 GHz/);
+    expect(text).toMatch(/192\.000–195\.000 GHz/);
+    await shot(page, "upload-tuning-preview");
+    await tuning.getByRole("button", { name: /Replace the reach of LP1/ }).click();
+    await page.getByText(/Reach of LP1 replaced/).waitFor();
+    const lasers = await json(team.engineer, `/api/v1/missions/${missionId}/lasers`);
+    expect(lasers.body.lasers[0].reach).toEqual([
+      { minGHz: 176, maxGHz: 190 },
+      { minGHz: 192, maxGHz: 195 },
+    ]);
+
+    // Channel list with one bad row: the preview names row and column, and nothing can be applied.
+    const csv = [
+      "key,name,chain,centerGHz,bandwidthMHz,integrationMs,antennaK,receiverK",
+      "wv2,183.31 wing,A,183.9,10,10,250,5000",
+      "wv3,broken row,A,-5,10,10,250,5000",
+    ].join("\n");
+    await page.locator("#channels-file").setInputFiles({ name: "channels.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+    await page.getByRole("button", { name: "Preview" }).nth(1).click();
+    const chPreview = page.getByTestId("channels-preview");
+    await chPreview.waitFor();
+    expect(await chPreview.innerText()).toMatch(/2 rows, 1 with errors/);
+    expect(await chPreview.innerText()).toMatch(/centerGHz: must be greater than 0/);
+    expect(await chPreview.getByRole("button", { name: /Apply 2 rows/ }).isDisabled()).toBe(true);
+    await shot(page, "upload-channels-preview");
+    const channels = await json(team.engineer, `/api/v1/missions/${missionId}/channels`);
+    expect(channels.body.channels.map((c: { key: string }) => c.key)).toEqual(["wv1"]);
+    await ctx.close();
+  }, 300_000);
+
   it("a viewer sees no edit controls, and the server refuses a crafted write", async () => {
     const { ctx, page } = await pageAs(team.viewer);
     await page.goto(`${BASE_URL}/missions/${missionId}`);

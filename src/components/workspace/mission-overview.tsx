@@ -8,6 +8,7 @@ import {
   useCollectionQuery,
   useMissionQuery,
   useResultQuery,
+  useActivityQuery,
   useRevisionsQuery,
   useSettingsQuery,
 } from "@/queries/missions";
@@ -33,6 +34,7 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
   const settings = useSettingsQuery(missionId);
   const result = useResultQuery(missionId);
   const revisions = useRevisionsQuery(missionId);
+  const activity = useActivityQuery(missionId);
   const [editing, setEditing] = useState<Editing>(null);
   const [focus, setFocus] = useState<string | null>(null);
   const close = useCallback(() => setEditing(null), []);
@@ -92,7 +94,10 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
             {busy ? <Spinner label="Re-checking…" /> : null}
           </p>
         </div>
-        <nav className="flex flex-wrap gap-2" aria-label="Export">
+        <nav className="flex flex-wrap gap-2" aria-label="Views and exports">
+          <Link className={buttonClass.secondary} href={`/missions/${missionId}/lanes`}>
+            Lane view
+          </Link>
           <a className={buttonClass.secondary} href={api.collection(missionId, "plan")} download="plan.json">
             Plan JSON
           </a>
@@ -194,6 +199,19 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
           ) : (
             <Spinner label="Loading…" />
           )}
+          <h3 className="mt-5 border-t border-ink/10 pt-3 text-sm font-semibold">Recent changes</h3>
+          {activity.data && activity.data.length === 0 ? <p className="text-sm text-ink-soft">No changes yet.</p> : null}
+          <ol className="mt-1 space-y-1.5 text-sm" data-testid="activity">
+            {(activity.data ?? []).slice(0, 8).map((a, i) => (
+              <li key={`${a.at}-${i}`}>
+                <span className="text-ink">{a.summary ?? `${a.action} ${a.entity}`}</span>
+                <span className="block text-xs text-ink-soft">
+                  {a.actorName ?? "someone"} · {formatAge(a.at)}
+                  {a.revision ? ` · revision ${a.revision}` : ""}
+                </span>
+              </li>
+            ))}
+          </ol>
         </Card>
       </div>
 

@@ -2,10 +2,10 @@
 
 import { useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
-import { useRef, useState } from "react";
+import { useState } from "react";
 import { CHANNEL_COLUMNS } from "@/lib/imports";
 import { api, ApiError } from "@/queries/api";
-import { invalidateMission, useCollectionQuery } from "@/queries/missions";
+import { invalidateMission, useCollectionQuery, useMissionQuery } from "@/queries/missions";
 import type { ChannelUploadPreview, DetectorResponsePreview, Interval, TuningPreview } from "@/queries/types";
 import { uploadFile } from "@/queries/upload";
 import { formatDB, formatGHz, formatInterval } from "./format";
@@ -274,12 +274,15 @@ function ChannelListUpload({ missionId }: { missionId: string }) {
               if (out) {
                 await invalidateMission(qc, missionId);
                 setPreview(null);
-                setPhase({ state: "done", message: `${preview.rows.length} channels added; the plan was re-checked.` });
+                setPhase({ state: "done", message: `${preview.rows.length} channel rows applied; the plan was re-checked.` });
               }
             }}
           >
-            Add {preview.rows.length} channels
+            Apply {preview.rows.length} {preview.rows.length === 1 ? "row" : "rows"}
           </button>
+          {!preview.valid ? (
+            <p className="text-xs text-ink-soft">Fix the rows marked in red in the file and preview it again; nothing has been saved.</p>
+          ) : null}
         </div>
       ) : null}
     </Card>
@@ -353,13 +356,13 @@ function DetectorResponseUpload({ missionId }: { missionId: string }) {
 }
 
 export function UploadsPage({ missionId }: { missionId: string }) {
-  const top = useRef<HTMLDivElement>(null);
+  const mission = useMissionQuery(missionId);
   return (
-    <div ref={top} className="space-y-4">
+    <div className="space-y-4">
       <div>
         <p className="text-xs text-ink-soft">
           <Link href="/missions" className="hover:underline">Missions</Link> /{" "}
-          <Link href={`/missions/${missionId}`} className="hover:underline">Mission</Link> /
+          <Link href={`/missions/${missionId}`} className="hover:underline">{mission.data?.name ?? "Mission"}</Link> /
         </p>
         <h1 className="text-2xl font-semibold tracking-tight">Upload measured data</h1>
         <p className="text-sm text-ink-soft">Each upload is previewed first; applying it saves a new plan revision and re-checks the plan.</p>
