@@ -24,6 +24,14 @@ const cases: [string, (d: Doc) => void][] = [
   ["fsrGHz of 1e-298", (d) => (d.resonators[0].fsrGHz = 1e-298)],
   ["sampleRateGHz of 1e-299", (d) => (d.detectors[1].sampleRateGHz = 1e-299)],
   ["centerGHz of 1e302", (d) => (d.channels[0].centerGHz = 1e302)],
+  [
+    "DSB channel at 1e190 GHz with a sampled IF",
+    (d) => {
+      d.channels[2].dsbOffsetGHz = 1;
+      d.channels[2].centerGHz = 1e190;
+    },
+  ],
+  ["lower-sideband channel at 1e302 GHz with a sampled IF", (d) => (d.channels[2].centerGHz = 1e302)],
   ["guardMHz of 1e300", (d) => (d.settings.guardMHz = 1e300)],
   ["loadedQ of 1e300", (d) => (d.resonators[1].loadedQ = 1e300)],
   ["carrierTHz of 1e-300", (d) => (d.lasers[1].carrierTHz = 1e-300)],
