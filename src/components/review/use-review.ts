@@ -67,10 +67,21 @@ export function useCommentsQuery(missionId: string) {
   });
 }
 
-/** Every review mutation refreshes the whole mission (state, status badges, revisions). */
+/**
+ * A review mutation refreshes the review panel first, then what shows the
+ * state elsewhere (the mission's status, revisions and activity); the plan's
+ * entities and result are unchanged by a review action, so they are not refetched.
+ */
 function useReviewMutation<V>(missionId: string, fn: (v: V) => Promise<unknown>) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: fn, onSettled: () => qc.invalidateQueries({ queryKey: missionKeys.detail(missionId) }) });
+  return useMutation({
+    mutationFn: fn,
+    onSettled: async () => {
+      await qc.invalidateQueries({ queryKey: reviewKeys.overview(missionId) });
+      for (const key of [missionKeys.mission(missionId), missionKeys.revisions(missionId), missionKeys.activity(missionId)])
+        void qc.invalidateQueries({ queryKey: key });
+    },
+  });
 }
 
 export const useSubmitMutation = (m: string) =>

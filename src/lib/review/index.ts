@@ -1,7 +1,7 @@
 /**
  * The review workflow: the plan state machine, waivers against open error
  * findings, revision comparison, @mentions and the audit CSV. Pure code;
- * src/server/review stores and mails. Readings: docs/decisions/009-review-readings.md.
+ * src/server/review stores and mails. Readings: docs/decisions/016-review-readings.md.
  */
 export * from "./types";
 export { nextReviewState } from "./next-review-state";
