@@ -6,7 +6,7 @@ import type { ResultDocument } from "@/lib/plan";
 import {
   GHZ_LIMITS,
   IF_LIMITS,
-  buildLaneModel,
+  laneModelByChain,
   clampDomain,
   explainCode,
   laneReference,
@@ -14,6 +14,7 @@ import {
   zoomToItem,
   type Domain,
   type LaneItem,
+  type LaneModelParts,
 } from "@/lib/lanes";
 import { LaneChart } from "./LaneChart";
 import { LaneTable } from "./LaneTable";
@@ -66,7 +67,13 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
   }, []);
   const live = useLiveRecheck(plan, result, reportFrame);
   const reference = useMemo(() => laneReference(), []);
-  const model = useMemo(() => buildLaneModel(live.plan, live.result, reference), [live.plan, live.result, reference]);
+  // Built chain by chain: while an LO moves, only that chain's items are rebuilt.
+  const [modelCache] = useState<{ parts: LaneModelParts | null }>(() => ({ parts: null }));
+  const model = useMemo(() => {
+    const built = laneModelByChain(live.plan, live.result, reference, modelCache.parts);
+    modelCache.parts = built.parts;
+    return built.model;
+  }, [live.plan, live.result, reference, modelCache]);
   const [view, setView] = useState<"chart" | "table">("chart");
   const [selected, setSelected] = useState<LaneItem | null>(null);
   const [saveState, setSaveState] = useState<Record<string, { busy: boolean; message: string | null; error: boolean }>>({});

@@ -11,3 +11,4 @@ export type * from "./types";
 export { demoPlan } from "./demoPlan";
 export { recheckAtOffset, type Recheck } from "./recheckAtOffset";
 export { laneReference } from "./laneReference";
+export { laneModelByChain, type LaneModelParts } from "./laneModelByChain";
