@@ -8,11 +8,50 @@
  * render and commit + style and layout ("work"), and the time to the next
  * animation frame ("frame"). Target: work ≤ 16 ms. Starts nothing but
  * Chromium.
+ *
+ * HETEROLANE_BENCH_STATIC=1 instead bundles the lab view with esbuild in
+ * production mode (React without its development checks) and serves it from
+ * a local static server on a free port: a stand-in for a production build
+ * of the app when one cannot be made. The numbers then exclude Next.js.
  */
 import { mkdtempSync, rmSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
+import { createServer, type Server } from "node:http";
 import { chromium } from "playwright-core";
+
+/** The lab view bundled in production mode and served on 127.0.0.1; returns its base URL and server. */
+async function staticLab(): Promise<{ base: string; server: Server }> {
+  const { build } = await import("esbuild");
+  const out = await build({
+    stdin: {
+      contents: `import { createRoot } from "react-dom/client";
+import { LabLaneView } from "./app/lab/lane-view/_components/LabLaneView";
+const name = new URLSearchParams(location.search).get("plan") ?? "demo64";
+createRoot(document.getElementById("root")!).render(<LabLaneView name={name} />);`,
+      resolveDir: process.cwd(),
+      loader: "tsx",
+    },
+    bundle: true,
+    minify: true,
+    format: "esm",
+    jsx: "automatic",
+    write: false,
+    alias: { "@": "./src" },
+    define: { "process.env.NODE_ENV": '"production"' },
+    logLevel: "error",
+  });
+  const js = out.outputFiles[0]!.text;
+  const html = `<!doctype html><html><head><meta charset="utf-8"><title>lane view (production bundle)</title></head><body style="font-family:sans-serif;margin:16px"><div id="root"></div><script type="module" src="/app.js"></script></body></html>`;
+  const server = createServer((req, res) => {
+    if (req.url?.startsWith("/app.js")) res.writeHead(200, { "content-type": "text/javascript" }).end(js);
+    else res.writeHead(200, { "content-type": "text/html" }).end(html);
+  });
+  await new Promise<void>((r) => server.listen(0, "127.0.0.1", r));
+  const addr = server.address();
+  const port = typeof addr === "object" && addr ? addr.port : 0;
+  return { base: `http://127.0.0.1:${port}`, server };
+}
 
 interface FrameTime {
   workMs: number;
@@ -26,7 +65,8 @@ function quantile(sorted: number[], q: number): number {
 }
 
 async function main() {
-  const base = (process.env.HETEROLANE_BENCH_URL ?? "http://localhost:3000").replace(/\/$/, "");
+  const stat = process.env.HETEROLANE_BENCH_STATIC === "1" ? await staticLab() : null;
+  const base = stat?.base ?? (process.env.HETEROLANE_BENCH_URL ?? "http://localhost:3000").replace(/\/$/, "");
   const frames = Math.max(10, Number(process.env.HETEROLANE_BENCH_FRAMES ?? 120));
   const chain = process.env.HETEROLANE_BENCH_CHAIN ?? "wv183";
   const userDir = mkdtempSync(join(tmpdir(), "heterolane-bench-"));
@@ -39,7 +79,7 @@ async function main() {
   try {
     const page = context.pages()[0] ?? (await context.newPage());
     // HETEROLANE_BENCH_PATH can point at another page that renders the lab view (e.g. a static production bundle).
-    const pagePath = process.env.HETEROLANE_BENCH_PATH ?? "/lab/lane-view?plan=demo64";
+    const pagePath = process.env.HETEROLANE_BENCH_PATH ?? (stat ? "/?plan=demo64" : "/lab/lane-view?plan=demo64");
     await page.goto(`${base}${pagePath}`, { waitUntil: "load", timeout: 180_000 });
     // Wait for hydration (the server-rendered chart is there before its handlers are).
     await page.locator('[data-testid="lane-view"][data-ready="1"]').waitFor({ timeout: 180_000 });
@@ -68,11 +108,12 @@ async function main() {
     const work = times.map((t) => t.workMs).sort((a, b) => a - b);
     const frame = times.map((t) => t.frameMs).sort((a, b) => a - b);
     const status = await page.locator(`[data-testid="lo-status-${chain}"]`).textContent();
-    console.log(`lane view, 64-channel demo plan, chain ${chain}: ${times.length} re-check frames measured of ${frames} moves`);
+    console.log(`lane view, 64-channel demo plan, chain ${chain}, ${stat ? "static production bundle" : base}: ${times.length} re-check frames measured of ${frames} moves`);
     console.log(`  re-check + render (work): median ${quantile(work, 0.5).toFixed(2)} ms, p95 ${quantile(work, 0.95).toFixed(2)} ms, max ${work[work.length - 1]!.toFixed(2)} ms (target ≤ 16 ms)`);
     console.log(`  to next animation frame:  median ${quantile(frame, 0.5).toFixed(2)} ms, p95 ${quantile(frame, 0.95).toFixed(2)} ms`);
     console.log(`  LO status after the drag: ${status?.trim()}`);
   } finally {
+    stat?.server.close();
     await context.close();
     rmSync(userDir, { recursive: true, force: true });
   }
