@@ -47,7 +47,7 @@ export async function upload(
 ): Promise<Reply> {
   const form = new FormData();
   const bytes = typeof content === "string" ? new TextEncoder().encode(content) : content;
-  form.set("file", new Blob([bytes], { type }), filename);
+  form.set("file", new Blob([new Uint8Array(bytes)], { type }), filename);
   const res = await c.fetch(path, { method: "POST", body: form });
   const text = await res.text();
   let body: unknown = null;
