@@ -26,7 +26,9 @@ it("signs up, confirms the e-mail, creates a team and lands on Missions", async 
   await page.getByLabel("Password", { exact: true }).fill("short");
   await page.getByRole("button", { name: "Create account" }).click();
   // Field error beside the field, input kept, no navigation.
-  await expect.poll(() => page.locator("#sign-up-password-error").textContent()).toContain("at least 10 characters");
+  await expect
+    .poll(() => page.locator("#sign-up-password-error").textContent(), { timeout: 30_000 })
+    .toContain("at least 10 characters");
   expect(await page.getByLabel("Password", { exact: true }).getAttribute("aria-invalid")).toBe("true");
   expect(await page.getByLabel("E-mail address").inputValue()).toBe(email);
   expect(new URL(page.url()).pathname).toBe("/sign-up");
