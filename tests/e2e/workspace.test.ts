@@ -50,7 +50,7 @@ beforeAll(async () => {
   expect(list.status).toBe(200);
   channel = list.body.channels[0];
   expect(channel.requiredNedtK).toBe(20);
-}, 300_000);
+}, 420_000);
 
 afterAll(async () => {
   await closeTestPool();
@@ -91,7 +91,7 @@ describe("mission workspace", () => {
     expect(stored.body.requiredNedtK).toBe(10);
     expect(stored.body.version).toBeGreaterThan(channel.version);
     await ctx.close();
-  }, 300_000);
+  }, 420_000);
 
   it("an engineer's stale save gets a clear conflict message and keeps the input", async () => {
     const current = (await json(team.engineer, `/api/v1/missions/${missionId}/channels/${channel.id}`)).body;
@@ -120,7 +120,7 @@ describe("mission workspace", () => {
     const stored = (await json(team.engineer, `/api/v1/missions/${missionId}/channels/${channel.id}`)).body;
     expect(stored.bandwidthMHz).toBe(12);
     await ctx.close();
-  }, 300_000);
+  }, 420_000);
 
   it("an engineer previews uploads before applying them", async () => {
     const { ctx, page } = await pageAs(team.engineer);
@@ -168,7 +168,7 @@ describe("mission workspace", () => {
     const channels = await json(team.engineer, `/api/v1/missions/${missionId}/channels`);
     expect(channels.body.channels.map((c: { key: string }) => c.key)).toEqual(["wv1"]);
     await ctx.close();
-  }, 300_000);
+  }, 420_000);
 
   it("a viewer sees no edit controls, and the server refuses a crafted write", async () => {
     const { ctx, page } = await pageAs(team.viewer);
@@ -196,7 +196,7 @@ describe("mission workspace", () => {
     const after = (await json(team.viewer, `/api/v1/missions/${missionId}/channels/${channel.id}`)).body;
     expect(after).toEqual(before);
     await ctx.close();
-  }, 300_000);
+  }, 420_000);
 
   it("the printable report shows the plan, findings and cautions", async () => {
     const { ctx, page } = await pageAs(team.viewer);
@@ -211,5 +211,5 @@ describe("mission workspace", () => {
     await page.emulateMedia({ media: "print" });
     await shot(page, "report-print");
     await ctx.close();
-  }, 300_000);
+  }, 420_000);
 });
