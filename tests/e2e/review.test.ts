@@ -14,7 +14,8 @@ import { validPlanInput } from "../fixtures/valid-plan";
 
 let team: TeamWithRoles;
 let missionId = "";
-const name = `E2E review mission ${Math.random().toString(36).slice(2, 8)} (test data)`;
+// No regular-expression characters: readMail matches the subject as a pattern.
+const name = `E2E review mission ${Math.random().toString(36).slice(2, 8)}, test data`;
 const open: TestBrowser[] = [];
 
 async function pageAs(c: TestClient): Promise<Page> {
