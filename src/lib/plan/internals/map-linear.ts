@@ -112,6 +112,9 @@ function multipleCrossings(f: Lin, h: number, from: number, to: number, out: num
   const v1 = at(f, to);
   const kLo = Math.max(0, Math.floor(Math.min(v0, v1) / h));
   const kHi = Math.ceil(Math.max(v0, v1) / h);
+  // Past 2^53 consecutive integers are no longer distinct doubles (k + 1 === k),
+  // and more than MAX_ZONE_CROSSINGS edges are marked unresolved by the callers.
+  if (!(kHi - kLo <= MAX_ZONE_CROSSINGS) || !(kHi < Number.MAX_SAFE_INTEGER)) return;
   for (let k = kLo; k <= kHi; k++) {
     const L = crossing(f, k * h, from, to);
     if (L === L) out.push(L);
@@ -307,6 +310,12 @@ export function straddleSet(fn: IFn, h: number, out: LSet): void {
     const h1 = at(p.hi, p.to);
     const kLo = Math.max(1, Math.floor(Math.min(l0, l1) / h));
     const kHi = Math.ceil(Math.max(h0, h1) / h);
+    if (!(kHi - kLo <= MAX_ZONE_CROSSINGS) || !(kHi < Number.MAX_SAFE_INTEGER)) {
+      // a band so far out that its zone index is beyond exact integers (k + 1 === k):
+      // the zone edges cannot be resolved, so the rule is marked as firing (conservative)
+      out.push([p.from, p.to]);
+      continue;
+    }
     for (let k = kLo; k <= kHi; k++) {
       const s1 = below(p.lo, k * h, p.from, p.to);
       const s2 = above(p.hi, k * h, p.from, p.to);
