@@ -20,6 +20,7 @@ const COLUMNS: { key: ChannelSortKey; label: string; unit?: string; align?: "rig
 ];
 
 export function ChannelsTable({
+  resultPending = false,
   channels,
   chains,
   result,
@@ -27,6 +28,8 @@ export function ChannelsTable({
   onEdit,
   onSelect,
 }: {
+  /** True while the latest check is still loading: its columns show an ellipsis, not "no slot". */
+  resultPending?: boolean;
   channels: Channel[];
   chains: Chain[];
   result: PlanResult | null | undefined;
@@ -127,7 +130,7 @@ export function ChannelsTable({
             </thead>
             <tbody>
               {shown.map((row) => (
-                <ChannelTr key={row.channel.id} row={row} canEdit={canEdit} onEdit={onEdit} onSelect={onSelect} />
+                <ChannelTr key={row.channel.id} row={row} pending={resultPending} canEdit={canEdit} onEdit={onEdit} onSelect={onSelect} />
               ))}
             </tbody>
           </table>
@@ -139,11 +142,13 @@ export function ChannelsTable({
 
 function ChannelTr({
   row,
+  pending,
   canEdit,
   onEdit,
   onSelect,
 }: {
   row: ChannelRow;
+  pending: boolean;
   canEdit: boolean;
   onEdit: (c: Channel) => void;
   onSelect?: (key: string) => void;
@@ -166,7 +171,7 @@ function ChannelTr({
       </td>
       <td className="px-2 py-1.5">{row.sideband}</td>
       <td className="px-2 py-1.5">{row.chainKey}</td>
-      <td className="whitespace-nowrap px-2 py-1.5 tabular-nums">{r?.ifSlotGHz ? formatInterval(r.ifSlotGHz, "") : "no slot"}</td>
+      <td className="whitespace-nowrap px-2 py-1.5 tabular-nums">{r?.ifSlotGHz ? formatInterval(r.ifSlotGHz, "") : pending ? "…" : "no slot"}</td>
       <td className="whitespace-nowrap px-2 py-1.5 tabular-nums">
         {r?.imageGHz ? (
           <>
@@ -193,6 +198,8 @@ function ChannelTr({
             <span className="font-mono text-xs">{row.worst.code}</span>
             {row.findingCount > 1 ? <span className="text-xs text-ink-soft">+{row.findingCount - 1}</span> : null}
           </button>
+        ) : pending ? (
+          <span className="text-xs text-ink-soft">checking…</span>
         ) : (
           <span className="text-xs text-sev-ok">no findings</span>
         )}

@@ -92,11 +92,14 @@ export function ResonatorTable({
   resonators,
   linewidthMHz,
   onEdit,
+  loading = false,
 }: {
+  loading?: boolean;
   resonators: Resonator[];
   linewidthMHz: (r: Resonator) => number | null | undefined;
   onEdit: Editable<Resonator>;
 }) {
+  if (loading) return null;
   if (resonators.length === 0) return <Empty>No resonator yet.</Empty>;
   return (
     <table className="w-full border-collapse text-sm" data-testid="resonators-table">

@@ -121,11 +121,13 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
       ) : null}
 
       <Card title="Laser pairs" actions={addButton("lasers")}>
-        <LaserTable lasers={refs.lasers} onEdit={edit("lasers")} />
+        {lasers.isLoading ? <Spinner label="Loading…" /> : <LaserTable lasers={refs.lasers} onEdit={edit("lasers")} />}
       </Card>
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Resonators" actions={addButton("resonators")}>
+          {resonators.isLoading ? <Spinner label="Loading…" /> : null}
           <ResonatorTable
+            loading={resonators.isLoading}
             resonators={refs.resonators}
             onEdit={edit("resonators")}
             linewidthMHz={(r) => {
@@ -135,13 +137,14 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
           />
         </Card>
         <Card title="Detectors" actions={addButton("detectors")}>
-          <DetectorTable detectors={refs.detectors} onEdit={edit("detectors")} />
+          {detectors.isLoading ? <Spinner label="Loading…" /> : <DetectorTable detectors={refs.detectors} onEdit={edit("detectors")} />}
         </Card>
       </div>
 
       <Card title="Receiver chains" actions={addButton("chains")}>
         <div className="grid gap-2 md:grid-cols-2 xl:grid-cols-3">
-          {refs.chains.length === 0 ? <p className="text-sm text-ink-soft">No chain yet: a chain joins one laser pair, one resonator mode and one detector.</p> : null}
+          {chains.isLoading ? <Spinner label="Loading…" /> : null}
+          {!chains.isLoading && refs.chains.length === 0 ? <p className="text-sm text-ink-soft">No chain yet: a chain joins one laser pair, one resonator mode and one detector.</p> : null}
           {refs.chains.map((c) => (
             <ChainItem
               key={c.id}
@@ -155,17 +158,22 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
       </Card>
 
       <Card title="Channels" actions={addButton("channels")}>
-        <ChannelsTable
-          channels={channels.data ?? []}
-          chains={refs.chains}
-          result={result.data}
-          canEdit={canEdit}
-          onEdit={(c: Channel) => setEditing({ kind: "channels", row: c as unknown as Record<string, unknown> & { id: string; version: number } })}
-          onSelect={(key) => {
-            setFocus(key);
-            document.getElementById(`findings-${key}`)?.scrollIntoView({ behavior: "smooth", block: "center" });
-          }}
-        />
+        {channels.isLoading ? (
+          <Spinner label="Loading channels…" />
+        ) : (
+          <ChannelsTable
+            resultPending={result.isLoading}
+            channels={channels.data ?? []}
+            chains={refs.chains}
+            result={result.data}
+            canEdit={canEdit}
+            onEdit={(c: Channel) => setEditing({ kind: "channels", row: c as unknown as Record<string, unknown> & { id: string; version: number } })}
+            onSelect={(key) => {
+              setFocus(key);
+              document.getElementById(`findings-${key}`)?.scrollIntoView({ behavior: "smooth", block: "center" });
+            }}
+          />
+        )}
         <p className="mt-2 text-xs text-ink-soft">{SENSITIVITY_TEXT}</p>
       </Card>
 
