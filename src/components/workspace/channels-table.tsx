@@ -158,7 +158,7 @@ function ChannelTr({
     row.nedt.state === "unmet" ? "text-sev-error font-semibold" : row.nedt.state === "met" ? "text-sev-ok" : "";
   return (
     <tr className="border-b border-ink/10 align-top hover:bg-ink-faint/50" data-channel={row.channel.key}>
-      <td className="px-2 py-1.5">
+      <td className="min-w-[11rem] px-2 py-1.5">
         <div className="font-medium">{row.channel.key}</div>
         <div className="text-xs text-ink-soft">{row.channel.name}</div>
       </td>
