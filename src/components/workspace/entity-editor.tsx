@@ -7,13 +7,19 @@ import {
   detectorSchema,
   laserSchema,
   resonatorSchema,
+  missionCreateSchema,
   settingsFields,
 } from "@/schemas/workspace";
 import { ApiError } from "@/queries/api";
 import { useUpdateChannelMutation } from "@/queries/channels";
 import type { Collection } from "@/queries/keys";
-import { useDeleteEntityMutation, useSaveEntityMutation, useSaveSettingsMutation } from "@/queries/missions";
-import type { Chain, Detector, Laser, Resonator, Settings } from "@/queries/types";
+import {
+  useDeleteEntityMutation,
+  useSaveEntityMutation,
+  useSaveSettingsMutation,
+  useUpdateMissionMutation,
+} from "@/queries/missions";
+import type { Chain, Detector, Laser, Mission, Resonator, Settings } from "@/queries/types";
 import { EntityForm, type FieldGroup } from "./entity-form";
 import {
   chainDefaults,
@@ -178,6 +184,34 @@ export function SettingsEditor({ missionId, settings, onClose }: { missionId: st
       toFormValue={rowToFormValue}
       save={async (value, version) => {
         await save.mutateAsync({ ...value, version: version ?? 1 });
+      }}
+      onDone={onClose}
+      onCancel={onClose}
+    />
+  );
+}
+
+export function MissionEditor({ mission, onClose }: { mission: Mission; onClose: () => void }) {
+  const save = useUpdateMissionMutation(mission.id);
+  return (
+    <EntityForm
+      formId="mission-edit"
+      schema={missionCreateSchema}
+      groups={[
+        {
+          legend: "Mission",
+          fields: [
+            { name: "name", label: "Name", unit: "text", kind: "text", wide: true },
+            { name: "description", label: "Description", unit: "text, optional", kind: "textarea", wide: true },
+          ],
+        },
+      ]}
+      defaultValue={{ name: mission.name, description: mission.description ?? "" }}
+      version={mission.version}
+      submitLabel="Save mission"
+      toFormValue={(cur) => ({ name: cur.name, description: cur.description ?? "" })}
+      save={async (value, version) => {
+        await save.mutateAsync({ ...value, description: value.description ?? "", version: version ?? 1 });
       }}
       onDone={onClose}
       onCancel={onClose}

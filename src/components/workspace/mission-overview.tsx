@@ -14,7 +14,7 @@ import {
 } from "@/queries/missions";
 import type { Channel } from "@/queries/types";
 import { Drawer } from "./drawer";
-import { EntityEditor, KIND_LABEL, SettingsEditor } from "./entity-editor";
+import { EntityEditor, KIND_LABEL, MissionEditor, SettingsEditor } from "./entity-editor";
 import { countBySeverity } from "./findings";
 import { FindingsPanel } from "./findings-panel";
 import { ChannelsTable } from "./channels-table";
@@ -22,7 +22,7 @@ import { ChainItem, DetectorTable, LaserTable, ResonatorTable } from "./hardware
 import { formatAge, formatNumber, plural } from "./format";
 import { buttonClass, Card, ErrorNote, SENSITIVITY_TEXT, Spinner } from "./ui";
 
-type Editing = { kind: Collection; row: (Record<string, unknown> & { id: string; version: number }) | null } | { kind: "settings" } | null;
+type Editing = { kind: Collection; row: (Record<string, unknown> & { id: string; version: number }) | null } | { kind: "settings" } | { kind: "mission" } | null;
 
 export function MissionOverview({ missionId, canEdit }: { missionId: string; canEdit: boolean }) {
   const mission = useMissionQuery(missionId);
@@ -74,7 +74,14 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
             </Link>{" "}
             /
           </p>
-          <h1 className="text-2xl font-semibold tracking-tight">{mission.data?.name ?? "…"}</h1>
+          <h1 className="flex items-baseline gap-2 text-2xl font-semibold tracking-tight">
+            {mission.data?.name ?? "…"}
+            {canEdit && mission.data ? (
+              <button type="button" className={buttonClass.quiet} onClick={() => setEditing({ kind: "mission" })} aria-label="Edit mission name and description">
+                Edit
+              </button>
+            ) : null}
+          </h1>
           {mission.data?.description ? <p className="mt-0.5 max-w-2xl text-sm text-ink-soft">{mission.data.description}</p> : null}
           <p className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm" data-testid="revision-line">
             <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs font-medium uppercase tracking-wide">{mission.data?.status ?? "draft"}</span>
@@ -224,7 +231,13 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
       </div>
 
       {editing && canEdit ? (
-        editing.kind === "settings" ? (
+        editing.kind === "mission" ? (
+          mission.data ? (
+            <Drawer title="Mission" onClose={close}>
+              <MissionEditor mission={mission.data} onClose={close} />
+            </Drawer>
+          ) : null
+        ) : editing.kind === "settings" ? (
           settings.data ? (
             <Drawer title="Check settings" onClose={close}>
               <SettingsEditor missionId={missionId} settings={settings.data} onClose={close} />
