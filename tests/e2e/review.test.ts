@@ -7,7 +7,7 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
-import { BASE_URL, closeTestPool, makeTeamWithRoles, readMail, type TeamWithRoles, type TestClient } from "../setup/auth-helpers";
+import { BASE_URL, closeTestPool, makeTeamWithRoles, readMail, testPool, type TeamWithRoles, type TestClient } from "../setup/auth-helpers";
 import { launchBrowser, screenshot, type TestBrowser } from "../setup/browser";
 import { call, missionWithPlan } from "../setup/workspace-helpers";
 import { validPlanInput } from "../fixtures/valid-plan";
@@ -100,5 +100,22 @@ describe("review flow", () => {
     const audit = await lead.getByTestId("audit-table").innerText();
     for (const a of ["review-submit", "comment", "waiver-create", "review-baseline"]) expect(audit).toContain(a);
     await screenshot(lead, "review-audit");
+
+    // The compare page shows the earlier and the later revision side by side.
+    await lead.goto(`${BASE_URL}/missions/${missionId}/compare?from=1&to=2`);
+    const view = lead.getByTestId("compare-view");
+    await view.waitFor();
+    expect(await view.innerText()).toContain("Plan differences");
+    await screenshot(lead, "review-compare");
+
+    // The lead switches review-request e-mails off on the settings page; the choice is stored.
+    await lead.goto(`${BASE_URL}/settings/notifications`);
+    const box = lead.getByLabel("A plan is submitted for review");
+    expect(await box.isChecked()).toBe(true);
+    await box.uncheck();
+    await lead.getByRole("button", { name: "Save" }).click();
+    await lead.getByRole("status").filter({ hasText: "Saved" }).waitFor();
+    const { rows } = await testPool().query(`select review_requested, review_decided, mentioned from notification_preferences where user_id = $1`, [team.lead.userId]);
+    expect(rows).toEqual([{ review_requested: false, review_decided: true, mentioned: true }]);
   }, 1_500_000);
 });
