@@ -28,12 +28,13 @@ export const AUDIT_CSV_HEADER = [
  * One CSV field (RFC 4180: quoted when it holds a comma, quote or line
  * break; quotes doubled). A text starting with = + - @ or a tab is prefixed
  * with an apostrophe so that spreadsheets do not run it as a formula
- * (OWASP, "CSV Injection").
+ * (OWASP, "CSV Injection"); a text that already starts with an apostrophe
+ * gets one too, so that removing one leading apostrophe always restores it.
  */
 function field(v: string | number | null): string {
   if (v === null) return "";
   let s = String(v);
-  if (typeof v === "string" && /^[=+\-@\t\r]/.test(s)) s = `'${s}`;
+  if (typeof v === "string" && /^[=+\-@\t\r']/.test(s)) s = `'${s}`;
   return /[",\r\n]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
 }
 
