@@ -2,10 +2,12 @@
  * Plan engine benchmark (`npm run bench`).
  *
  * 1. Median time of a full `checkPlan` (map and place included) of the
- *    clean demo plan `docs/examples/clean.plan.json` (falls back to the
- *    worked example 2 fixture when the demo plan is missing; the output
- *    says which).
- *    Also a 4-chain, 16-channel plan (four renamed copies of example 2).
+ *    seeded demo mission's plan, `demoPlan()` in
+ *    `db/seed/mission-demo-plan.ts` (4 chains, 12 channels; the speed
+ *    target is a median under 2 ms), with the CPU time, the best batch and
+ *    the load average beside it (the machine may be shared and loaded).
+ *    Extra lines: the clean example `docs/examples/clean.plan.json` and a
+ *    4-chain, 16-channel plan (four renamed copies of example 2).
  * 2. For a generated 64-channel chain (spurMaxOrder 7, a 300 GHz reach,
  *    a sampled IF so that folding and aliasing are exercised): the
  *    feasibility map computed exactly, and by a 1 MHz grid that evaluates
@@ -16,7 +18,9 @@
  * All data here is invented demo data.
  */
 import { existsSync, readFileSync } from "node:fs";
+import { cpus, loadavg } from "node:os";
 import { fileURLToPath } from "node:url";
+import { demoPlan } from "@db/seed/mission-demo-plan";
 import { type Plan, parsePlan } from "@/schemas/plan";
 import { checkPlan } from "@/lib/plan/check-plan";
 import { feasibilityMap } from "@/lib/plan/feasibility-map";
@@ -60,15 +64,42 @@ function timeMedians(fn: () => unknown, runs: number, warm: number): { wall: num
   return { wall: median(wall), cpu: median(cpu) };
 }
 
+/** Median, best batch and load: honest figures on a shared, loaded machine. */
+function report(label: string, fn: () => unknown, runs: number, warm: number): void {
+  const t = timeMedians(fn, runs, warm);
+  // best-of-batches: the fastest mean over batches of 20 calls (the least disturbed figure)
+  let best = Number.POSITIVE_INFINITY;
+  for (let b = 0; b < 10; b++) {
+    const a = performance.now();
+    for (let i = 0; i < 20; i++) fn();
+    best = Math.min(best, (performance.now() - a) / 20);
+  }
+  const load = loadavg().map((x) => x.toFixed(2)).join(" ");
+  console.log(label);
+  console.log(
+    `  median ${t.wall.toFixed(3)} ms wall, ${t.cpu.toFixed(3)} ms CPU over ${runs} runs; best batch of 20: ${best.toFixed(3)} ms per call; ` +
+      `load average ${load} on ${cpus().length} cores (target: median < 2 ms) ${t.wall < 2 ? "PASS" : "MISS"}`,
+  );
+}
+
+function demoSection(): void {
+  const plan = mustParse(demoPlan(), "demo plan");
+  report(
+    `full checkPlan of the demo plan, demoPlan() in db/seed/mission-demo-plan.ts (${plan.chains.length} chains, ${plan.channels.length} channels):`,
+    () => checkPlan(plan),
+    400,
+    100,
+  );
+}
+
 function fullCheckSection(): void {
-  const demo = `${root}docs/examples/clean.plan.json`;
-  const fallback = `${root}tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json`;
-  const file = existsSync(demo) ? demo : fallback;
+  const file = `${root}docs/examples/clean.plan.json`;
+  if (!existsSync(file)) {
+    console.log("docs/examples/clean.plan.json: missing, skipped");
+    return;
+  }
   const plan = mustParse(JSON.parse(readFileSync(file, "utf8")), file);
-  const t = timeMedians(() => checkPlan(plan), 400, 100);
-  const nCh = plan.channels.length;
-  console.log(`full checkPlan of ${file.slice(root.length)} (${plan.chains.length} chains, ${nCh} channels):`);
-  console.log(`  median ${t.wall.toFixed(3)} ms wall, ${t.cpu.toFixed(3)} ms CPU over 400 runs (target < 2 ms) ${t.wall < 2 ? "PASS" : "MISS"}`);
+  report(`full checkPlan of ${file.slice(root.length)} (${plan.chains.length} chains, ${plan.channels.length} channels):`, () => checkPlan(plan), 400, 100);
 }
 
 /** Four renamed copies of worked example 2 (sampled IF, four channels each): 4 chains, 16 channels. */
@@ -96,9 +127,12 @@ function fourChainPlan(): unknown {
 
 function fourChainSection(): void {
   const plan = mustParse(fourChainPlan(), "four-chain plan");
-  const t = timeMedians(() => checkPlan(plan), 200, 50);
-  console.log(`full checkPlan of four copies of worked example 2 (${plan.chains.length} chains, ${plan.channels.length} channels, sampled IF):`);
-  console.log(`  median ${t.wall.toFixed(3)} ms wall, ${t.cpu.toFixed(3)} ms CPU over 200 runs (target < 2 ms) ${t.wall < 2 ? "PASS" : "MISS"}`);
+  report(
+    `full checkPlan of four copies of worked example 2 (${plan.chains.length} chains, ${plan.channels.length} channels, sampled IF):`,
+    () => checkPlan(plan),
+    200,
+    50,
+  );
 }
 
 function mapSection(): void {
@@ -171,6 +205,7 @@ function mapSection(): void {
   for (const e of examples) console.log(`    ${e}`);
 }
 
+demoSection();
 fullCheckSection();
 fourChainSection();
 mapSection();

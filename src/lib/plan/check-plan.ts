@@ -31,8 +31,9 @@ export function checkPlan(plan: Plan): ResultDocument {
       id: chain.id,
       linewidthMHz: ctx.delta * 1000,
       pdInputMW: ctx.pdMW,
-      feasibleGHz: map.feasibleGHz.map((iv) => [iv[0], iv[1]]),
-      excludedGHz: map.excludedGHz.map((e) => ({ bandGHz: [e.bandGHz[0], e.bandGHz[1]], codes: [...e.codes] })),
+      // the map's arrays are built fresh for this call and owned by nobody else
+      feasibleGHz: map.feasibleGHz,
+      excludedGHz: map.excludedGHz,
       placeGHz: place.placeGHz,
       placeReason: place.placeReason,
     });

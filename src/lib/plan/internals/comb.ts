@@ -44,10 +44,22 @@ export function combPeak(comb: Comb): number {
  * `atan2` forms that do not cancel.
  */
 export function combIntegral(x1: number, x2: number, comb: Comb): number {
+  return combIntegralK(x1, x2, comb.fsr, comb.delta, combK(comb.fsr, comb.delta));
+}
+
+/** `K = coth(πa)` of `combIntegral` (1 where it equals 1 to double precision). */
+export function combK(fsr: number, delta: number): number {
+  const pa = Math.PI * (delta / (2 * fsr));
+  return pa > 300 ? 1 : 1 / Math.tanh(pa);
+}
+
+/**
+ * `combIntegral` with `K = combK(fsr, delta)` computed once by the caller
+ * (the map evaluates the integral many times for one comb); the same
+ * arithmetic, so the same numbers.
+ */
+export function combIntegralK(x1: number, x2: number, fsr: number, delta: number, K: number): number {
   if (x2 <= x1) return 0;
-  const { fsr, delta } = comb;
-  const pa = Math.PI * combA(comb);
-  const K = pa > 300 ? 1 : 1 / Math.tanh(pa);
   const n1 = Math.round(x1 / fsr);
   const n2 = Math.round(x2 / fsr);
   const t1 = (Math.PI * (x1 - n1 * fsr)) / fsr;

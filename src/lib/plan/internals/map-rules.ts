@@ -1,5 +1,4 @@
 import type { MapChannel, MapCode, MapModel } from "./map-model";
-import { MAP_CODES } from "./map-model";
 import { imageFiringIntervals, makeComb } from "./map-image";
 import { MAX_LOCK_ORDER_ENUMERATED } from "./spurs";
 import {
@@ -122,7 +121,16 @@ export function errorSpurFns(m: MapModel, r0: number, r1: number): IFn[] {
 
 /** Compute the firing sets of every L-dependent error rule on the reach interval [r0, r1]. */
 export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
-  const sets = Object.fromEntries(MAP_CODES.map((c) => [c, [] as LSet])) as FiringSets;
+  const sets: FiringSets = {
+    "lo-uncovered": [],
+    "lo-in-band": [],
+    "if-outside-detector": [],
+    "slot-overlap": [],
+    "image-response": [],
+    "spur-in-slot": [],
+    "nyquist-straddle": [],
+    "alias-overlap": [],
+  };
   const D = m.drift;
   const g = m.guard;
   const h = m.halfFs;
@@ -147,7 +155,8 @@ export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
     occ.push(O);
     outsideSet(O, m.detMin, m.detMax, sets["if-outside-detector"]);
     if (ch.ssb) {
-      for (const p of slot) sets["image-response"].push(...imageFiringIntervals(comb, m, ch, p.from, p.to));
+      const image = sets["image-response"];
+      for (const p of slot) for (const iv of imageFiringIntervals(comb, m, ch, p.from, p.to)) image.push(iv);
     }
     if (h !== null) {
       straddleSet(O, h, sets["nyquist-straddle"]);

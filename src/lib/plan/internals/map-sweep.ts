@@ -23,9 +23,13 @@ export function mapPieces(m: MapModel): MapPiece[] {
   const out: MapPiece[] = [];
   for (const [r0, r1] of m.reach) {
     const sets = firingSets(m, r0, r1);
-    const xs: number[] = [];
-    const ds: number[] = []; // +(index+1) for an opening, −(index+1) for a closing
-    MAP_CODES.forEach((code, i) => {
+    // per code, the union's edges in increasing order: from, to, from, to, …
+    const runs: number[][] = [];
+    let total = 0;
+    for (let i = 0; i < MAP_CODES.length; i++) {
+      const code = MAP_CODES[i] as (typeof MAP_CODES)[number];
+      const run: number[] = [];
+      runs.push(run);
       // union of this code's firing intervals first: far fewer events to sort.
       // Starts and ends are sorted separately (native typed-array sorts); the
       // union is where the count of open intervals is positive, and an end
@@ -57,15 +61,33 @@ export function mapPieces(m: MapModel): MapPiece[] {
           a++;
         } else {
           open--;
-          if (open === 0) {
-            xs.push(from, en[b] as number);
-            ds.push(i + 1, -(i + 1));
-          }
+          if (open === 0) run.push(from, en[b] as number);
           b++;
         }
       }
-    });
-    const order = Array.from(xs.keys()).sort((a, b) => (xs[a] as number) - (xs[b] as number));
+      total += run.length;
+    }
+    // merge the sorted runs into one increasing event list (the order of equal
+    // edges does not matter: a group of edges is applied as a whole below)
+    const xs = new Float64Array(total);
+    const ds = new Int32Array(total); // +(index+1) for an opening, −(index+1) for a closing
+    const at = new Int32Array(runs.length);
+    for (let e = 0; e < total; e++) {
+      let pick = -1;
+      let best = 0;
+      for (let i = 0; i < runs.length; i++) {
+        const run = runs[i] as number[];
+        const j = at[i] as number;
+        if (j < run.length && (pick < 0 || (run[j] as number) < best)) {
+          pick = i;
+          best = run[j] as number;
+        }
+      }
+      const j = at[pick] as number;
+      xs[e] = best;
+      ds[e] = j % 2 === 0 ? pick + 1 : -(pick + 1);
+      at[pick] = j + 1;
+    }
     const counts = new Int32Array(MAP_CODES.length);
     let mask = 0;
     let cur = r0;
@@ -78,17 +100,16 @@ export function mapPieces(m: MapModel): MapPiece[] {
     while (true) {
       // apply the group of events at `cur` (chained within MERGE_GHZ)
       let lastX = cur;
-      while (k < order.length && (xs[order[k] as number] as number) - lastX < MERGE_GHZ) {
-        const e = order[k] as number;
-        lastX = Math.max(lastX, xs[e] as number);
-        const d = ds[e] as number;
+      while (k < total && (xs[k] as number) - lastX < MERGE_GHZ) {
+        lastX = Math.max(lastX, xs[k] as number);
+        const d = ds[k] as number;
         const i = Math.abs(d) - 1;
         counts[i] = (counts[i] as number) + (d > 0 ? 1 : -1);
         if (counts[i]! > 0) mask |= 1 << i;
         else mask &= ~(1 << i);
         k++;
       }
-      const next = k < order.length ? Math.min(xs[order[k] as number] as number, r1) : r1;
+      const next = k < total ? Math.min(xs[k] as number, r1) : r1;
       if (r1 - next < MERGE_GHZ || next <= cur) {
         if (r1 > cur) emit(cur, r1);
         break;

@@ -28,10 +28,11 @@ function keep(family: SpurFamily, order: number, raw: Interval, detector: Interv
 }
 
 /**
- * `keep` for a raw band `[lo, hi]` given as numbers; the source text is
- * only built for kept bands.
+ * `keep` for a raw band `[lo, hi]` given as numbers: pushes the kept band
+ * with an empty source and returns it (the caller names it), so the source
+ * text is only built for kept bands; null when nothing is kept.
  */
-function keepRaw(family: SpurFamily, order: number, lo: number, hi: number, det: Interval, source: () => string, out: SpurBand[]): void {
+function keepRaw(family: SpurFamily, order: number, lo: number, hi: number, det: Interval, out: SpurBand[]): SpurBand | null {
   // |[lo, hi]|
   let alo: number;
   let ahi: number;
@@ -47,7 +48,10 @@ function keepRaw(family: SpurFamily, order: number, lo: number, hi: number, det:
   }
   const blo = Math.max(alo, det[0]);
   const bhi = Math.min(ahi, det[1]);
-  if (blo <= bhi) out.push({ family, order, band: [blo, bhi], source: source() });
+  if (!(blo <= bhi)) return null;
+  const band: SpurBand = { family, order, band: [blo, bhi], source: "" };
+  out.push(band);
+  return band;
 }
 
 function byBand(a: SpurBand, b: SpurBand): number {
@@ -102,7 +106,8 @@ export function infoSpurs(ctx: ChainContext, slots: readonly (SlotGeometry | nul
   const harmonic: SpurBand[] = [];
   for (const p of present) {
     for (let n = 2; n <= N; n++) {
-      keepRaw("harmonic", n, n * p.slot[0] - n * D, n * p.slot[1] + n * D, det, () => `${n}·${p.id}`, harmonic);
+      const kept = keepRaw("harmonic", n, n * p.slot[0] - n * D, n * p.slot[1] + n * D, det, harmonic);
+      if (kept) kept.source = `${n}·${p.id}`;
     }
   }
   harmonic.sort(byBand);
@@ -117,8 +122,10 @@ export function infoSpurs(ctx: ChainContext, slots: readonly (SlotGeometry | nul
         for (let b = 1; a + b <= N; b++) {
           const w = (a + b) * D;
           // a·[li,hi] + b·[lj,hj] and a·[li,hi] − b·[lj,hj] (plan-format.md interval arithmetic), widened by (a+b)·D
-          keepRaw("intermod", a + b, a * li + b * lj - w, a * hi + b * hj + w, det, () => `${a}·${pi.id}+${b}·${pj.id}`, intermod);
-          keepRaw("intermod", a + b, a * li - b * hj - w, a * hi - b * lj + w, det, () => `${a}·${pi.id}−${b}·${pj.id}`, intermod);
+          const sum = keepRaw("intermod", a + b, a * li + b * lj - w, a * hi + b * hj + w, det, intermod);
+          if (sum) sum.source = `${a}·${pi.id}+${b}·${pj.id}`;
+          const diff = keepRaw("intermod", a + b, a * li - b * hj - w, a * hi - b * lj + w, det, intermod);
+          if (diff) diff.source = `${a}·${pi.id}−${b}·${pj.id}`;
         }
       }
     }
