@@ -15,6 +15,7 @@ import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useMemo, useRef, useState } from "react";
 import type { z } from "zod";
 import { ApiError } from "@/queries/api";
+import { FieldHelper, type HelperKind } from "./field-helper";
 import { splitIssues } from "./form-errors";
 import { buttonClass, LaserSafetyNote } from "./ui";
 
@@ -27,6 +28,8 @@ export type FieldSpec = {
   /** Laser-safety caution beside optical power fields. */
   caution?: "laser";
   wide?: boolean;
+  /** A helper calculation opened beside the field; its Apply fills the form. */
+  helper?: HelperKind;
 } & (
   | { kind: "number"; step?: string; placeholder?: string }
   | { kind: "text"; placeholder?: string }
@@ -160,7 +163,7 @@ function Field({ spec, disabled }: { spec: FieldSpec; disabled: boolean }) {
     );
   }
   return (
-    <div className={spec.wide ? "col-span-2" : ""}>
+    <div className={spec.wide || spec.helper ? "col-span-2" : ""}>
       <label htmlFor={meta.id} className={`text-sm font-medium ${spec.kind === "checkbox" ? "flex items-center gap-2" : "block"}`}>
         {spec.kind === "checkbox" ? control : null}
         <span>{labelText(spec)}</span>
@@ -173,6 +176,7 @@ function Field({ spec, disabled }: { spec: FieldSpec; disabled: boolean }) {
       ) : null}
       {spec.caution === "laser" ? <LaserSafetyNote className="mt-1" /> : null}
       <ErrorLine id={meta.errorId} errors={meta.errors} />
+      {spec.helper && !disabled ? <FieldHelper kind={spec.helper} fieldName={spec.name} /> : null}
     </div>
   );
 }
@@ -270,7 +274,7 @@ function InnerForm<S extends z.ZodType>(
     shouldValidate: "onBlur",
     shouldRevalidate: "onInput",
     onValidate({ formData }) {
-      const submission = parseWithZod(formData, { schema: plainSchema });
+      const submission = parseWithZod(ownFields(formData, names), { schema: plainSchema });
       submissionRef.current = submission;
       return submission;
     },
@@ -342,6 +346,20 @@ function InnerForm<S extends z.ZodType>(
       </form>
     </FormProvider>
   );
+}
+
+/**
+ * Only the form's own fields (and conform's intent): a helper opened beside a
+ * field has inputs of its own inside this form, which the strict schemas
+ * would refuse as unknown keys.
+ */
+export function ownFields(formData: FormData, names: readonly string[]): FormData {
+  const roots = new Set(names.map((n) => n.split(/[.[]/)[0]));
+  const out = new FormData();
+  for (const [k, v] of formData.entries()) {
+    if (k.startsWith("__") || roots.has(k.split(/[.[]/)[0])) out.append(k, v);
+  }
+  return out;
 }
 
 function statusText(err: ApiError): string {

@@ -17,7 +17,7 @@ export function laserGroups(): FieldGroup[] {
       legend: "Laser pair",
       fields: [
         { name: "key", label: "Plan id", unit: "text, e.g. LP1", kind: "text", help: "How chains and the plan document name this laser pair." },
-        { name: "carrierTHz", label: "Carrier frequency", unit: "THz", kind: "number", help: "Laser 1, locked to a resonator mode." },
+        { name: "carrierTHz", label: "Carrier frequency", unit: "THz", kind: "number", help: "Laser 1, locked to a resonator mode.", helper: "wavelength" },
         {
           name: "carrierPowerMW",
           label: "Carrier power",
@@ -35,7 +35,7 @@ export function laserGroups(): FieldGroup[] {
           caution: "laser",
         },
         { name: "stepMHz", label: "Tuning step", unit: "MHz", kind: "number", help: "Granularity of the LO offset; 0 means any offset." },
-        { name: "driftMHz", label: "Drift", unit: "± MHz", kind: "number", help: "Worst-case excursion of the LO offset relative to the carrier while observing." },
+        { name: "driftMHz", label: "Drift", unit: "± MHz", kind: "number", help: "Worst-case excursion of the LO offset relative to the carrier while observing.", helper: "drift" },
         {
           name: "reach",
           label: "Reachable LO offsets",
@@ -74,8 +74,8 @@ export function resonatorGroups(): FieldGroup[] {
       legend: "Resonator",
       fields: [
         { name: "key", label: "Plan id", unit: "text, e.g. R1", kind: "text" },
-        { name: "fsrGHz", label: "Free spectral range", unit: "GHz", kind: "number", help: "Mode n sits at n × FSR from the carrier." },
-        { name: "loadedQ", label: "Loaded Q", unit: "dimensionless", kind: "number", help: "Sets the mode linewidth: carrier frequency / Q (1e7 at 193.4 THz gives 19.3 MHz)." },
+        { name: "fsrGHz", label: "Free spectral range", unit: "GHz", kind: "number", help: "Mode n sits at n × FSR from the carrier.", helper: "resonator" },
+        { name: "loadedQ", label: "Loaded Q", unit: "dimensionless", kind: "number", help: "Sets the mode linewidth: carrier frequency / Q (1e7 at 193.4 THz gives 19.3 MHz).", helper: "resonator" },
       ],
     },
   ];
@@ -164,7 +164,7 @@ export function channelGroups(refs: { chains: RefOption[] }): FieldGroup[] {
         { name: "key", label: "Plan id", unit: "text, e.g. wv1", kind: "text" },
         { name: "chainId", label: "Receiver chain", unit: "reference", kind: "select", options: refs.chains },
         { name: "name", label: "Name", unit: "text", kind: "text", wide: true, help: "For people, e.g. “183.31 line centre”." },
-        { name: "centerGHz", label: "Centre frequency", unit: "GHz", kind: "number" },
+        { name: "centerGHz", label: "Centre frequency", unit: "GHz", kind: "number", help: "Or enter the channel as written in sounder tables (183.31 ± 7.0, 2 × 500 MHz) with the notation helper.", helper: "notation" },
         { name: "bandwidthMHz", label: "Bandwidth", unit: "MHz", kind: "number", help: "Width of one passband." },
         { name: "dsbOffsetGHz", label: "DSB offset", unit: "GHz; empty for SSB", kind: "number", placeholder: "single sideband", help: "For a double-sideband channel at centre ± offset; more than half the bandwidth." },
         { name: "integrationMs", label: "Integration time", unit: "ms", kind: "number" },
@@ -174,7 +174,7 @@ export function channelGroups(refs: { chains: RefOption[] }): FieldGroup[] {
       legend: "Sensitivity",
       fields: [
         { name: "antennaK", label: "Antenna temperature", unit: "K", kind: "number" },
-        { name: "receiverK", label: "Receiver noise", unit: "K, SSB-referred at the mode peak", kind: "number" },
+        { name: "receiverK", label: "Receiver noise", unit: "K, SSB-referred at the mode peak", kind: "number", helper: "receiver" },
         { name: "gainStability", label: "Gain stability ΔG/G", unit: "fraction; 0 = ideal", kind: "number" },
         { name: "requiredNedtK", label: "Required NEΔT", unit: "K; empty = no requirement", kind: "number", placeholder: "no requirement" },
       ],
