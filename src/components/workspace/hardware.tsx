@@ -1,5 +1,6 @@
 "use client";
 
+import { OpticalFrequency } from "@/components/helpers";
 import type { Chain, ChainResult, Detector, Laser, Resonator } from "@/queries/types";
 import { formatGHz, formatInterval, formatMHz, formatNumber, formatQ } from "./format";
 import { buttonClass, Empty, LaserSafetyNote } from "./ui";
@@ -67,7 +68,10 @@ export function LaserTable({ lasers, onEdit }: { lasers: Laser[]; onEdit: Editab
             {lasers.map((l) => (
               <tr key={l.id} className="border-b border-ink/10">
                 <td className={`${td} font-medium`}>{l.key}</td>
-                <td className={td}>{formatNumber(l.carrierTHz, 3)}</td>
+                <td className={td}>
+                  {formatNumber(l.carrierTHz, 3)}
+                  <OpticalFrequency thz={l.carrierTHz} className="block text-xs" />
+                </td>
                 <td className={td}>{formatNumber(l.carrierPowerMW, 2)}</td>
                 <td className={td}>{formatNumber(l.loPowerMW, 2)}</td>
                 <td className={`${td} whitespace-normal`}>{l.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "")).join(", ")}</td>
@@ -160,11 +164,14 @@ export function ChainItem({
   chain,
   result,
   keys,
+  carrierTHz,
   onEdit,
 }: {
   chain: Chain;
   result: ChainResult | undefined;
   keys: { laser: string; resonator: string; detector: string };
+  /** The chain's laser-pair carrier, to show the LO as an optical frequency. */
+  carrierTHz?: number;
   onEdit?: () => void;
 }) {
   return (
@@ -175,6 +182,9 @@ export function ChainItem({
           ["Hardware", `${keys.laser} · ${keys.resonator} · ${keys.detector}`],
           ["Mode · sideband", `k = ${chain.mode}, ${chain.sideband}`],
           ["LO offset", `${formatGHz(chain.loOffsetGHz)} GHz`],
+          ...(carrierTHz !== undefined
+            ? ([["LO (laser 2)", <OpticalFrequency key="lo" thz={loTHz(carrierTHz, chain.loOffsetGHz)} />]] as [string, React.ReactNode][])
+            : []),
           ["RF input", formatInterval([chain.rfInput.minGHz, chain.rfInput.maxGHz])],
           ["Path", `tap ${formatNumber(chain.tapFraction, 3)}, loss ${formatNumber(chain.pathLossDB, 1)} dB, notch ${formatNumber(chain.carrierRejectionDB, 1)} dB${chain.sharedIf ? ", shared IF" : ""}`],
           ...(result
@@ -191,4 +201,9 @@ export function ChainItem({
       />
     </div>
   );
+}
+
+/** Laser 2's optical frequency: carrier + signed LO offset (GHz → THz). */
+export function loTHz(carrierTHz: number, loOffsetGHz: number): number {
+  return carrierTHz + loOffsetGHz / 1000;
 }

@@ -1,6 +1,8 @@
 "use client";
 
 import Link from "next/link";
+import { OpticalFrequency } from "@/components/helpers";
+import { loTHz } from "./hardware";
 import { LINE_CENTRES, PROTECTED_BANDS } from "@/lib/reference";
 import { useCollectionQuery, useMissionQuery, useResultQuery, useRevisionsQuery, useSettingsQuery } from "@/queries/missions";
 import { buildChannelRows } from "./channel-rows";
@@ -130,7 +132,10 @@ export function MissionReport({ missionId }: { missionId: string }) {
             {(lasers.data ?? []).map((l) => (
               <tr key={l.id}>
                 <td className={td}>{l.key}</td>
-                <td className={td}>{formatNumber(l.carrierTHz, 3)}</td>
+                <td className={td}>
+                  {formatNumber(l.carrierTHz, 3)}
+                  <OpticalFrequency thz={l.carrierTHz} className="block text-xs" />
+                </td>
                 <td className={td}>{formatNumber(l.carrierPowerMW, 2)}</td>
                 <td className={td}>{formatNumber(l.loPowerMW, 2)}</td>
                 <td className={td}>{l.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "")).join(", ")}</td>
@@ -213,7 +218,10 @@ export function MissionReport({ missionId }: { missionId: string }) {
                   <td className={td}>
                     k = {c.mode}, {c.sideband}
                   </td>
-                  <td className={td}>{formatGHz(c.loOffsetGHz)}</td>
+                  <td className={td}>
+                    {formatGHz(c.loOffsetGHz)}
+                    <LoOptical carrierTHz={lasers.data?.find((l) => l.id === c.laserId)?.carrierTHz} loOffsetGHz={c.loOffsetGHz} />
+                  </td>
                   <td className={td}>{formatInterval([c.rfInput.minGHz, c.rfInput.maxGHz], "")}</td>
                   <td className={td}>{formatMHz(r?.linewidthMHz, 2)}</td>
                   <td className={td}>{formatNumber(r?.pdInputMW, 3)}</td>
@@ -311,5 +319,15 @@ export function MissionReport({ missionId }: { missionId: string }) {
         </ul>
       </Section>
     </article>
+  );
+}
+
+/** Laser 2 as an optical frequency (carrier + LO offset), when the carrier is known. */
+function LoOptical({ carrierTHz, loOffsetGHz }: { carrierTHz: number | undefined; loOffsetGHz: number }) {
+  if (carrierTHz === undefined) return null;
+  return (
+    <span className="block text-xs">
+      LO <OpticalFrequency thz={loTHz(carrierTHz, loOffsetGHz)} />
+    </span>
   );
 }
