@@ -5,7 +5,7 @@
  * `src/schemas/workspace.ts`; these describe what the server sends back.
  */
 
-export type Severity = "error" | "warning" | "info";
+export type { Severity } from "@/lib/plan/types";
 
 export interface Row {
   id: string;
@@ -100,43 +100,9 @@ export interface Settings {
   version: number;
 }
 
-export interface Finding {
-  code: string;
-  severity: Severity;
-  chain: string;
-  channel: string | null;
-  message: string;
-  data?: Record<string, unknown>;
-}
-
-export interface ChainResult {
-  id: string;
-  linewidthMHz: number;
-  pdInputMW: number;
-  feasibleGHz: [number, number][];
-  excludedGHz: { bandGHz: [number, number]; codes: string[] }[];
-  placeGHz: number | null;
-  placeReason: string | null;
-}
-
-export interface ChannelResult {
-  id: string;
-  ifSlotGHz: [number, number] | null;
-  occupiedGHz: [number, number] | null;
-  imageGHz: [number, number] | null;
-  imageRejectionDB: number | null;
-  radiometricBandwidthMHz: number | null;
-  nedtK: number | null;
-  lockReplicaDB: number;
-}
-
-export interface PlanResult {
-  format: "heterolane.result/1";
-  chains: ChainResult[];
-  channels: ChannelResult[];
-  spurs: unknown[];
-  findings: Finding[];
-}
+// The result document as the engine defines it (one place for its types).
+export type { Finding, ChainResult, ChannelResult } from "@/lib/plan/types";
+export type PlanResult = import("@/lib/plan/types").ResultDocument;
 
 export interface RevisionSummary {
   number: number;

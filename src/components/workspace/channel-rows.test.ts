@@ -64,9 +64,9 @@ describe("buildChannelRows", () => {
       },
     ],
     findings: [
-      { code: "lock-replica", severity: "warning", chain: "A", channel: "wv1", message: "m" },
+      { code: "lock-replica", severity: "warning", chain: "A", channel: "wv1", message: "m", data: {} },
       { code: "slot-overlap", severity: "error", chain: "A", channel: "wv1", message: "m", data: { other: "wv2" } },
-      { code: "carrier-dominates-lo", severity: "warning", chain: "A", channel: null, message: "m" },
+      { code: "carrier-dominates-lo", severity: "warning", chain: "A", channel: null, message: "m", data: {} },
     ],
   };
   it("joins chain key, result and worst finding by plan key", () => {

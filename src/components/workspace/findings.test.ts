@@ -1,15 +1,16 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import type { Finding, Severity } from "@/queries/types";
+import type { Finding, FindingCode, Severity } from "@/lib/plan/types";
 import { countBySeverity, findingsForChannel, groupFindings, worstFinding } from "./findings";
 
 const f = (severity: Severity, chain: string, channel: string | null, code = "x", data?: object): Finding => ({
-  code,
+  // codes here are labels for grouping; the helpers under test treat them as plain strings
+  code: code as FindingCode,
   severity,
   chain,
   channel,
   message: `${code} on ${channel ?? chain}`,
-  ...(data ? { data: data as Record<string, unknown> } : {}),
+  data: (data ?? {}) as Finding["data"],
 });
 
 describe("worstFinding", () => {
