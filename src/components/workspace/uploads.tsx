@@ -214,7 +214,10 @@ function ChannelListUpload({ missionId }: { missionId: string }) {
             <code className="font-mono text-xs">{c}</code>
           </span>
         ))}{" "}
-        (the chain by its plan id; DSB offset, gain stability and required NEΔT may be left out). Channels are matched by id: new ids are
+        (the chain by its plan id; DSB offset, gain stability and required NEΔT may be left out). Instead of the centre, offset and
+        bandwidth numbers a row may give a <code className="font-mono text-xs">notation</code> column as channel tables write it
+        (<code className="font-mono text-xs">183.31 ± 7.0</code>) and a <code className="font-mono text-xs">bandwidth</code> text
+        column (<code className="font-mono text-xs">2 × 500 MHz</code>). Channels are matched by id: new ids are
         added, existing ones updated, others kept. Every row is checked; nothing is saved unless all rows are valid.
       </p>
       <div className="flex flex-wrap items-end gap-3">

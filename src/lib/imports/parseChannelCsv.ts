@@ -1,8 +1,11 @@
+import Papa from "papaparse";
+import { parseChannelNotation } from "@/lib/optics";
 import { channelSchema, type ChannelInput } from "@/schemas/workspace";
 import { readCsv, readNumber, type FileIssue } from "./internals/csv";
 import {
   BLANK_ALLOWED,
   CHANNEL_COLUMNS,
+  NOTATION_CHANNEL_COLUMNS,
   NUMERIC_CHANNEL_COLUMNS,
   REQUIRED_CHANNEL_COLUMNS,
   unguardText,
@@ -25,22 +28,43 @@ export type ChannelCsvParse = { ok: true; rows: ChannelCsvRow[]; valid: boolean 
  * missing or unknown columns, too many rows) refuse the whole file; row
  * problems are listed per row and column, and `valid` is true only when no
  * row has one.
+ *
+ * Optional `notation` and `bandwidth` text columns take a channel as sounder
+ * tables write it (NOTATION_CHANNEL_COLUMNS): with `notation`, the centerGHz
+ * and bandwidthMHz columns may be left out, with `bandwidth` the
+ * bandwidthMHz column. A row gives each quantity one way only; errors of
+ * these cells name the text column.
  */
 export function parseChannelCsv(text: string, chains: readonly { id: string; key: string }[]): ChannelCsvParse {
-  const table = readCsv(text, REQUIRED_CHANNEL_COLUMNS, { allowed: CHANNEL_COLUMNS });
+  const head = new Set(headerOf(text));
+  const hasNotation = head.has("notation");
+  const hasBandwidth = head.has("bandwidth");
+  const required = REQUIRED_CHANNEL_COLUMNS.filter(
+    (c) => !(c === "centerGHz" && hasNotation) && !(c === "bandwidthMHz" && (hasNotation || hasBandwidth)),
+  );
+  const table = readCsv(text, required, { allowed: [...CHANNEL_COLUMNS, ...NOTATION_CHANNEL_COLUMNS] });
   if (!table.ok) return table;
   const chainByKey = new Map(chains.map((c) => [c.key, c.id]));
   const firstRowOfKey = new Map<string, number>();
   const rows: ChannelCsvRow[] = table.records.map((rec) => {
     const errors: ChannelCsvRow["errors"] = [];
     const input: Record<string, unknown> = { key: unguardText(rec.cells.key ?? ""), name: unguardText(rec.cells.name ?? "") };
+    const notation = rec.cells.notation ?? "";
+    const bwText = rec.cells.bandwidth ?? "";
+    /** Which text column a numeric field came from (to name it in errors). */
+    const source = new Map<string, string>();
+    if (notation !== "") {
+      source.set("centerGHz", "notation").set("dsbOffsetGHz", "notation").set("bandwidthMHz", "notation");
+    }
+    if (bwText !== "") source.set("bandwidthMHz", "bandwidth");
     for (const col of NUMERIC_CHANNEL_COLUMNS) {
       const cell = rec.cells[col] ?? "";
-      if (cell === "" && BLANK_ALLOWED.has(col)) continue;
+      if (cell === "" && (BLANK_ALLOWED.has(col) || source.has(col))) continue;
       const n = readNumber(cell);
       if (n.ok) input[col] = n.value;
       else errors.push({ column: col, message: n.message });
     }
+    errors.push(...readNotationCells(rec.cells, input));
     const chainKey = unguardText(rec.cells.chain ?? "");
     const chainId = chainByKey.get(chainKey);
     if (chainKey === "") errors.push({ column: "chain", message: "is empty (a chain key is required)" });
@@ -49,10 +73,13 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
     const parsed = channelSchema.safeParse(input);
     if (!parsed.success) {
       for (const iss of parsed.error.issues) {
-        const col = String(iss.path[0] ?? "");
-        if (col === "chainId") continue;
+        const field = String(iss.path[0] ?? "");
+        if (field === "chainId") continue;
+        const col = source.get(field) ?? field;
         if (errors.some((e) => e.column === col)) continue;
-        errors.push({ column: col, message: iss.message });
+        // A field the text cells failed to give has its error on that cell already.
+        if (source.has(field) && errors.some((e) => e.column === "notation" || e.column === "bandwidth")) continue;
+        errors.push({ column: col, message: col === field ? iss.message : `${field} ${iss.message}` });
       }
     }
     const key = String(input.key).trim();
@@ -60,9 +87,62 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
     if (key !== "" && earlier !== undefined)
       errors.push({ column: "key", message: `repeats the key of row ${earlier}` });
     else if (key !== "") firstRowOfKey.set(key, rec.row);
-    errors.sort((a, b) => CHANNEL_COLUMNS.indexOf(a.column as never) - CHANNEL_COLUMNS.indexOf(b.column as never));
+    errors.sort((a, b) => COLUMN_ORDER.indexOf(a.column) - COLUMN_ORDER.indexOf(b.column));
     if (errors.length > 0 || !parsed.success) return { row: rec.row, errors };
     return { row: rec.row, channel: { ...parsed.data, chain: chainKey }, errors };
   });
   return { ok: true, rows, valid: rows.every((r) => r.errors.length === 0) };
+}
+
+const COLUMN_ORDER: readonly string[] = [...CHANNEL_COLUMNS, ...NOTATION_CHANNEL_COLUMNS];
+
+/** The trimmed column names of the first row (no checks: readCsv does those). */
+function headerOf(text: string): string[] {
+  const body = text.startsWith("\uFEFF") ? text.slice(1) : text;
+  const first = Papa.parse<string[]>(body, { header: false, preview: 1, delimiter: "," }).data[0] ?? [];
+  return first.map((h) => h.trim());
+}
+
+const ONE_WAY = "give it in one column only";
+
+/**
+ * Reads the `notation` and `bandwidth` cells of one row into `input`
+ * (centerGHz, dsbOffsetGHz, bandwidthMHz) with the optics parser, and
+ * returns the errors, each naming its column.
+ */
+function readNotationCells(cells: Record<string, string>, input: Record<string, unknown>): { column: string; message: string }[] {
+  const notation = cells.notation ?? "";
+  const bwText = cells.bandwidth ?? "";
+  const bwMHzCell = cells.bandwidthMHz ?? "";
+  const errors: { column: string; message: string }[] = [];
+  if (bwText !== "" && bwMHzCell !== "") {
+    errors.push({ column: "bandwidth", message: `and bandwidthMHz are both filled in; ${ONE_WAY}` });
+    return errors;
+  }
+  if (notation !== "") {
+    for (const col of ["centerGHz", "dsbOffsetGHz"] as const) {
+      if ((cells[col] ?? "") !== "") errors.push({ column: "notation", message: `and ${col} are both filled in; ${ONE_WAY}` });
+    }
+    if (errors.length > 0) return errors;
+    const fallback = bwText !== "" ? bwText : typeof input.bandwidthMHz === "number" ? input.bandwidthMHz : null;
+    const r = parseChannelNotation(notation, { bandwidth: fallback });
+    if (!r.ok) {
+      const column = r.error.part === "bandwidth" && bwText !== "" ? "bandwidth" : "notation";
+      errors.push({ column, message: r.error.message });
+      return errors;
+    }
+    input.centerGHz = r.value.centerGHz;
+    input.dsbOffsetGHz = r.value.dsbOffsetGHz;
+    input.bandwidthMHz = r.value.bandwidthMHz;
+    return errors;
+  }
+  if (bwText !== "") {
+    // The centre and offset come from their own columns; the parser reads the bandwidth against them.
+    if (typeof input.centerGHz !== "number") return errors; // centerGHz already has its own error
+    const written = input.dsbOffsetGHz === undefined ? String(input.centerGHz) : `${String(input.centerGHz)} ± ${String(input.dsbOffsetGHz)}`;
+    const r = parseChannelNotation(written, { bandwidth: bwText });
+    if (!r.ok) errors.push({ column: "bandwidth", message: r.error.message });
+    else input.bandwidthMHz = r.value.bandwidthMHz;
+  }
+  return errors;
 }

@@ -35,6 +35,14 @@ export const NUMERIC_CHANNEL_COLUMNS = [
   "requiredNedtK",
 ] as const;
 
+/**
+ * Optional text columns in the notation of sounder channel tables:
+ * `notation` ("183.31 ± 7.0", "183.311 ± 3.00 GHz, 2 × 1000 MHz") gives the
+ * centre, DSB offset and (when written) the bandwidth; `bandwidth`
+ * ("2 × 500 MHz", "500 MHz") gives the width of each passband.
+ */
+export const NOTATION_CHANNEL_COLUMNS = ["notation", "bandwidth"] as const;
+
 /** Columns whose blank cell means null (or the default 0 for gainStability). */
 export const BLANK_ALLOWED = new Set<string>(["dsbOffsetGHz", "gainStability", "requiredNedtK"]);
 
