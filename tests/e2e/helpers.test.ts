@@ -1,0 +1,84 @@
+/**
+ * Helpers beside the workspace fields, in Chromium against the running app
+ * (HETEROLANE_TEST_URL): an engineer opens the drift budget beside the laser
+ * pair's drift field, applies its result, saves, and the server re-checks the
+ * plan as for any other edit (a new revision, a changed finding).
+ * Screenshot: HETEROLANE_TEST_OUTPUT (default test-output)/e2e-helpers.png.
+ */
+import { readFileSync } from "node:fs";
+import path from "node:path";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { BASE_URL, closeTestPool, makeTeamWithRoles, type TeamWithRoles } from "../setup/auth-helpers";
+import { launchBrowser, screenshot } from "../setup/browser";
+import { call, missionWithPlan } from "../setup/workspace-helpers";
+
+// Example 1 of the plan format: laser pair LP1 at 193.4 THz, step 10 MHz, drift ± 20 MHz, detector IF 0.05–6 GHz.
+const PLAN = JSON.parse(readFileSync(path.join(__dirname, "../fixtures/plans/ex1-single-channel.plan.json"), "utf8"));
+
+let team: TeamWithRoles;
+let missionId = "";
+
+beforeAll(async () => {
+  team = await makeTeamWithRoles();
+  missionId = await missionWithPlan(team.engineer, PLAN, "E2E helpers mission (test data)");
+}, 420_000);
+
+afterAll(async () => {
+  await closeTestPool();
+});
+
+describe("helpers beside the workspace fields", () => {
+  it("an engineer applies the drift budget to driftMHz, saves, and the plan is re-checked", async () => {
+    const ctx = await launchBrowser({ width: 1400, height: 1100 });
+    const host = new URL(BASE_URL).hostname;
+    await ctx.context.addCookies([...team.engineer.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })));
+    const page = ctx.page;
+    page.setDefaultTimeout(120_000);
+    page.setDefaultNavigationTimeout(180_000);
+    try {
+      await page.goto(`${BASE_URL}/missions/${missionId}`);
+      const panel = page.getByTestId("findings-panel");
+      await expect.poll(async () => Number(await page.getByTestId("revision-number").innerText()), { timeout: 120_000 }).toBeGreaterThan(0);
+      const revisionBefore = Number(await page.getByTestId("revision-number").innerText());
+      // ± 20 MHz drift keeps every IF inside the detector band: no if-outside-detector finding yet.
+      await panel.locator('[data-code="carrier-dominates-lo"]').first().waitFor();
+      expect(await panel.locator('[data-code="if-outside-detector"]').count()).toBe(0);
+      // The carrier is shown with its vacuum wavelength and grid channel (193.4 THz = 1550.116 nm, G.694.1 anchor channel).
+      expect(await page.getByTestId("lasers-table").innerText()).toMatch(/1550\.1\d\d nm/);
+
+      await page.getByRole("button", { name: "Edit laser pair LP1" }).click();
+      const dialog = page.getByRole("dialog");
+      await dialog.getByRole("button", { name: "Helper: drift budget" }).click();
+      const helper = dialog.locator('[data-helper="drift-budget"]');
+      await helper.waitFor();
+      // A free-running laser 2 of ± 2000 MHz dominates the budget; with the default terms (1 mK, 0.5 MHz lock, 10 MHz step)
+      // the worst-case sum is a little above 2000 MHz.
+      await helper.getByLabel(/Laser 2 stability/).fill("2000");
+      const drift = await helper.getByTestId("db-drift").innerText();
+      const shown = Number(/([\d.]+)/.exec(drift.replace(/±/, ""))?.[1]);
+      expect(shown).toBeGreaterThan(2005);
+      expect(shown).toBeLessThan(2020);
+      await helper.getByRole("button", { name: "Apply drift" }).click();
+      const field = dialog.locator('input[name="driftMHz"]');
+      const applied = Number(await field.inputValue());
+      expect(applied).toBeGreaterThanOrEqual(shown);
+      expect(applied).toBeLessThan(shown + 0.1 + 1e-9);
+      await screenshot(page, "e2e-helpers");
+      await dialog.getByRole("button", { name: "Save laser pair" }).click();
+      await dialog.waitFor({ state: "detached" });
+
+      await expect
+        .poll(async () => Number(await page.getByTestId("revision-number").innerText()), { timeout: 120_000 })
+        .toBeGreaterThan(revisionBefore);
+      // The wider drift pushes IF edges outside the 0.05–6 GHz detector band: the re-check reports it.
+      await panel.locator('[data-code="if-outside-detector"]').first().waitFor();
+
+      const lasers = await call(team.engineer, "GET", `/api/v1/missions/${missionId}/lasers`);
+      expect(lasers.status).toBe(200);
+      const body = lasers.body as { lasers: { driftMHz: number }[] };
+      expect(body.lasers[0]?.driftMHz).toBe(applied);
+    } finally {
+      await ctx.close();
+    }
+  }, 420_000);
+});
