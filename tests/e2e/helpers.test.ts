@@ -27,7 +27,37 @@ afterAll(async () => {
   await closeTestPool();
 });
 
+async function pageAs(c: TeamWithRoles["engineer"]) {
+  const ctx = await launchBrowser({ width: 1400, height: 1100 });
+  const host = new URL(BASE_URL).hostname;
+  await ctx.context.addCookies([...c.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })));
+  ctx.page.setDefaultTimeout(120_000);
+  ctx.page.setDefaultNavigationTimeout(180_000);
+  return ctx;
+}
+
 describe("helpers beside the workspace fields", () => {
+  it("the lane view offers Save as revision only to a role that may edit; the main navigation links Tools, Audit and Notifications", async () => {
+    const viewer = await pageAs(team.viewer);
+    try {
+      await viewer.page.goto(`${BASE_URL}/missions/${missionId}/lanes`);
+      await viewer.page.getByTestId("place-A").waitFor();
+      expect(await viewer.page.getByTestId("save-A").count()).toBe(0);
+      const nav = viewer.page.getByRole("navigation", { name: "Main" });
+      for (const [name, href] of [["Tools", "/tools"], ["Audit", "/audit"], ["Notifications", "/settings/notifications"]] as const)
+        expect(await nav.getByRole("link", { name }).getAttribute("href")).toBe(href);
+    } finally {
+      await viewer.close();
+    }
+    const engineer = await pageAs(team.engineer);
+    try {
+      await engineer.page.goto(`${BASE_URL}/missions/${missionId}/lanes`);
+      await engineer.page.getByTestId("save-A").waitFor();
+    } finally {
+      await engineer.close();
+    }
+  }, 420_000);
+
   it("an engineer applies the drift budget to driftMHz, saves, and the plan is re-checked", async () => {
     const ctx = await launchBrowser({ width: 1400, height: 1100 });
     const host = new URL(BASE_URL).hostname;

@@ -12,8 +12,12 @@ import { LaneView, type SaveOutcome } from "./LaneView";
 
 const planKey = (missionId: string) => [...missionKeys.detail(missionId), "plan-document"] as const;
 
-/** The lane view of a mission: plan and stored result through the API; saving an LO makes a revision. */
-export function MissionLanes({ missionId }: { missionId: string }) {
+/**
+ * The lane view of a mission: plan and stored result through the API; saving
+ * an LO makes a revision. Without `canEdit` (the role cannot edit the plan)
+ * there is no save control; the server refuses such writes anyway.
+ */
+export function MissionLanes({ missionId, canEdit = false }: { missionId: string; canEdit?: boolean }) {
   const qc = useQueryClient();
   const planQuery = useQuery({
     queryKey: planKey(missionId),
@@ -58,5 +62,5 @@ export function MissionLanes({ missionId }: { missionId: string }) {
         This mission has no receiver chains yet. <Link href={`/missions/${missionId}`}>Add hardware and chains</Link> to see the lane view.
       </p>
     );
-  return <LaneView plan={plan} result={(resultQuery.data as unknown as ResultDocument | null) ?? null} onSaveLo={onSaveLo} />;
+  return <LaneView plan={plan} result={(resultQuery.data as unknown as ResultDocument | null) ?? null} onSaveLo={canEdit ? onSaveLo : undefined} />;
 }

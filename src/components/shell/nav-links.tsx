@@ -6,6 +6,8 @@ const LINKS = [
   { href: "/missions", label: "Missions" },
   { href: "/team", label: "Team" },
   { href: "/tools", label: "Tools" },
+  { href: "/audit", label: "Audit" },
+  { href: "/settings/notifications", label: "Notifications" },
 ] as const;
 
 export function NavLinks() {
