@@ -75,6 +75,10 @@ describe("helpers beside the workspace fields", () => {
       expect(await panel.locator('[data-code="if-outside-detector"]').count()).toBe(0);
       // The carrier is shown with its vacuum wavelength and grid channel (193.4 THz = 1550.116 nm, G.694.1 anchor channel).
       expect(await page.getByTestId("lasers-table").innerText()).toMatch(/1550\.1\d\d nm/);
+      // Chain A: LO = 193.4 THz + 184.81 GHz = 193.58481 THz; upper sideband mode k = 1: 193.4 THz + 183.31 GHz = 193.58331 THz.
+      const chainText = await page.locator('[data-chain="A"]').innerText();
+      expect(chainText).toMatch(/LO \(laser 2\)\s*193\.5848 THz · 1548\.\d{3} nm/);
+      expect(chainText).toMatch(/Sideband mode\s*193\.5833 THz/);
 
       await page.getByRole("button", { name: "Edit laser pair LP1" }).click();
       const dialog = page.getByRole("dialog");

@@ -165,6 +165,7 @@ export function ChainItem({
   result,
   keys,
   carrierTHz,
+  fsrGHz,
   onEdit,
 }: {
   chain: Chain;
@@ -172,6 +173,8 @@ export function ChainItem({
   keys: { laser: string; resonator: string; detector: string };
   /** The chain's laser-pair carrier, to show the LO as an optical frequency. */
   carrierTHz?: number;
+  /** The chain's resonator FSR, to show the wanted sideband's mode as an optical frequency. */
+  fsrGHz?: number;
   onEdit?: () => void;
 }) {
   return (
@@ -184,6 +187,14 @@ export function ChainItem({
           ["LO offset", `${formatGHz(chain.loOffsetGHz)} GHz`],
           ...(carrierTHz !== undefined
             ? ([["LO (laser 2)", <OpticalFrequency key="lo" thz={loTHz(carrierTHz, chain.loOffsetGHz)} />]] as [string, React.ReactNode][])
+            : []),
+          ...(carrierTHz !== undefined && fsrGHz !== undefined
+            ? ([
+                [
+                  "Sideband mode",
+                  <OpticalFrequency key="sb" thz={loTHz(carrierTHz, (chain.sideband === "upper" ? 1 : -1) * chain.mode * fsrGHz)} />,
+                ],
+              ] as [string, React.ReactNode][])
             : []),
           ["RF input", formatInterval([chain.rfInput.minGHz, chain.rfInput.maxGHz])],
           ["Path", `tap ${formatNumber(chain.tapFraction, 3)}, loss ${formatNumber(chain.pathLossDB, 1)} dB, notch ${formatNumber(chain.carrierRejectionDB, 1)} dB${chain.sharedIf ? ", shared IF" : ""}`],

@@ -159,6 +159,7 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
               result={result.data?.chains.find((r) => r.id === c.key)}
               keys={{ laser: keyOf(refs.lasers, c.laserId), resonator: keyOf(refs.resonators, c.resonatorId), detector: keyOf(refs.detectors, c.detectorId) }}
               carrierTHz={refs.lasers.find((l) => l.id === c.laserId)?.carrierTHz}
+              fsrGHz={refs.resonators.find((r) => r.id === c.resonatorId)?.fsrGHz}
               onEdit={edit("chains")(c)}
             />
           ))}

@@ -217,6 +217,11 @@ export function MissionReport({ missionId }: { missionId: string }) {
                   </td>
                   <td className={td}>
                     k = {c.mode}, {c.sideband}
+                    <SidebandOptical
+                      carrierTHz={lasers.data?.find((l) => l.id === c.laserId)?.carrierTHz}
+                      fsrGHz={resonators.data?.find((x) => x.id === c.resonatorId)?.fsrGHz}
+                      signedMode={(c.sideband === "upper" ? 1 : -1) * c.mode}
+                    />
                   </td>
                   <td className={td}>
                     {formatGHz(c.loOffsetGHz)}
@@ -328,6 +333,16 @@ function LoOptical({ carrierTHz, loOffsetGHz }: { carrierTHz: number | undefined
   return (
     <span className="block text-xs">
       LO <OpticalFrequency thz={loTHz(carrierTHz, loOffsetGHz)} />
+    </span>
+  );
+}
+
+/** The wanted sideband's resonator mode as an optical frequency (carrier ± k × FSR), when both are known. */
+function SidebandOptical({ carrierTHz, fsrGHz, signedMode }: { carrierTHz: number | undefined; fsrGHz: number | undefined; signedMode: number }) {
+  if (carrierTHz === undefined || fsrGHz === undefined) return null;
+  return (
+    <span className="block text-xs">
+      mode <OpticalFrequency thz={loTHz(carrierTHz, signedMode * fsrGHz)} />
     </span>
   );
 }
