@@ -58,6 +58,30 @@ describe("helpers beside the workspace fields", () => {
     }
   }, 420_000);
 
+  it("the notation helper in the channel form fills centre, DSB offset and bandwidth (not saved until the user saves)", async () => {
+    const ctx = await pageAs(team.engineer);
+    const page = ctx.page;
+    try {
+      await page.goto(`${BASE_URL}/missions/${missionId}`);
+      await page.getByRole("button", { name: "Edit channel wv1" }).click();
+      const dialog = page.getByRole("dialog");
+      await dialog.getByRole("button", { name: "Helper: channel notation" }).click();
+      const helper = dialog.locator('[data-helper="channel-notation"]');
+      // MHS channel H3 as its channel table writes it (EUMETSAT MHS product description): 183.311 ± 3.00 GHz, 2 × 1000 MHz.
+      await helper.getByLabel("Channel", { exact: true }).fill("183.311 ± 3.00 GHz, 2 × 1000 MHz");
+      await helper.getByRole("button", { name: "Apply channel" }).click();
+      expect(Number(await dialog.locator('input[name="centerGHz"]').inputValue())).toBe(183.311);
+      expect(Number(await dialog.locator('input[name="dsbOffsetGHz"]').inputValue())).toBe(3);
+      expect(Number(await dialog.locator('input[name="bandwidthMHz"]').inputValue())).toBe(1000);
+      await dialog.getByRole("button", { name: "Cancel" }).click();
+      const stored = await call(team.engineer, "GET", `/api/v1/missions/${missionId}/channels`);
+      const wv1 = (stored.body as { channels: { key: string; centerGHz: number; dsbOffsetGHz: number | null }[] }).channels.find((c) => c.key === "wv1");
+      expect(wv1).toMatchObject({ centerGHz: 183.31, dsbOffsetGHz: null });
+    } finally {
+      await ctx.close();
+    }
+  }, 420_000);
+
   it("an engineer applies the drift budget to driftMHz, saves, and the plan is re-checked", async () => {
     const ctx = await launchBrowser({ width: 1400, height: 1100 });
     const host = new URL(BASE_URL).hostname;
