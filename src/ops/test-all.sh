@@ -85,7 +85,20 @@ if [ -f .next/BUILD_ID ]; then
   pids+=($!)
   node_modules/.bin/next start -p "$APP_PORT" >"$OUT/app.log" 2>&1 &
   pids+=($!)
+  # Two more app processes on the same database with rate limiting on: the
+  # limits are kept in PostgreSQL, so they hold across processes (tested in
+  # tests/integration/auth-rate-limit.test.ts).
+  RL_PORT_A="$(free_port)"; RL_PORT_B="$(free_port)"
+  for port in "$RL_PORT_A" "$RL_PORT_B"; do
+    HETEROLANE_AUTH_RATE_LIMIT=on BETTER_AUTH_URL="http://localhost:$RL_PORT_A" \
+      node_modules/.bin/next start -p "$port" >"$OUT/app-rate-limit-$port.log" 2>&1 &
+    pids+=($!)
+  done
+  export HETEROLANE_RATE_LIMIT_URLS="http://localhost:$RL_PORT_A,http://localhost:$RL_PORT_B"
+  export HETEROLANE_RATE_LIMIT_ORIGIN="http://localhost:$RL_PORT_A"
   set +m
+  wait_http "http://127.0.0.1:$RL_PORT_A/api/health" 90 && wait_http "http://127.0.0.1:$RL_PORT_B/api/health" 90 ||
+    log "a rate-limited app process did not start; see test-output/app-rate-limit-*.log"
   if wait_http "http://127.0.0.1:$APP_PORT/api/health" 90; then
     suite integration
     suite e2e
