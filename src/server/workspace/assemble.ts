@@ -6,6 +6,7 @@ import type { PlanInput } from "@/schemas/plan";
 import { PLAN_FORMAT } from "@/schemas/plan";
 import { notFound } from "@/server/http";
 import type { Queryable } from "./tx";
+import { channelFigures } from "./mappers";
 
 /**
  * Assembles the `heterolane.plan/1` document of a mission's current draft
@@ -74,14 +75,7 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       id: ch.key,
       name: ch.name,
       chain: chainKey.get(ch.chainId) ?? "",
-      centerGHz: ch.centerGHz,
-      bandwidthMHz: ch.bandwidthMHz,
-      dsbOffsetGHz: ch.dsbOffsetGHz,
-      integrationMs: ch.integrationMs,
-      antennaK: ch.antennaK,
-      receiverK: ch.receiverK,
-      gainStability: ch.gainStability,
-      requiredNedtK: ch.requiredNedtK,
+      ...channelFigures(ch),
     })),
   };
 }

@@ -99,6 +99,18 @@ export const chainValues = (i: ChainInput) => ({
   sharedIf: i.sharedIf,
 });
 
+/** The measured and required quantities of a channel, in plan-document order (shared by every row ↔ plan mapping). */
+export const channelFigures = (c: Pick<Channel, "centerGHz" | "bandwidthMHz" | "dsbOffsetGHz" | "integrationMs" | "antennaK" | "receiverK" | "gainStability" | "requiredNedtK">) => ({
+  centerGHz: c.centerGHz,
+  bandwidthMHz: c.bandwidthMHz,
+  dsbOffsetGHz: c.dsbOffsetGHz,
+  integrationMs: c.integrationMs,
+  antennaK: c.antennaK,
+  receiverK: c.receiverK,
+  gainStability: c.gainStability,
+  requiredNedtK: c.requiredNedtK,
+});
+
 export const channelDto = (r: Channel) => ({
   ...stamps(r),
   key: r.key,

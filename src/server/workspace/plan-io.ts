@@ -9,6 +9,7 @@ import { assemblePlan } from "./assemble";
 import { getMissionRow } from "./queries";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { inTransaction, lockMission, type Queryable, type Tx } from "./tx";
+import { channelFigures } from "./mappers";
 
 /**
  * The `heterolane.plan/1` document of the mission's current draft. No team
@@ -151,14 +152,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
         key: ch.id,
         name: ch.name,
         chainId: chainIds.get(ch.chain)!,
-        centerGHz: ch.centerGHz,
-        bandwidthMHz: ch.bandwidthMHz,
-        dsbOffsetGHz: ch.dsbOffsetGHz,
-        integrationMs: ch.integrationMs,
-        antennaK: ch.antennaK,
-        receiverK: ch.receiverK,
-        gainStability: ch.gainStability,
-        requiredNedtK: ch.requiredNedtK,
+        ...channelFigures(ch),
       })),
     );
 }

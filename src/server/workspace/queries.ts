@@ -22,6 +22,7 @@ import { isUuid } from "./errors";
 import {
   chainDto,
   channelDto,
+  channelFigures,
   detectorDto,
   laserDto,
   missionDto,
@@ -221,13 +222,6 @@ export async function listChannelsForCsv(missionId: string) {
     key: ch.key,
     name: ch.name,
     chain: chainKey,
-    centerGHz: ch.centerGHz,
-    bandwidthMHz: ch.bandwidthMHz,
-    dsbOffsetGHz: ch.dsbOffsetGHz,
-    integrationMs: ch.integrationMs,
-    antennaK: ch.antennaK,
-    receiverK: ch.receiverK,
-    gainStability: ch.gainStability,
-    requiredNedtK: ch.requiredNedtK,
+    ...channelFigures(ch),
   }));
 }
