@@ -32,7 +32,7 @@ describe("auditCsv", () => {
     fc.assert(
       fc.property(fc.array(fc.record({ actorName: text, summary: text, entity: text }), { maxLength: 5 }), (parts) => {
         const rows = parts.map((p) => row(p));
-        const parsed = Papa.parse<string[]>(auditCsv(rows), { newline: "\r\n", skipEmptyLines: false });
+        const parsed = Papa.parse<string[]>(auditCsv(rows), { delimiter: ",", newline: "\r\n", skipEmptyLines: false });
         const data = parsed.data.filter((r) => !(r.length === 1 && r[0] === ""));
         expect(data[0]).toEqual([...AUDIT_CSV_HEADER]);
         expect(data).toHaveLength(rows.length + 1);
