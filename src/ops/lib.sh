@@ -120,13 +120,16 @@ psql_cmd() {
 }
 
 # wait_http URL SECONDS
+# (Node's fetch rather than curl: a fresh machine need not have curl.)
 wait_http() {
-  local url="$1" secs="$2" i
-  for ((i = 0; i < secs * 4; i++)); do
-    if curl -fsS -o /dev/null "$url" 2>/dev/null; then return 0; fi
-    sleep 0.25
-  done
-  return 1
+  node -e '
+    const [url, secs] = [process.argv[1], Number(process.argv[2])];
+    const until = Date.now() + secs * 1000;
+    (async function poll() {
+      try { const r = await fetch(url); if (r.ok) process.exit(0); } catch {}
+      if (Date.now() > until) process.exit(1);
+      setTimeout(poll, 250);
+    })();' "$1" "$2"
 }
 
 # Builds the app unless a build newer than every source file exists.
