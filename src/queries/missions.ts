@@ -127,6 +127,19 @@ export function useUpdateMissionMutation(missionId: string) {
   });
 }
 
+/** Deletes the mission with all its hardware, chains, channels and revisions (owners only; the server checks). */
+export function useDeleteMissionMutation(missionId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: ({ version }: { version: number }) =>
+      apiFetch<unknown>(`${api.mission(missionId)}?version=${version}`, { method: "DELETE" }),
+    onSuccess: () => {
+      qc.removeQueries({ queryKey: missionKeys.detail(missionId) });
+      return qc.invalidateQueries({ queryKey: missionKeys.lists() });
+    },
+  });
+}
+
 export function useSaveSettingsMutation(missionId: string) {
   const qc = useQueryClient();
   return useMutation({

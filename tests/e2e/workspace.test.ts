@@ -198,6 +198,30 @@ describe("mission workspace", () => {
     await ctx.close();
   }, 420_000);
 
+  it("only an owner gets the delete control, and deleting a mission removes it", async () => {
+    const created = await json(team.owner, "/api/v1/missions", { method: "POST", json: { name: "E2E mission to delete (test data)" } });
+    expect(created.status).toBe(201);
+    const doomed = created.body.id as string;
+
+    const asEngineer = await pageAs(team.engineer);
+    await asEngineer.page.goto(`${BASE_URL}/missions/${doomed}`);
+    await asEngineer.page.getByTestId("revision-line").waitFor();
+    expect(await asEngineer.page.getByRole("button", { name: "Delete this mission" }).count()).toBe(0);
+    await asEngineer.ctx.close();
+
+    const { ctx, page } = await pageAs(team.owner);
+    await page.goto(`${BASE_URL}/missions/${doomed}`);
+    const del = page.getByRole("button", { name: "Delete this mission" });
+    await del.waitFor();
+    page.once("dialog", (d) => void d.accept());
+    await del.click();
+    await page.waitForURL(`${BASE_URL}/missions`);
+    expect((await json(team.owner, `/api/v1/missions/${doomed}`)).status).toBe(404);
+    // the mission the other tests use is untouched
+    expect((await json(team.owner, `/api/v1/missions/${missionId}`)).status).toBe(200);
+    await ctx.close();
+  }, 420_000);
+
   it("the printable report shows the plan, findings and cautions", async () => {
     const { ctx, page } = await pageAs(team.viewer);
     await page.goto(`${BASE_URL}/missions/${missionId}/report`);

@@ -1,11 +1,13 @@
 "use client";
 
 import Link from "next/link";
+import { useRouter } from "next/navigation";
 import { useCallback, useMemo, useState } from "react";
 import { api } from "@/queries/api";
 import type { Collection } from "@/queries/keys";
 import {
   useCollectionQuery,
+  useDeleteMissionMutation,
   useMissionQuery,
   useResultQuery,
   useActivityQuery,
@@ -24,8 +26,16 @@ import { buttonClass, Card, ErrorNote, SENSITIVITY_TEXT, Spinner } from "./ui";
 
 type Editing = { kind: Collection; row: (Record<string, unknown> & { id: string; version: number }) | null } | { kind: "settings" } | { kind: "mission" } | null;
 
-export function MissionOverview({ missionId, canEdit }: { missionId: string; canEdit: boolean }) {
+export function MissionOverview({ missionId, canEdit, canDelete = false }: { missionId: string; canEdit: boolean; canDelete?: boolean }) {
   const mission = useMissionQuery(missionId);
+  const router = useRouter();
+  const deleteMission = useDeleteMissionMutation(missionId);
+  const confirmDelete = () => {
+    const m = mission.data;
+    if (!m) return;
+    if (!window.confirm(`Delete the mission "${m.name}" with all its hardware, chains, channels, revisions and findings? This cannot be undone.`)) return;
+    deleteMission.mutate({ version: m.version }, { onSuccess: () => router.push("/missions") });
+  };
   const lasers = useCollectionQuery(missionId, "lasers");
   const resonators = useCollectionQuery(missionId, "resonators");
   const detectors = useCollectionQuery(missionId, "detectors");
@@ -81,7 +91,17 @@ export function MissionOverview({ missionId, canEdit }: { missionId: string; can
                 Edit
               </button>
             ) : null}
+            {canDelete && mission.data ? (
+              <button type="button" className={buttonClass.quiet} onClick={confirmDelete} disabled={deleteMission.isPending} aria-label="Delete this mission">
+                {deleteMission.isPending ? "Deleting…" : "Delete"}
+              </button>
+            ) : null}
           </h1>
+          {deleteMission.error ? (
+            <ErrorNote title="The mission was not deleted.">
+              {deleteMission.error.message} Reload the page to see its current state.
+            </ErrorNote>
+          ) : null}
           {mission.data?.description ? <p className="mt-0.5 max-w-2xl text-sm text-ink-soft">{mission.data.description}</p> : null}
           <p className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm" data-testid="revision-line">
             <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs font-medium uppercase tracking-wide">{mission.data?.status ?? "draft"}</span>

@@ -8,10 +8,10 @@ export const metadata: Metadata = { title: "Mission" };
 
 export default async function MissionPage({ params }: { params: Promise<{ missionId: string }> }) {
   const { missionId } = await params;
-  const { canEdit, actor } = await workspaceAbilities();
+  const { canEdit, canDeleteMission, actor } = await workspaceAbilities();
   return (
     <main className="mx-auto max-w-7xl px-6 py-6">
-      <MissionOverview missionId={missionId} canEdit={canEdit} />
+      <MissionOverview missionId={missionId} canEdit={canEdit} canDelete={canDeleteMission} />
       <ReviewPanel missionId={missionId} can={reviewAbilities(actor)} />
     </main>
   );

@@ -12,5 +12,6 @@ export async function workspaceAbilities() {
     actor,
     canCreateMission: actor ? roleCan(actor.role, { mission: ["create"] }) : false,
     canEdit: actor ? roleCan(actor.role, { plan: ["edit"] }) : false,
+    canDeleteMission: actor ? roleCan(actor.role, { mission: ["delete"] }) : false,
   };
 }
