@@ -11,9 +11,8 @@ export interface Reply {
   headers: Headers;
 }
 
-/** Sends a request (JSON body when given) and reads the answer as JSON when possible. */
-export async function call(c: TestClient, method: string, path: string, json?: unknown, headers?: HeadersInit): Promise<Reply> {
-  const res = await c.fetch(path, { method, ...(json !== undefined ? { json } : {}), headers });
+/** Reads a response: status, headers, text, and the body as JSON when it parses (null otherwise). */
+async function readReply(res: Response): Promise<Reply> {
   const text = await res.text();
   let body: unknown = null;
   try {
@@ -24,17 +23,16 @@ export async function call(c: TestClient, method: string, path: string, json?: u
   return { status: res.status, body, text, headers: res.headers };
 }
 
+/** Sends a request (JSON body when given) and reads the answer as JSON when possible. */
+export async function call(c: TestClient, method: string, path: string, json?: unknown, headers?: HeadersInit): Promise<Reply> {
+  const res = await c.fetch(path, { method, ...(json !== undefined ? { json } : {}), headers });
+  return readReply(res);
+}
+
 /** Sends raw text as the request body with a content type. */
 export async function callRaw(c: TestClient, method: string, path: string, raw: string, contentType = "application/json"): Promise<Reply> {
   const res = await c.fetch(path, { method, body: raw, headers: { "content-type": contentType } });
-  const text = await res.text();
-  let body: unknown = null;
-  try {
-    body = JSON.parse(text);
-  } catch {
-    body = null;
-  }
-  return { status: res.status, body, text, headers: res.headers };
+  return readReply(res);
 }
 
 /** Uploads bytes as the multipart field `file`. */
@@ -49,14 +47,7 @@ export async function upload(
   const bytes = typeof content === "string" ? new TextEncoder().encode(content) : content;
   form.set("file", new Blob([new Uint8Array(bytes)], { type }), filename);
   const res = await c.fetch(path, { method: "POST", body: form });
-  const text = await res.text();
-  let body: unknown = null;
-  try {
-    body = JSON.parse(text);
-  } catch {
-    body = null;
-  }
-  return { status: res.status, body, text, headers: res.headers };
+  return readReply(res);
 }
 
 /** Creates a mission as `c` and imports `plan` into it; returns the mission id. */
