@@ -31,6 +31,9 @@ function ItemHeader({ title, onEdit, label }: { title: string; onEdit?: () => vo
   );
 }
 
+/** Column headings of a laser-pair table (overview and report), units in every label. */
+export const LASER_HEADERS = ["Laser pair", "Carrier (THz)", "Carrier power (mW)", "LO power (mW)", "Reach (GHz)", "Step (MHz)", "Drift (± MHz)", "PDH lock"] as const;
+
 const th = "whitespace-nowrap px-2 py-1 text-left text-xs font-medium text-ink-soft";
 const td = "whitespace-nowrap px-2 py-1.5 tabular-nums align-top";
 
@@ -54,14 +57,11 @@ export function LaserTable({ lasers, onEdit }: { lasers: Laser[]; onEdit: Editab
         <table className="w-full border-collapse text-sm" data-testid="lasers-table">
           <thead>
             <tr className="border-b border-ink/20">
-              <th className={th}>Laser pair</th>
-              <th className={th}>Carrier (THz)</th>
-              <th className={th}>Carrier power (mW)</th>
-              <th className={th}>LO power (mW)</th>
-              <th className={th}>Reach (GHz)</th>
-              <th className={th}>Step (MHz)</th>
-              <th className={th}>Drift (± MHz)</th>
-              <th className={th}>PDH lock</th>
+              {LASER_HEADERS.map((h) => (
+                <th key={h} className={th}>
+                  {h}
+                </th>
+              ))}
             </tr>
           </thead>
           <tbody>

@@ -2,7 +2,7 @@
 
 import Link from "next/link";
 import { OpticalFrequency } from "@/components/helpers";
-import { loTHz } from "./hardware";
+import { LASER_HEADERS, loTHz } from "./hardware";
 import { LINE_CENTRES, PROTECTED_BANDS } from "@/lib/reference";
 import { useCollectionQuery, useMissionQuery, useResultQuery, useRevisionsQuery, useSettingsQuery } from "@/queries/missions";
 import { buildChannelRows } from "./channel-rows";
@@ -118,14 +118,11 @@ export function MissionReport({ missionId }: { missionId: string }) {
         <table className="w-full border-collapse">
           <thead>
             <tr>
-              <th className={th}>Laser pair</th>
-              <th className={th}>Carrier (THz)</th>
-              <th className={th}>Carrier power (mW)</th>
-              <th className={th}>LO power (mW)</th>
-              <th className={th}>Reach (GHz)</th>
-              <th className={th}>Step (MHz)</th>
-              <th className={th}>Drift (± MHz)</th>
-              <th className={th}>PDH lock</th>
+              {LASER_HEADERS.map((h) => (
+                <th key={h} className={th}>
+                  {h}
+                </th>
+              ))}
             </tr>
           </thead>
           <tbody>
