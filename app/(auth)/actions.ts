@@ -49,7 +49,8 @@ export async function signUpAction(_prev: unknown, formData: FormData) {
   } catch (err) {
     const e = authError(err);
     if (e?.status === 429) return submission.reply({ formErrors: [TOO_MANY] });
-    if (e?.code === "INVALID_EMAIL") return submission.reply({ fieldErrors: { email: ["E-mail address is not valid."] } });
+    if (e?.code === "INVALID_EMAIL")
+      return submission.reply({ fieldErrors: { email: ["E-mail address is not valid."] } });
     if (e?.code === "PASSWORD_TOO_SHORT" || e?.code === "PASSWORD_TOO_LONG")
       return submission.reply({ fieldErrors: { password: [e.message] } });
     if (e) return submission.reply({ formErrors: [e.message] });
@@ -66,7 +67,10 @@ export async function signInAction(_prev: unknown, formData: FormData) {
   const { email, password, next } = submission.value;
   let userId: string;
   try {
-    const res = await auth.api.signInEmail({ body: { email, password, callbackURL: verifyCallback(next) }, headers: await headers() });
+    const res = await auth.api.signInEmail({
+      body: { email, password, callbackURL: verifyCallback(next) },
+      headers: await headers(),
+    });
     userId = res.user.id;
   } catch (err) {
     if (isNextControlFlow(err)) throw err;
@@ -74,10 +78,13 @@ export async function signInAction(_prev: unknown, formData: FormData) {
     if (e?.code === "EMAIL_NOT_VERIFIED")
       return submission.reply({
         formErrors: [
-          "Confirm your e-mail address first. We have sent a new confirmation link to " + email + "; open it and you are signed in.",
+          "Confirm your e-mail address first. We have sent a new confirmation link to " +
+            email +
+            "; open it and you are signed in.",
         ],
       });
-    if (e?.code === "INVALID_EMAIL_OR_PASSWORD") return submission.reply({ formErrors: ["E-mail address or password is wrong."] });
+    if (e?.code === "INVALID_EMAIL_OR_PASSWORD")
+      return submission.reply({ formErrors: ["E-mail address or password is wrong."] });
     if (e?.status === 429) return submission.reply({ formErrors: [TOO_MANY] });
     if (e) return submission.reply({ formErrors: [e.message] });
     throw err;
@@ -120,7 +127,9 @@ export async function resetPasswordAction(_prev: unknown, formData: FormData) {
     const e = authError(err);
     if (e?.code === "INVALID_TOKEN")
       return submission.reply({
-        formErrors: ["This reset link has expired or was already used. Ask for a new one on the “Forgot password” page."],
+        formErrors: [
+          "This reset link has expired or was already used. Ask for a new one on the “Forgot password” page.",
+        ],
       });
     if (e?.code === "PASSWORD_TOO_SHORT" || e?.code === "PASSWORD_TOO_LONG")
       return submission.reply({ fieldErrors: { password: [e.message] } });

@@ -229,7 +229,9 @@ export const findings = pgTable(
     chainKey: text("chain_key").notNull(),
     channelKey: text("channel_key"),
     message: text("message").notNull(),
-    data: jsonb("data").notNull().default(sql`'{}'::jsonb`),
+    data: jsonb("data")
+      .notNull()
+      .default(sql`'{}'::jsonb`),
   },
   (t) => [
     index("findings_revision_idx").on(t.revisionId, t.position),

@@ -26,7 +26,13 @@ export async function seedDemoTeam(): Promise<{ teamId: string; userIds: Record<
   if (!team) {
     [team] = await db
       .insert(organization)
-      .values({ id: newId(), name: DEMO_TEAM.name, slug: DEMO_TEAM.slug, createdAt: now, metadata: JSON.stringify({ demo: true }) })
+      .values({
+        id: newId(),
+        name: DEMO_TEAM.name,
+        slug: DEMO_TEAM.slug,
+        createdAt: now,
+        metadata: JSON.stringify({ demo: true }),
+      })
       .returning();
   }
   const teamId = team!.id;
@@ -34,13 +40,22 @@ export async function seedDemoTeam(): Promise<{ teamId: string; userIds: Record<
   for (const p of DEMO_PEOPLE) {
     let u = (await db.select().from(user).where(eq(user.email, p.email)).limit(1))[0];
     if (!u) {
-      [u] = await db.insert(user).values({ id: newId(), name: p.name, email: p.email, emailVerified: true }).returning();
+      [u] = await db
+        .insert(user)
+        .values({ id: newId(), name: p.name, email: p.email, emailVerified: true })
+        .returning();
     } else if (!u.emailVerified) {
       await db.update(user).set({ emailVerified: true }).where(eq(user.id, u.id));
     }
     const userId = u!.id;
     userIds[p.role] = userId;
-    const acct = (await db.select().from(account).where(and(eq(account.userId, userId), eq(account.providerId, "credential"))).limit(1))[0];
+    const acct = (
+      await db
+        .select()
+        .from(account)
+        .where(and(eq(account.userId, userId), eq(account.providerId, "credential")))
+        .limit(1)
+    )[0];
     if (!acct) {
       await db.insert(account).values({
         id: newId(),
@@ -51,8 +66,15 @@ export async function seedDemoTeam(): Promise<{ teamId: string; userIds: Record<
         updatedAt: now,
       });
     }
-    const m = (await db.select().from(member).where(and(eq(member.userId, userId), eq(member.organizationId, teamId))).limit(1))[0];
-    if (!m) await db.insert(member).values({ id: newId(), organizationId: teamId, userId, role: p.role, createdAt: now });
+    const m = (
+      await db
+        .select()
+        .from(member)
+        .where(and(eq(member.userId, userId), eq(member.organizationId, teamId)))
+        .limit(1)
+    )[0];
+    if (!m)
+      await db.insert(member).values({ id: newId(), organizationId: teamId, userId, role: p.role, createdAt: now });
     else if (m.role !== p.role) await db.update(member).set({ role: p.role }).where(eq(member.id, m.id));
   }
   return { teamId, userIds };

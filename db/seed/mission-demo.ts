@@ -29,7 +29,8 @@ export async function seedDemoMission(
   if (!author) throw new Error(`seedDemoMission: no user ${authorUserId}`);
   const actor: Actor = { userId: author.id, email: author.email, name: author.name, teamId, role: "engineer" };
   const parsed = parsePlan(demoPlan());
-  if (!parsed.ok) throw new Error(`demo plan is invalid: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+  if (!parsed.ok)
+    throw new Error(`demo plan is invalid: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
   return db.transaction(async (tx) => {
     const mission = await createMissionIn(tx, actor, DEMO_MISSION_NAME, DEMO_MISSION_DESCRIPTION);
     await replaceDraft(tx, mission.id, parsed.plan);

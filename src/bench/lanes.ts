@@ -26,7 +26,7 @@ async function staticLab(): Promise<{ base: string; server: Server }> {
   const out = await build({
     stdin: {
       contents: `import { createRoot } from "react-dom/client";
-import { LabLaneView } from "./app/lab/lane-view/_components/LabLaneView";
+import { LabLaneView } from "./app/lab/lane-view/_components/lab-lane-view";
 const name = new URLSearchParams(location.search).get("plan") ?? "demo64";
 createRoot(document.getElementById("root")!).render(<LabLaneView name={name} />);`,
       resolveDir: process.cwd(),
@@ -73,7 +73,16 @@ async function main() {
   const context = await chromium.launchPersistentContext(userDir, {
     executablePath: "/usr/bin/chromium",
     headless: true,
-    args: ["--headless", "--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--headless",
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
     viewport: { width: 1400, height: 1000 },
   });
   try {
@@ -100,7 +109,9 @@ async function main() {
       // Sweep ±40 px about the start (several GHz at the opening zoom), crossing feasible and blocked offsets.
       const dx = 40 * Math.sin((2 * Math.PI * i) / 60);
       await page.mouse.move(x0 + dx, y0);
-      await page.evaluate(() => new Promise<void>((r) => requestAnimationFrame(() => requestAnimationFrame(() => r()))));
+      await page.evaluate(
+        () => new Promise<void>((r) => requestAnimationFrame(() => requestAnimationFrame(() => r()))),
+      );
     }
     await page.mouse.up();
     const times = (await page.evaluate(() => window.__laneFrames ?? [])) as FrameTime[];
@@ -108,9 +119,15 @@ async function main() {
     const work = times.map((t) => t.workMs).sort((a, b) => a - b);
     const frame = times.map((t) => t.frameMs).sort((a, b) => a - b);
     const status = await page.locator(`[data-testid="lo-status-${chain}"]`).textContent();
-    console.log(`lane view, 64-channel demo plan, chain ${chain}, ${stat ? "static production bundle" : base}: ${times.length} re-check frames measured of ${frames} moves`);
-    console.log(`  re-check + render (work): median ${quantile(work, 0.5).toFixed(2)} ms, p95 ${quantile(work, 0.95).toFixed(2)} ms, max ${work[work.length - 1]!.toFixed(2)} ms (target ≤ 16 ms)`);
-    console.log(`  to next animation frame:  median ${quantile(frame, 0.5).toFixed(2)} ms, p95 ${quantile(frame, 0.95).toFixed(2)} ms`);
+    console.log(
+      `lane view, 64-channel demo plan, chain ${chain}, ${stat ? "static production bundle" : base}: ${times.length} re-check frames measured of ${frames} moves`,
+    );
+    console.log(
+      `  re-check + render (work): median ${quantile(work, 0.5).toFixed(2)} ms, p95 ${quantile(work, 0.95).toFixed(2)} ms, max ${work[work.length - 1]!.toFixed(2)} ms (target ≤ 16 ms)`,
+    );
+    console.log(
+      `  to next animation frame:  median ${quantile(frame, 0.5).toFixed(2)} ms, p95 ${quantile(frame, 0.95).toFixed(2)} ms`,
+    );
     console.log(`  LO status after the drag: ${status?.trim()}`);
   } finally {
     stat?.server.close();

@@ -40,7 +40,8 @@ function median(xs: number[]): number {
 
 function mustParse(input: unknown, what: string): Plan {
   const r = parsePlan(input);
-  if (!r.ok) throw new Error(`${what} is not a valid plan: ${r.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+  if (!r.ok)
+    throw new Error(`${what} is not a valid plan: ${r.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
   return r.plan;
 }
 
@@ -74,7 +75,9 @@ function report(label: string, fn: () => unknown, runs: number, warm: number): v
     for (let i = 0; i < 20; i++) fn();
     best = Math.min(best, (performance.now() - a) / 20);
   }
-  const load = loadavg().map((x) => x.toFixed(2)).join(" ");
+  const load = loadavg()
+    .map((x) => x.toFixed(2))
+    .join(" ");
   console.log(label);
   console.log(
     `  median ${t.wall.toFixed(3)} ms wall, ${t.cpu.toFixed(3)} ms CPU over ${runs} runs; best batch of 20: ${best.toFixed(3)} ms per call; ` +
@@ -99,13 +102,26 @@ function fullCheckSection(): void {
     return;
   }
   const plan = mustParse(JSON.parse(readFileSync(file, "utf8")), file);
-  report(`full checkPlan of ${file.slice(root.length)} (${plan.chains.length} chains, ${plan.channels.length} channels):`, () => checkPlan(plan), 400, 100);
+  report(
+    `full checkPlan of ${file.slice(root.length)} (${plan.chains.length} chains, ${plan.channels.length} channels):`,
+    () => checkPlan(plan),
+    400,
+    100,
+  );
 }
 
 /** Four renamed copies of worked example 2 (sampled IF, four channels each): 4 chains, 16 channels. */
 function fourChainPlan(): unknown {
   const ex2 = JSON.parse(readFileSync(`${root}tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json`, "utf8"));
-  const out = { ...ex2, name: "Demo data: four copies of worked example 2", lasers: [], resonators: [], detectors: [], chains: [], channels: [] };
+  const out = {
+    ...ex2,
+    name: "Demo data: four copies of worked example 2",
+    lasers: [],
+    resonators: [],
+    detectors: [],
+    chains: [],
+    channels: [],
+  };
   for (let k = 1; k <= 4; k++) {
     const tag = (id: string) => `${id}-${k}`;
     out.lasers.push(...ex2.lasers.map((x: { id: string }) => ({ ...x, id: tag(x.id) })));
@@ -120,7 +136,9 @@ function fourChainPlan(): unknown {
         detector: tag(x.detector),
       })),
     );
-    out.channels.push(...ex2.channels.map((x: { id: string; chain: string }) => ({ ...x, id: tag(x.id), chain: tag(x.chain) })));
+    out.channels.push(
+      ...ex2.channels.map((x: { id: string; chain: string }) => ({ ...x, id: tag(x.id), chain: tag(x.chain) })),
+    );
   }
   return out;
 }
@@ -178,21 +196,31 @@ function mapSection(): void {
       const union = piece.mask | other.mask;
       if ((g & inter) !== inter || (g & ~union) !== 0) {
         onEdgeOutside++;
-        if (examples.length < 5) examples.push(`L=${L.toFixed(6)} grid ${codesOfMask(g)} vs ${codesOfMask(piece.mask)} | ${codesOfMask(other.mask)}`);
+        if (examples.length < 5)
+          examples.push(
+            `L=${L.toFixed(6)} grid ${codesOfMask(g)} vs ${codesOfMask(piece.mask)} | ${codesOfMask(other.mask)}`,
+          );
       }
     } else if (g === piece.mask) agreeInterior++;
     else {
       disagreeInterior++;
-      if (examples.length < 5) examples.push(`L=${L.toFixed(6)} grid ${codesOfMask(g)} vs map ${codesOfMask(piece.mask)}`);
+      if (examples.length < 5)
+        examples.push(`L=${L.toFixed(6)} grid ${codesOfMask(g)} vs map ${codesOfMask(piece.mask)}`);
     }
   }
 
   const feasibleGHz = map.feasibleGHz.reduce((s, iv) => s + iv[1] - iv[0], 0);
-  console.log(`generated chain: ${model.channels.length} channels, spurMaxOrder ${plan.settings.spurMaxOrder}, reach [${r0}, ${r1}] GHz, fs ${model.halfFs === null ? "none" : model.halfFs * 2} GHz`);
+  console.log(
+    `generated chain: ${model.channels.length} channels, spurMaxOrder ${plan.settings.spurMaxOrder}, reach [${r0}, ${r1}] GHz, fs ${model.halfFs === null ? "none" : model.halfFs * 2} GHz`,
+  );
   const place = placeLo(plan, "G", map.feasibleGHz);
-  console.log(`  exact map: median ${exactMs.toFixed(2)} ms wall, ${exact.cpu.toFixed(2)} ms CPU over 15 runs; ${map.feasibleGHz.length} feasible intervals (${feasibleGHz.toFixed(3)} GHz), ${map.excludedGHz.length} excluded intervals; place ${place.placeGHz ?? place.placeReason} GHz`);
+  console.log(
+    `  exact map: median ${exactMs.toFixed(2)} ms wall, ${exact.cpu.toFixed(2)} ms CPU over 15 runs; ${map.feasibleGHz.length} feasible intervals (${feasibleGHz.toFixed(3)} GHz), ${map.excludedGHz.length} excluded intervals; place ${place.placeGHz ?? place.placeReason} GHz`,
+  );
   console.log(`  feasible: ${map.feasibleGHz.map((iv) => `[${iv[0].toFixed(4)}, ${iv[1].toFixed(4)}]`).join(" ")}`);
-  console.log(`  1 MHz grid: ${n + 1} points in ${(gridMs / 1000).toFixed(2)} s wall, ${(gridCpuMs / 1000).toFixed(2)} s CPU (${((gridMs / (n + 1)) * 1000).toFixed(2)} µs per point)`);
+  console.log(
+    `  1 MHz grid: ${n + 1} points in ${(gridMs / 1000).toFixed(2)} s wall, ${(gridCpuMs / 1000).toFixed(2)} s CPU (${((gridMs / (n + 1)) * 1000).toFixed(2)} µs per point)`,
+  );
   console.log(
     `  ratio grid/exact: ${(gridMs / exactMs).toFixed(0)}× wall, ${(gridCpuMs / exact.cpu).toFixed(0)}× CPU (target ≥ 100×) ${gridMs / exactMs >= 100 ? "PASS" : "MISS"}`,
   );

@@ -50,11 +50,19 @@ describe("heterolane command line (input errors)", { timeout: 60_000 }, () => {
   it("a relative file name is read from the folder the command was typed in (npm's INIT_CWD)", () => {
     writeFileSync(join(dir, "here.json"), "[");
     const r = cli(["check", "here.json"], undefined, { INIT_CWD: dir });
-    expect(r).toEqual({ code: 2, stdout: "", stderr: "(document): not valid JSON: unexpected end of input at line 1, column 2\n" });
+    expect(r).toEqual({
+      code: 2,
+      stdout: "",
+      stderr: "(document): not valid JSON: unexpected end of input at line 1, column 2\n",
+    });
   });
   it("malformed JSON on stdin: exit 2 with the position", () => {
     const r = cli(["check", "-"], '{\n  "format": "heterolane.plan/1",\n  "name": }');
-    expect(r).toEqual({ code: 2, stdout: "", stderr: '(document): not valid JSON: unexpected "}" at line 3, column 11\n' });
+    expect(r).toEqual({
+      code: 2,
+      stdout: "",
+      stderr: '(document): not valid JSON: unexpected "}" at line 3, column 11\n',
+    });
   });
   it("an invalid document in a file: exit 2, one path: message line per error, in document order", () => {
     const doc = validPlanInput() as Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any

@@ -42,9 +42,7 @@ function describeReadError(e: unknown): string {
 
 async function main(argv: string[]): Promise<CheckOutcome> {
   if (argv.length === 0 || argv.includes("--help") || argv.includes("-h") || argv[0] === "help") {
-    return argv.length === 0
-      ? { exitCode: 2, stdout: "", stderr: USAGE }
-      : { exitCode: 0, stdout: USAGE, stderr: "" };
+    return argv.length === 0 ? { exitCode: 2, stdout: "", stderr: USAGE } : { exitCode: 0, stdout: USAGE, stderr: "" };
   }
   const [command, ...rest] = argv;
   if (command !== "check") {
@@ -58,9 +56,16 @@ async function main(argv: string[]): Promise<CheckOutcome> {
   try {
     // `npm run` starts the script in the project folder; INIT_CWD is where
     // the person typed the command, so relative names are read from there.
-    text = source === "-" ? await readStdin() : await readFile(resolve(process.env.INIT_CWD ?? process.cwd(), source), "utf8");
+    text =
+      source === "-"
+        ? await readStdin()
+        : await readFile(resolve(process.env.INIT_CWD ?? process.cwd(), source), "utf8");
   } catch (e) {
-    return { exitCode: 2, stdout: "", stderr: `(document): cannot read ${JSON.stringify(source)}: ${describeReadError(e)}\n` };
+    return {
+      exitCode: 2,
+      stdout: "",
+      stderr: `(document): cannot read ${JSON.stringify(source)}: ${describeReadError(e)}\n`,
+    };
   }
   // The engine is loaded only once there is a valid document to check.
   return runCheck(text, async (plan) => (await import("@/lib/plan")).checkPlan(plan));

@@ -46,6 +46,11 @@ describe("runCheck", () => {
   });
   it("issueLines", () => {
     expect(issueLines([])).toBe("");
-    expect(issueLines([{ path: "", message: "a" }, { path: "x[1]", message: "b" }])).toBe("(document): a\nx[1]: b\n");
+    expect(
+      issueLines([
+        { path: "", message: "a" },
+        { path: "x[1]", message: "b" },
+      ]),
+    ).toBe("(document): a\nx[1]: b\n");
   });
 });

@@ -28,7 +28,13 @@ const server = new SMTPServer({
         const to = session.envelope.rcptTo.map((r) => r.address.toLowerCase());
         await pool.query(
           `insert into captured_mail (recipients, sender, subject, text, html) values ($1, $2, $3, $4, $5)`,
-          [to, session.envelope.mailFrom ? session.envelope.mailFrom.address : "", mail.subject ?? "", mail.text ?? "", typeof mail.html === "string" ? mail.html : ""],
+          [
+            to,
+            session.envelope.mailFrom ? session.envelope.mailFrom.address : "",
+            mail.subject ?? "",
+            mail.text ?? "",
+            typeof mail.html === "string" ? mail.html : "",
+          ],
         );
         callback();
       })

@@ -76,6 +76,7 @@ suite() { # suite PROJECT: a vitest project, counted test by test
 step migrate node_modules/.bin/tsx db/migrate.ts
 step typecheck node_modules/.bin/tsc --noEmit
 step lint node_modules/.bin/eslint --max-warnings=0 .
+step format node_modules/.bin/prettier --check .
 suite unit
 step build ensure_build
 

@@ -2,7 +2,10 @@ import { afterEach, describe, expect, it, vi } from "vitest";
 import { ApiError, apiFetch } from "./api";
 
 function answer(status: number, body: unknown) {
-  vi.stubGlobal("fetch", vi.fn(async () => new Response(body === undefined ? null : JSON.stringify(body), { status })));
+  vi.stubGlobal(
+    "fetch",
+    vi.fn(async () => new Response(body === undefined ? null : JSON.stringify(body), { status })),
+  );
 }
 
 afterEach(() => vi.unstubAllGlobals());
@@ -14,7 +17,9 @@ describe("apiFetch", () => {
   });
 
   it("carries code, message, issues and the current row of a 409", async () => {
-    answer(409, { error: { code: "stale-version", message: "Changed by someone else.", current: { id: "c", version: 4 } } });
+    answer(409, {
+      error: { code: "stale-version", message: "Changed by someone else.", current: { id: "c", version: 4 } },
+    });
     const err = await apiFetch("/x").catch((e: unknown) => e);
     expect(err).toBeInstanceOf(ApiError);
     const e = err as ApiError;
@@ -42,14 +47,20 @@ describe("apiFetch", () => {
   });
 
   it("gives a plain message when the body is not the agreed error shape", async () => {
-    vi.stubGlobal("fetch", vi.fn(async () => new Response("<html>", { status: 403 })));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => new Response("<html>", { status: 403 })),
+    );
     const e = (await apiFetch("/x").catch((x: unknown) => x)) as ApiError;
     expect(e.status).toBe(403);
     expect(e.message).toMatch(/role/);
   });
 
   it("turns a failed connection into a status-0 error instead of throwing a TypeError", async () => {
-    vi.stubGlobal("fetch", vi.fn(async () => Promise.reject(new TypeError("fetch failed"))));
+    vi.stubGlobal(
+      "fetch",
+      vi.fn(async () => Promise.reject(new TypeError("fetch failed"))),
+    );
     const e = (await apiFetch("/x").catch((x: unknown) => x)) as ApiError;
     expect([e.status, e.code]).toEqual([0, "network"]);
   });

@@ -127,7 +127,11 @@ export interface TuningPreview {
 }
 
 export interface ChannelUploadPreview {
-  rows: { row: number; channel?: Partial<Channel> & { chain?: string }; errors: { column: string; message: string }[] }[];
+  rows: {
+    row: number;
+    channel?: Partial<Channel> & { chain?: string };
+    errors: { column: string; message: string }[];
+  }[];
   valid: boolean;
 }
 

@@ -8,7 +8,12 @@ import { ApiError } from "./api";
  * `onProgress` receives a share 0..1 while sending and null once the server
  * is working on the file.
  */
-export function uploadFile<T>(url: string, file: File, onProgress: (share: number | null) => void, signal?: AbortSignal): Promise<T> {
+export function uploadFile<T>(
+  url: string,
+  file: File,
+  onProgress: (share: number | null) => void,
+  signal?: AbortSignal,
+): Promise<T> {
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);
@@ -27,9 +32,21 @@ export function uploadFile<T>(url: string, file: File, onProgress: (share: numbe
         body = null;
       }
       if (xhr.status >= 200 && xhr.status < 300) return resolve(body as T);
-      const err = (body as { error?: { code?: string; message?: string; issues?: { path: string; message: string }[]; current?: unknown } } | null)?.error;
+      const err = (
+        body as {
+          error?: { code?: string; message?: string; issues?: { path: string; message: string }[]; current?: unknown };
+        } | null
+      )?.error;
       const fallback = xhr.status === 413 ? "The file is too large." : `The server answered ${xhr.status}.`;
-      reject(new ApiError(xhr.status, err?.code ?? `http-${xhr.status}`, err?.message ?? fallback, err?.issues ?? [], err?.current));
+      reject(
+        new ApiError(
+          xhr.status,
+          err?.code ?? `http-${xhr.status}`,
+          err?.message ?? fallback,
+          err?.issues ?? [],
+          err?.current,
+        ),
+      );
     };
     const form = new FormData();
     form.append("file", file);

@@ -13,7 +13,9 @@ describe("SignUpSchema", () => {
     expect(r.success).toBe(false);
     const paths = r.error!.issues.map((i) => i.path.join(".")).sort();
     expect(paths).toEqual(["email", "name", "password"]);
-    expect(r.error!.issues.find((i) => i.path[0] === "password")!.message).toBe("Password must be at least 10 characters.");
+    expect(r.error!.issues.find((i) => i.path[0] === "password")!.message).toBe(
+      "Password must be at least 10 characters.",
+    );
   });
 
   it("password length boundary: 9 refused, 10 accepted, 128 accepted, 129 refused", () => {
@@ -32,8 +34,10 @@ describe("ResetPasswordSchema", () => {
 
 describe("InviteSchema", () => {
   it("knows exactly the four roles", () => {
-    for (const role of ["owner", "lead", "engineer", "viewer"]) expect(InviteSchema.safeParse({ email: "a@b.org", role }).success).toBe(true);
-    for (const role of ["admin", "member", "", "Owner"]) expect(InviteSchema.safeParse({ email: "a@b.org", role }).success).toBe(false);
+    for (const role of ["owner", "lead", "engineer", "viewer"])
+      expect(InviteSchema.safeParse({ email: "a@b.org", role }).success).toBe(true);
+    for (const role of ["admin", "member", "", "Owner"])
+      expect(InviteSchema.safeParse({ email: "a@b.org", role }).success).toBe(false);
   });
 });
 

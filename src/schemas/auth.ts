@@ -21,7 +21,11 @@ const newPassword = z
   .max(PASSWORD_MAX, `Password must be at most ${PASSWORD_MAX} characters.`);
 
 export const SignUpSchema = z.object({
-  name: z.string({ error: "Enter your name." }).trim().min(1, "Enter your name.").max(100, "Name is too long (100 characters at most)."),
+  name: z
+    .string({ error: "Enter your name." })
+    .trim()
+    .min(1, "Enter your name.")
+    .max(100, "Name is too long (100 characters at most)."),
   email,
   password: newPassword,
 });

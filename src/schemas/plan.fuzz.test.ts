@@ -56,10 +56,16 @@ describe("parsePlan on arbitrary input", () => {
   });
   it("never throws on arbitrary text", () => {
     fc.assert(
-      fc.property(fc.oneof(fc.string(), fc.json().map((j) => j.slice(0, Math.max(0, j.length - 1)))), (text) => {
-        const r = parsePlanText(text);
-        wellFormed(r);
-      }),
+      fc.property(
+        fc.oneof(
+          fc.string(),
+          fc.json().map((j) => j.slice(0, Math.max(0, j.length - 1))),
+        ),
+        (text) => {
+          const r = parsePlanText(text);
+          wellFormed(r);
+        },
+      ),
       { numRuns: 500 },
     );
   });
@@ -114,19 +120,23 @@ describe("parsePlan on mutations of valid plans", () => {
   });
   it("a duplicated id is always reported", () => {
     fc.assert(
-      fc.property(validPlanArb, fc.constantFrom("lasers", "resonators", "detectors", "chains", "channels"), (doc, list) => {
-        const copy = structuredClone(doc) as unknown as Record<string, { id: string }[]>;
-        const entries = copy[list]!;
-        fc.pre(entries.length > 0);
-        entries.push(structuredClone(entries[0]!));
-        const r = parsePlan(copy);
-        expect(r.ok).toBe(false);
-        if (!r.ok)
-          expect(r.issues).toContainEqual({
-            path: `${list}[${entries.length - 1}].id`,
-            message: `duplicates the id "${entries[0]!.id}" of ${list}[0]`,
-          });
-      }),
+      fc.property(
+        validPlanArb,
+        fc.constantFrom("lasers", "resonators", "detectors", "chains", "channels"),
+        (doc, list) => {
+          const copy = structuredClone(doc) as unknown as Record<string, { id: string }[]>;
+          const entries = copy[list]!;
+          fc.pre(entries.length > 0);
+          entries.push(structuredClone(entries[0]!));
+          const r = parsePlan(copy);
+          expect(r.ok).toBe(false);
+          if (!r.ok)
+            expect(r.issues).toContainEqual({
+              path: `${list}[${entries.length - 1}].id`,
+              message: `duplicates the id "${entries[0]!.id}" of ${list}[0]`,
+            });
+        },
+      ),
       { numRuns: 100 },
     );
   });

@@ -124,18 +124,57 @@ describe("strict objects: unknown keys are refused at every level", () => {
 
 describe("every key except the optional ones is required", () => {
   const required = [
-    "settings", "lasers", "resonators", "detectors", "chains", "channels",
-    "settings.guardMHz", "settings.imageRejectionDB", "settings.spurMaxOrder", "settings.replicaLimitDB",
-    "lasers.0.id", "lasers.0.carrierTHz", "lasers.0.carrierPowerMW", "lasers.0.loPowerMW", "lasers.0.reach",
-    "lasers.0.stepMHz", "lasers.0.driftMHz", "lasers.0.lock", "lasers.0.lock.modulationMHz",
-    "lasers.0.lock.modulationIndex", "lasers.0.lock.orders", "lasers.0.reach.0.minGHz", "lasers.0.reach.0.maxGHz",
-    "resonators.0.id", "resonators.0.fsrGHz", "resonators.0.loadedQ",
-    "detectors.0.id", "detectors.0.minGHz", "detectors.0.maxGHz", "detectors.0.maxInputMW",
-    "chains.0.id", "chains.0.laser", "chains.0.resonator", "chains.0.detector", "chains.0.mode",
-    "chains.0.sideband", "chains.0.loOffsetGHz", "chains.0.rfInput", "chains.0.rfInput.minGHz",
-    "chains.0.rfInput.maxGHz", "chains.0.tapFraction", "chains.0.pathLossDB",
-    "channels.0.id", "channels.0.name", "channels.0.chain", "channels.0.centerGHz", "channels.0.bandwidthMHz",
-    "channels.0.integrationMs", "channels.0.antennaK", "channels.0.receiverK", "channels.0.gainStability",
+    "settings",
+    "lasers",
+    "resonators",
+    "detectors",
+    "chains",
+    "channels",
+    "settings.guardMHz",
+    "settings.imageRejectionDB",
+    "settings.spurMaxOrder",
+    "settings.replicaLimitDB",
+    "lasers.0.id",
+    "lasers.0.carrierTHz",
+    "lasers.0.carrierPowerMW",
+    "lasers.0.loPowerMW",
+    "lasers.0.reach",
+    "lasers.0.stepMHz",
+    "lasers.0.driftMHz",
+    "lasers.0.lock",
+    "lasers.0.lock.modulationMHz",
+    "lasers.0.lock.modulationIndex",
+    "lasers.0.lock.orders",
+    "lasers.0.reach.0.minGHz",
+    "lasers.0.reach.0.maxGHz",
+    "resonators.0.id",
+    "resonators.0.fsrGHz",
+    "resonators.0.loadedQ",
+    "detectors.0.id",
+    "detectors.0.minGHz",
+    "detectors.0.maxGHz",
+    "detectors.0.maxInputMW",
+    "chains.0.id",
+    "chains.0.laser",
+    "chains.0.resonator",
+    "chains.0.detector",
+    "chains.0.mode",
+    "chains.0.sideband",
+    "chains.0.loOffsetGHz",
+    "chains.0.rfInput",
+    "chains.0.rfInput.minGHz",
+    "chains.0.rfInput.maxGHz",
+    "chains.0.tapFraction",
+    "chains.0.pathLossDB",
+    "channels.0.id",
+    "channels.0.name",
+    "channels.0.chain",
+    "channels.0.centerGHz",
+    "channels.0.bandwidthMHz",
+    "channels.0.integrationMs",
+    "channels.0.antennaK",
+    "channels.0.receiverK",
+    "channels.0.gainStability",
   ];
   it.each(required)("%s", (p) => {
     const found = issues((d) => deleteAt(d, p));
@@ -156,10 +195,19 @@ describe("every key except the optional ones is required", () => {
 
 describe("numbers", () => {
   const strictlyPositive = [
-    "lasers.0.carrierTHz", "lasers.0.carrierPowerMW", "lasers.0.loPowerMW", "lasers.0.lock.modulationMHz",
-    "resonators.0.fsrGHz", "resonators.0.loadedQ", "detectors.0.maxInputMW", "detectors.1.sampleRateGHz",
-    "chains.0.rfInput.minGHz", "channels.0.centerGHz", "channels.0.bandwidthMHz",
-    "channels.0.integrationMs", "channels.1.dsbOffsetGHz",
+    "lasers.0.carrierTHz",
+    "lasers.0.carrierPowerMW",
+    "lasers.0.loPowerMW",
+    "lasers.0.lock.modulationMHz",
+    "resonators.0.fsrGHz",
+    "resonators.0.loadedQ",
+    "detectors.0.maxInputMW",
+    "detectors.1.sampleRateGHz",
+    "chains.0.rfInput.minGHz",
+    "channels.0.centerGHz",
+    "channels.0.bandwidthMHz",
+    "channels.0.integrationMs",
+    "channels.1.dsbOffsetGHz",
   ];
   it.each(strictlyPositive)("%s must be greater than 0", (p) => {
     expectOnly((d) => setAt(d, p, 0), jsonPath(p), "must be greater than 0");
@@ -177,8 +225,15 @@ describe("numbers", () => {
     ]);
   });
   const nonNegative = [
-    "settings.guardMHz", "lasers.0.stepMHz", "lasers.0.driftMHz", "detectors.0.minGHz", "chains.0.pathLossDB",
-    "chains.0.carrierRejectionDB", "channels.0.antennaK", "channels.0.receiverK", "channels.0.gainStability",
+    "settings.guardMHz",
+    "lasers.0.stepMHz",
+    "lasers.0.driftMHz",
+    "detectors.0.minGHz",
+    "chains.0.pathLossDB",
+    "chains.0.carrierRejectionDB",
+    "channels.0.antennaK",
+    "channels.0.receiverK",
+    "channels.0.gainStability",
     "channels.0.requiredNedtK",
   ];
   it.each(nonNegative)("%s must be at least 0", (p) => {
@@ -198,7 +253,11 @@ describe("numbers", () => {
   it("NaN and ±Infinity are refused wherever a number is expected", () => {
     expectOnly((d) => (d.channels[0].centerGHz = NaN), "channels[0].centerGHz", "must be a finite number");
     expectOnly((d) => (d.chains[0].loOffsetGHz = -Infinity), "chains[0].loOffsetGHz", "must be a finite number");
-    expectOnly((d) => (d.detectors[0].sampleRateGHz = Infinity), "detectors[0].sampleRateGHz", "must be a finite number");
+    expectOnly(
+      (d) => (d.detectors[0].sampleRateGHz = Infinity),
+      "detectors[0].sampleRateGHz",
+      "must be a finite number",
+    );
   });
   it("an overflowing literal (1e999 → Infinity) in JSON text is refused", () => {
     const text = JSON.stringify(validPlanInput()).replace('"loOffsetGHz":184.81', '"loOffsetGHz":1e999');
@@ -207,8 +266,16 @@ describe("numbers", () => {
     expect(r.ok ? [] : r.issues).toEqual([{ path: "chains[0].loOffsetGHz", message: "must be a finite number" }]);
   });
   it("numbers written as strings are refused, not coerced", () => {
-    expectOnly((d) => (d.channels[0].bandwidthMHz = "10"), "channels[0].bandwidthMHz", "must be a finite number, not a string");
-    expectOnly((d) => (d.channels[0].dsbOffsetGHz = "NaN"), "channels[0].dsbOffsetGHz", "must be a finite number, not a string");
+    expectOnly(
+      (d) => (d.channels[0].bandwidthMHz = "10"),
+      "channels[0].bandwidthMHz",
+      "must be a finite number, not a string",
+    );
+    expectOnly(
+      (d) => (d.channels[0].dsbOffsetGHz = "NaN"),
+      "channels[0].dsbOffsetGHz",
+      "must be a finite number, not a string",
+    );
     expectOnly((d) => (d.settings.guardMHz = null), "settings.guardMHz", "must be a finite number, not null");
   });
   it("0 ≤ tapFraction < 1", () => {
@@ -220,7 +287,11 @@ describe("numbers", () => {
   it("0 < modulationIndex < 2.4", () => {
     expectValid((d) => (d.lasers[0].lock.modulationIndex = 2.39));
     expectValid((d) => (d.lasers[0].lock.modulationIndex = 1e-6));
-    expectOnly((d) => (d.lasers[0].lock.modulationIndex = 0), "lasers[0].lock.modulationIndex", "must be greater than 0");
+    expectOnly(
+      (d) => (d.lasers[0].lock.modulationIndex = 0),
+      "lasers[0].lock.modulationIndex",
+      "must be greater than 0",
+    );
     expectOnly((d) => (d.lasers[0].lock.modulationIndex = 2.4), "lasers[0].lock.modulationIndex", "must be below 2.4");
   });
   it.each(["chains.0.mode", "lasers.0.lock.orders"])("%s is an integer ≥ 1", (p) => {
@@ -232,7 +303,9 @@ describe("numbers", () => {
   });
   it("spurMaxOrder is an integer 2..9, integral values like 5.0 accepted", () => {
     for (const v of [2, 5.0, 9]) expectValid((d) => (d.settings.spurMaxOrder = v));
-    expect(parsePlanText(JSON.stringify(validPlanInput()).replace('"spurMaxOrder":5', '"spurMaxOrder":5.0')).ok).toBe(true);
+    expect(parsePlanText(JSON.stringify(validPlanInput()).replace('"spurMaxOrder":5', '"spurMaxOrder":5.0')).ok).toBe(
+      true,
+    );
     expectOnly((d) => (d.settings.spurMaxOrder = 1), "settings.spurMaxOrder", "must be at least 2");
     expectOnly((d) => (d.settings.spurMaxOrder = 10), "settings.spurMaxOrder", "must be at most 9");
     expectOnly((d) => (d.settings.spurMaxOrder = 4.5), "settings.spurMaxOrder", "must be an integer");
@@ -241,14 +314,30 @@ describe("numbers", () => {
 
 describe("every min is below its max", () => {
   it("reach intervals", () => {
-    expectOnly((d) => (d.lasers[1].reach[1] = { minGHz: -100, maxGHz: -100 }), "lasers[1].reach[1].minGHz", "must be below maxGHz (-100)");
-    expectOnly((d) => (d.lasers[0].reach[0] = { minGHz: 200, maxGHz: 150 }), "lasers[0].reach[0].minGHz", "must be below maxGHz (150)");
+    expectOnly(
+      (d) => (d.lasers[1].reach[1] = { minGHz: -100, maxGHz: -100 }),
+      "lasers[1].reach[1].minGHz",
+      "must be below maxGHz (-100)",
+    );
+    expectOnly(
+      (d) => (d.lasers[0].reach[0] = { minGHz: 200, maxGHz: 150 }),
+      "lasers[0].reach[0].minGHz",
+      "must be below maxGHz (150)",
+    );
     // Overlapping or touching intervals are allowed (the engine merges them).
     expectValid((d) => d.lasers[0].reach.push({ minGHz: 200, maxGHz: 210 }, { minGHz: 160, maxGHz: 170 }));
   });
   it("rfInput", () => {
-    expectOnly((d) => (d.chains[0].rfInput = { minGHz: 195, maxGHz: 175 }), "chains[0].rfInput.minGHz", "must be below maxGHz (175)");
-    expectOnly((d) => (d.chains[0].rfInput = { minGHz: 175, maxGHz: 175 }), "chains[0].rfInput.minGHz", "must be below maxGHz (175)");
+    expectOnly(
+      (d) => (d.chains[0].rfInput = { minGHz: 195, maxGHz: 175 }),
+      "chains[0].rfInput.minGHz",
+      "must be below maxGHz (175)",
+    );
+    expectOnly(
+      (d) => (d.chains[0].rfInput = { minGHz: 175, maxGHz: 175 }),
+      "chains[0].rfInput.minGHz",
+      "must be below maxGHz (175)",
+    );
   });
   it("detector band", () => {
     expectOnly((d) => (d.detectors[0].minGHz = 6), "detectors[0].minGHz", "must be below maxGHz (6)");
@@ -297,7 +386,10 @@ describe("ids", () => {
   });
   it.each(["lasers", "resonators", "detectors", "chains", "channels"])("%s ids must be unique", (list) => {
     const found = issues((d) => (d[list][1].id = d[list][0].id));
-    expect(found).toContainEqual({ path: `${list}[1].id`, message: `duplicates the id "${validPlanInput()[list as "lasers"][0]!.id}" of ${list}[0]` });
+    expect(found).toContainEqual({
+      path: `${list}[1].id`,
+      message: `duplicates the id "${validPlanInput()[list as "lasers"][0]!.id}" of ${list}[0]`,
+    });
   });
   it("the same id in different lists is fine", () => {
     expectValid((d) => {
@@ -316,13 +408,21 @@ describe("references resolve", () => {
     ["resonator", "R9"],
     ["detector", "D9"],
   ])("chains[].%s", (field, ref) => {
-    expectOnly((d) => (d.chains[1][field] = ref), `chains[1].${field}`, `refers to ${field} "${ref}", which does not exist`);
+    expectOnly(
+      (d) => (d.chains[1][field] = ref),
+      `chains[1].${field}`,
+      `refers to ${field} "${ref}", which does not exist`,
+    );
   });
   it("channels[].chain", () => {
     expectOnly((d) => (d.channels[2].chain = "Z"), "channels[2].chain", 'refers to chain "Z", which does not exist');
   });
   it("a laser serves one chain", () => {
-    expectOnly((d) => (d.chains[1].laser = "LP1"), "chains[1].laser", 'laser "LP1" already serves chain "A"; a laser serves one chain');
+    expectOnly(
+      (d) => (d.chains[1].laser = "LP1"),
+      "chains[1].laser",
+      'laser "LP1" already serves chain "A"; a laser serves one chain',
+    );
   });
   it("resonators and detectors may be shared between chains", () => {
     expectValid((d) => {

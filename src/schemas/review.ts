@@ -2,7 +2,10 @@ import { z } from "zod";
 
 /** Request bodies and queries of the review API and the notification settings form. */
 
-const revisionNumber = z.number({ error: "must be a revision number" }).int("must be a whole number").min(1, "must be 1 or more");
+const revisionNumber = z
+  .number({ error: "must be a revision number" })
+  .int("must be a whole number")
+  .min(1, "must be 1 or more");
 const note = z.string({ error: "must be text" }).trim().max(2000, "must be at most 2000 characters");
 
 export const submitReviewSchema = z.strictObject({
@@ -39,7 +42,11 @@ export const updateWaiverSchema = z.strictObject({
 });
 
 export const createCommentSchema = z.strictObject({
-  body: z.string({ error: "must be text" }).trim().min(1, "write something").max(5000, "must be at most 5000 characters"),
+  body: z
+    .string({ error: "must be text" })
+    .trim()
+    .min(1, "write something")
+    .max(5000, "must be at most 5000 characters"),
   /** Defaults to the newest revision. */
   revision: revisionNumber.optional(),
   channelKey: z.string().trim().min(1, "must not be empty").max(200).optional(),
@@ -47,7 +54,10 @@ export const createCommentSchema = z.strictObject({
 });
 
 const positiveInt = (label: string) =>
-  z.string({ error: `${label} is required` }).regex(/^[1-9]\d{0,8}$/, `${label} must be a revision number (1 or more)`).transform(Number);
+  z
+    .string({ error: `${label} is required` })
+    .regex(/^[1-9]\d{0,8}$/, `${label} must be a revision number (1 or more)`)
+    .transform(Number);
 
 export const compareQuerySchema = z.object({ from: positiveInt("from"), to: positiveInt("to") });
 
@@ -65,7 +75,8 @@ export const auditQuerySchema = z
     to: day.optional(),
   })
   .superRefine((v, ctx) => {
-    if (v.from && v.to && v.from > v.to) ctx.addIssue({ code: "custom", path: ["to"], message: "must not be before from" });
+    if (v.from && v.to && v.from > v.to)
+      ctx.addIssue({ code: "custom", path: ["to"], message: "must not be before from" });
   });
 export type AuditQuery = z.infer<typeof auditQuerySchema>;
 

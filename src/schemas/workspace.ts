@@ -87,11 +87,11 @@ export const DEFAULT_SETTINGS: SettingsFields = {
 export const lockSchema = z
   .object(
     {
-    modulationMHz: positive(),
-    modulationIndex: finite()
-      .gt(0, { error: "must be greater than 0" })
-      .lt(2.4, { error: "must be below 2.4 (the first zero of J0)" }),
-    orders: positiveInt(),
+      modulationMHz: positive(),
+      modulationIndex: finite()
+        .gt(0, { error: "must be greater than 0" })
+        .lt(2.4, { error: "must be below 2.4 (the first zero of J0)" }),
+      orders: positiveInt(),
     },
     { error: "is required" },
   )
@@ -103,9 +103,7 @@ export const laserSchema = z
     carrierTHz: positive(),
     carrierPowerMW: positive(),
     loPowerMW: positive(),
-    reach: z
-      .array(intervalGHzSchema)
-      .max(64, { error: "may hold at most 64 intervals" }),
+    reach: z.array(intervalGHzSchema).max(64, { error: "may hold at most 64 intervals" }),
     stepMHz: nonNegative(),
     driftMHz: nonNegative(),
     lock: lockSchema,
@@ -152,9 +150,7 @@ const chainFields = z
     sideband: sidebandSchema,
     loOffsetGHz: finite(),
     rfInput: intervalGHzSchema,
-    tapFraction: finite()
-      .gte(0, { error: "must be 0 or more" })
-      .lt(1, { error: "must be below 1" }),
+    tapFraction: finite().gte(0, { error: "must be 0 or more" }).lt(1, { error: "must be below 1" }),
     pathLossDB: nonNegative(),
     carrierRejectionDB: nonNegative(),
     sharedIf: z.boolean({ error: "must be true or false" }),
@@ -232,7 +228,10 @@ export const entityUpdateSchemas = {
 
 // ---------------------------------------------------------------- queries of list and upload routes
 
-const flag = z.enum(["0", "1"], { error: "must be 0 or 1" }).default("0").transform((v) => v === "1");
+const flag = z
+  .enum(["0", "1"], { error: "must be 0 or 1" })
+  .default("0")
+  .transform((v) => v === "1");
 const numberParam = (what: z.ZodNumber) =>
   z
     .string({ error: "is required" })

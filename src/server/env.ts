@@ -6,7 +6,11 @@ import { z } from "zod";
  * value is an error naming the variable; there are no silent fallbacks for
  * secrets or URLs (README: Environment).
  */
-const nonEmpty = (name: string) => z.string({ error: `${name} is not set` }).trim().min(1, `${name} is empty`);
+const nonEmpty = (name: string) =>
+  z
+    .string({ error: `${name} is not set` })
+    .trim()
+    .min(1, `${name} is empty`);
 
 const EnvSchema = z.object({
   DATABASE_URL: nonEmpty("DATABASE_URL"),

@@ -43,7 +43,10 @@ export function errorResponse(err: unknown): Response {
     );
   }
   console.error("[api] unexpected error:", err);
-  return Response.json({ error: { code: "internal", message: "Something went wrong on the server." } }, { status: 500 });
+  return Response.json(
+    { error: { code: "internal", message: "Something went wrong on the server." } },
+    { status: 500 },
+  );
 }
 
 /** Reads a JSON body with a size limit; answers 413 above it and 400 for malformed JSON. */

@@ -44,7 +44,11 @@ describe("helpers beside the workspace fields", () => {
       await viewer.page.getByTestId("place-A").waitFor();
       expect(await viewer.page.getByTestId("save-A").count()).toBe(0);
       const nav = viewer.page.getByRole("navigation", { name: "Main" });
-      for (const [name, href] of [["Tools", "/tools"], ["Audit", "/audit"], ["Notifications", "/settings/notifications"]] as const)
+      for (const [name, href] of [
+        ["Tools", "/tools"],
+        ["Audit", "/audit"],
+        ["Notifications", "/settings/notifications"],
+      ] as const)
         expect(await nav.getByRole("link", { name }).getAttribute("href")).toBe(href);
     } finally {
       await viewer.close();
@@ -75,7 +79,9 @@ describe("helpers beside the workspace fields", () => {
       expect(Number(await dialog.locator('input[name="bandwidthMHz"]').inputValue())).toBe(1000);
       await dialog.getByRole("button", { name: "Cancel" }).click();
       const stored = await call(team.engineer, "GET", `/api/v1/missions/${missionId}/channels`);
-      const wv1 = (stored.body as { channels: { key: string; centerGHz: number; dsbOffsetGHz: number | null }[] }).channels.find((c) => c.key === "wv1");
+      const wv1 = (
+        stored.body as { channels: { key: string; centerGHz: number; dsbOffsetGHz: number | null }[] }
+      ).channels.find((c) => c.key === "wv1");
       expect(wv1).toMatchObject({ centerGHz: 183.31, dsbOffsetGHz: null });
     } finally {
       await ctx.close();
@@ -85,14 +91,18 @@ describe("helpers beside the workspace fields", () => {
   it("an engineer applies the drift budget to driftMHz, saves, and the plan is re-checked", async () => {
     const ctx = await launchBrowser({ width: 1400, height: 1100 });
     const host = new URL(BASE_URL).hostname;
-    await ctx.context.addCookies([...team.engineer.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })));
+    await ctx.context.addCookies(
+      [...team.engineer.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })),
+    );
     const page = ctx.page;
     page.setDefaultTimeout(120_000);
     page.setDefaultNavigationTimeout(180_000);
     try {
       await page.goto(`${BASE_URL}/missions/${missionId}`);
       const panel = page.getByTestId("findings-panel");
-      await expect.poll(async () => Number(await page.getByTestId("revision-number").innerText()), { timeout: 120_000 }).toBeGreaterThan(0);
+      await expect
+        .poll(async () => Number(await page.getByTestId("revision-number").innerText()), { timeout: 120_000 })
+        .toBeGreaterThan(0);
       const revisionBefore = Number(await page.getByTestId("revision-number").innerText());
       // ± 20 MHz drift keeps every IF inside the detector band: no if-outside-detector finding yet.
       await panel.locator('[data-code="carrier-dominates-lo"]').first().waitFor();

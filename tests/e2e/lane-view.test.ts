@@ -37,7 +37,10 @@ async function pageAs(c: TestClient): Promise<{ ctx: BrowserContext; page: Page 
 
 beforeAll(async () => {
   team = await makeTeamWithRoles();
-  const created = await json(team.engineer, "/api/v1/missions", { method: "POST", json: { name: "E2E lane view mission (test data)" } });
+  const created = await json(team.engineer, "/api/v1/missions", {
+    method: "POST",
+    json: { name: "E2E lane view mission (test data)" },
+  });
   expect(created.status).toBe(201);
   missionId = created.body.id;
   const imported = await json(team.engineer, `/api/v1/missions/${missionId}/plan`, { method: "POST", json: PLAN });
@@ -83,7 +86,10 @@ describe("lane view", () => {
     await page.mouse.move(handle!.x + handle!.width / 2, handle!.y + handle!.height - 6);
     await page.mouse.down();
     for (let k = 1; k <= 10; k++) {
-      await page.mouse.move(handle!.x + handle!.width / 2 + ((target!.x - handle!.x - handle!.width / 2) * k) / 10, handle!.y + handle!.height - 6);
+      await page.mouse.move(
+        handle!.x + handle!.width / 2 + ((target!.x - handle!.x - handle!.width / 2) * k) / 10,
+        handle!.y + handle!.height - 6,
+      );
     }
     await page.mouse.up();
     const status = page.getByTestId("lo-status-A");

@@ -7,7 +7,15 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
-import { BASE_URL, closeTestPool, makeTeamWithRoles, readMail, testPool, type TeamWithRoles, type TestClient } from "../setup/auth-helpers";
+import {
+  BASE_URL,
+  closeTestPool,
+  makeTeamWithRoles,
+  readMail,
+  testPool,
+  type TeamWithRoles,
+  type TestClient,
+} from "../setup/auth-helpers";
 import { launchBrowser, screenshot, type TestBrowser } from "../setup/browser";
 import { call, missionWithPlan } from "../setup/workspace-helpers";
 import { validPlanInput } from "../fixtures/valid-plan";
@@ -40,7 +48,8 @@ afterAll(async () => {
 
 describe("review flow", () => {
   it("submit → comment with @mention → waivers → baseline, with e-mails and the report's approval section", async () => {
-    const errors: { id: string }[] = (await call(team.viewer, "GET", `/api/v1/missions/${missionId}/review`)).body.errors;
+    const errors: { id: string }[] = (await call(team.viewer, "GET", `/api/v1/missions/${missionId}/review`)).body
+      .errors;
     expect(errors.length).toBeGreaterThan(0);
 
     // The engineer submits and comments.
@@ -69,7 +78,11 @@ describe("review flow", () => {
     await expect.poll(() => reasonBoxes.count(), { timeout: 240_000 }).toBe(errors.length);
     // Trying to baseline first is refused by the server with the reason.
     await lead.getByRole("button", { name: /Baseline revision/ }).click();
-    await lead.getByRole("alert").filter({ hasText: /no waiver/ }).first().waitFor();
+    await lead
+      .getByRole("alert")
+      .filter({ hasText: /no waiver/ })
+      .first()
+      .waitFor();
     for (let left = errors.length; left > 0; left--) {
       await reasonBoxes.first().fill(`Accepted for the breadboard (test ${left})`);
       await lead.getByRole("button", { name: "Record waiver" }).first().click();
@@ -115,7 +128,10 @@ describe("review flow", () => {
     await box.uncheck();
     await lead.getByRole("button", { name: "Save" }).click();
     await lead.getByRole("status").filter({ hasText: "Saved" }).waitFor();
-    const { rows } = await testPool().query(`select review_requested, review_decided, mentioned from notification_preferences where user_id = $1`, [team.lead.userId]);
+    const { rows } = await testPool().query(
+      `select review_requested, review_decided, mentioned from notification_preferences where user_id = $1`,
+      [team.lead.userId],
+    );
     expect(rows).toEqual([{ review_requested: false, review_decided: true, mentioned: true }]);
   }, 1_500_000);
 });

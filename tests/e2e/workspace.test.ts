@@ -41,7 +41,10 @@ async function shot(page: Page, name: string) {
 
 beforeAll(async () => {
   team = await makeTeamWithRoles();
-  const created = await json(team.engineer, "/api/v1/missions", { method: "POST", json: { name: "E2E workspace mission (test data)" } });
+  const created = await json(team.engineer, "/api/v1/missions", {
+    method: "POST",
+    json: { name: "E2E workspace mission (test data)" },
+  });
   expect(created.status).toBe(201);
   missionId = created.body.id;
   const imported = await json(team.engineer, `/api/v1/missions/${missionId}/plan`, { method: "POST", json: PLAN });
@@ -63,10 +66,14 @@ describe("mission workspace", () => {
     const row = page.locator('[data-channel="wv1"]');
     await row.waitFor();
     // Before: 17.92 K meets the 20 K requirement, so no nedt-unmet finding.
-    await expect.poll(() => row.locator('[data-testid="nedt"]').innerText(), { timeout: 120_000 }).toMatch(/17\.9\d \/ 20\.00/);
+    await expect
+      .poll(() => row.locator('[data-testid="nedt"]').innerText(), { timeout: 120_000 })
+      .toMatch(/17\.9\d \/ 20\.00/);
     const panel = page.getByTestId("findings-panel");
     expect(await panel.locator('[data-code="nedt-unmet"]').count()).toBe(0);
-    await expect.poll(async () => Number(await page.getByTestId("revision-number").innerText()), { timeout: 120_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(async () => Number(await page.getByTestId("revision-number").innerText()), { timeout: 120_000 })
+      .toBeGreaterThan(0);
     const revisionBefore = Number(await page.getByTestId("revision-number").innerText());
     await shot(page, "engineer-before");
 
@@ -81,7 +88,9 @@ describe("mission workspace", () => {
     const finding = panel.locator('[data-findings-channel="wv1"] [data-code="nedt-unmet"]');
     await finding.waitFor();
     expect(await finding.innerText()).toMatch(/wv1.*17\.92\d* K.*required 10 K/s);
-    await expect.poll(() => row.locator('[data-testid="worst-finding"]').innerText(), { timeout: 120_000 }).toMatch(/error\s*nedt-unmet/i);
+    await expect
+      .poll(() => row.locator('[data-testid="worst-finding"]').innerText(), { timeout: 120_000 })
+      .toMatch(/error\s*nedt-unmet/i);
     await expect
       .poll(async () => Number(await page.getByTestId("revision-number").innerText()), { timeout: 120_000 })
       .toBeGreaterThan(revisionBefore);
@@ -157,7 +166,9 @@ describe("mission workspace", () => {
       "wv2,183.31 wing,A,183.9,10,10,250,5000",
       "wv3,broken row,A,-5,10,10,250,5000",
     ].join("\n");
-    await page.locator("#channels-file").setInputFiles({ name: "channels.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
+    await page
+      .locator("#channels-file")
+      .setInputFiles({ name: "channels.csv", mimeType: "text/csv", buffer: Buffer.from(csv) });
     await page.getByRole("button", { name: "Preview" }).nth(1).click();
     const chPreview = page.getByTestId("channels-preview");
     await chPreview.waitFor();
@@ -199,7 +210,10 @@ describe("mission workspace", () => {
   }, 420_000);
 
   it("only an owner gets the delete control, and deleting a mission removes it", async () => {
-    const created = await json(team.owner, "/api/v1/missions", { method: "POST", json: { name: "E2E mission to delete (test data)" } });
+    const created = await json(team.owner, "/api/v1/missions", {
+      method: "POST",
+      json: { name: "E2E mission to delete (test data)" },
+    });
     expect(created.status).toBe(201);
     const doomed = created.body.id as string;
 

@@ -26,7 +26,12 @@ async function formPost(base: string, path: string, fields: Record<string, strin
   for (const m of html.matchAll(/<input type="hidden" name="(\$ACTION[^"]*)"(?: value="([^"]*)")?\/>/g))
     form.append(m[1]!, (m[2] ?? "").replace(/&quot;/g, '"').replace(/&amp;/g, "&"));
   for (const [k, v] of Object.entries(fields)) form.append(k, v);
-  const res = await fetch(`${base}${path}`, { method: "POST", body: form, redirect: "manual", headers: { "x-forwarded-for": addr } });
+  const res = await fetch(`${base}${path}`, {
+    method: "POST",
+    body: form,
+    redirect: "manual",
+    headers: { "x-forwarded-for": addr },
+  });
   return res.text();
 }
 
@@ -51,7 +56,14 @@ describe.skipIf(urls.length < 2)("rate limits shared across app processes", () =
     const addr = `203.0.113.${randomInt(1, 255)}`; // documentation range (RFC 5737)
     const pages: string[] = [];
     for (let i = 0; i < 11; i++)
-      pages.push(await formPost(urls[i % urls.length]!, "/sign-in", { email: uniqueEmail("rlf"), password: "0123456789abc" }, addr));
+      pages.push(
+        await formPost(
+          urls[i % urls.length]!,
+          "/sign-in",
+          { email: uniqueEmail("rlf"), password: "0123456789abc" },
+          addr,
+        ),
+      );
     expect(pages.slice(0, 10).every((h) => h.includes("E-mail address or password is wrong."))).toBe(true);
     expect(pages[10]).toContain("Too many attempts from this address");
   });

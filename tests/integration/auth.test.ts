@@ -25,7 +25,9 @@ import {
 } from "../setup/auth-helpers";
 
 async function userCount(email: string): Promise<number> {
-  const { rows } = await testPool().query<{ n: number }>(`select count(*)::int as n from "user" where email = $1`, [email]);
+  const { rows } = await testPool().query<{ n: number }>(`select count(*)::int as n from "user" where email = $1`, [
+    email,
+  ]);
   return rows[0]!.n;
 }
 
@@ -34,7 +36,11 @@ async function userCount(email: string): Promise<number> {
  * multipart POST carrying React's hidden action fields) and returns the
  * re-rendered HTML. Exercises the real server action with conform + zod.
  */
-async function submitPageForm(c: TestClient, path: string, fields: Record<string, string>): Promise<{ status: number; html: string; location: string | null }> {
+async function submitPageForm(
+  c: TestClient,
+  path: string,
+  fields: Record<string, string>,
+): Promise<{ status: number; html: string; location: string | null }> {
   const page = await c.fetch(path);
   const html = await page.text();
   const form = new FormData();
@@ -93,7 +99,10 @@ describe("sign-up, confirmation, sign-in", () => {
     again.email = c.email;
     await signIn(again);
     expect(again.cookies.size).toBeGreaterThan(0);
-    const wrong = await new TestClient().postJson("/api/auth/sign-in/email", { email: c.email, password: "not-the-password" });
+    const wrong = await new TestClient().postJson("/api/auth/sign-in/email", {
+      email: c.email,
+      password: "not-the-password",
+    });
     expect(wrong.status).toBe(401);
   });
 
@@ -114,7 +123,9 @@ describe("sign-up, confirmation, sign-in", () => {
   it("a tampered confirmation link lands on a clear page with a resend form", async () => {
     const c = await signUp();
     const link = firstLink(await readMail(c.email, /confirm your e-mail/i));
-    const res = await new TestClient().fetch(link.replace(/token=([^&]+)/, (_m, t: string) => `token=${t.slice(0, -4)}AAAA`));
+    const res = await new TestClient().fetch(
+      link.replace(/token=([^&]+)/, (_m, t: string) => `token=${t.slice(0, -4)}AAAA`),
+    );
     expect([302, 307]).toContain(res.status);
     const location = res.headers.get("location")!;
     expect(location).toMatch(/error=/);
@@ -127,7 +138,11 @@ describe("sign-up, confirmation, sign-in", () => {
 
   it("the sign-up form refuses a malformed e-mail, naming the field, keeping the input, creating no account", async () => {
     const email = `not-an-address-${Date.now()}`;
-    const r = await submitPageForm(new TestClient(), "/sign-up", { name: "Ada Tester", email, password: TEST_PASSWORD });
+    const r = await submitPageForm(new TestClient(), "/sign-up", {
+      name: "Ada Tester",
+      email,
+      password: TEST_PASSWORD,
+    });
     expect(r.status).toBe(200);
     expect(r.html).toContain("E-mail address is not valid");
     expect(r.html).toMatch(/id="sign-up-email"[^>]*aria-invalid="true"|aria-invalid="true"[^>]*id="sign-up-email"/);
@@ -141,13 +156,19 @@ describe("sign-up, confirmation, sign-in", () => {
     const r = await submitPageForm(new TestClient(), "/sign-up", { name: "Ada Tester", email, password: "123456789" });
     expect(r.status).toBe(200);
     expect(r.html).toContain("Password must be at least 10 characters");
-    expect(r.html).toMatch(/id="sign-up-password"[^>]*aria-invalid="true"|aria-invalid="true"[^>]*id="sign-up-password"/);
+    expect(r.html).toMatch(
+      /id="sign-up-password"[^>]*aria-invalid="true"|aria-invalid="true"[^>]*id="sign-up-password"/,
+    );
     expect(r.html).toContain(`value="${email}"`);
     expect(await userCount(email)).toBe(0);
   });
 
   it("the auth API refuses the same input too (malformed e-mail, short password)", async () => {
-    const bad = await new TestClient().postJson("/api/auth/sign-up/email", { name: "X", email: "nope", password: TEST_PASSWORD });
+    const bad = await new TestClient().postJson("/api/auth/sign-up/email", {
+      name: "X",
+      email: "nope",
+      password: TEST_PASSWORD,
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.message).toMatch(/email/i);
     const email = uniqueEmail("api-short");
@@ -159,7 +180,11 @@ describe("sign-up, confirmation, sign-in", () => {
 
   it("the sign-up form says clearly when the e-mail address already has an account", async () => {
     const first = await signUp();
-    const r = await submitPageForm(new TestClient(), "/sign-up", { name: "Someone Else", email: first.email, password: TEST_PASSWORD });
+    const r = await submitPageForm(new TestClient(), "/sign-up", {
+      name: "Someone Else",
+      email: first.email,
+      password: TEST_PASSWORD,
+    });
     expect(r.status).toBe(200);
     expect(r.html).toContain("An account with this e-mail address already exists");
     expect(await userCount(first.email)).toBe(1);
@@ -180,7 +205,11 @@ describe("sign-up, confirmation, sign-in", () => {
 
   it("a valid sign-up form creates the account and redirects to the check-your-inbox page", async () => {
     const email = uniqueEmail("form");
-    const r = await submitPageForm(new TestClient(), "/sign-up", { name: "Form Person", email, password: TEST_PASSWORD });
+    const r = await submitPageForm(new TestClient(), "/sign-up", {
+      name: "Form Person",
+      email,
+      password: TEST_PASSWORD,
+    });
     expect(r.status).toBe(303);
     expect(r.location).toContain("/verify-email?email=");
     expect(await userCount(email)).toBe(1);
@@ -191,16 +220,25 @@ describe("sign-up, confirmation, sign-in", () => {
 describe("password reset", () => {
   it("mails a one-time link that sets a new password", async () => {
     const c = await newVerifiedUser("reset");
-    const ask = await new TestClient().postJson("/api/auth/request-password-reset", { email: c.email, redirectTo: "/reset-password" });
+    const ask = await new TestClient().postJson("/api/auth/request-password-reset", {
+      email: c.email,
+      redirectTo: "/reset-password",
+    });
     expect(ask.status).toBe(200);
     const link = firstLink(await readMail(c.email, /reset your heterolane password/i));
     const hop = await new TestClient().fetch(link);
     const location = hop.headers.get("location")!;
     const token = new URL(location, BASE_URL).searchParams.get("token");
     expect(token).toBeTruthy();
-    const done = await new TestClient().postJson("/api/auth/reset-password", { token, newPassword: "a-brand-new-password-7" });
+    const done = await new TestClient().postJson("/api/auth/reset-password", {
+      token,
+      newPassword: "a-brand-new-password-7",
+    });
     expect(done.status).toBe(200);
-    const again = await new TestClient().postJson("/api/auth/reset-password", { token, newPassword: "another-password-88" });
+    const again = await new TestClient().postJson("/api/auth/reset-password", {
+      token,
+      newPassword: "another-password-88",
+    });
     expect(again.status).toBe(400);
     const fresh = new TestClient();
     fresh.email = c.email;
@@ -239,7 +277,10 @@ describe("teams, invitations and roles", () => {
 
   it("the invitation mail links to the accept page, which names team and role", async () => {
     const person = await newVerifiedUser("page");
-    const sent = await t.lead.fetch("/api/team/invitations", { method: "POST", json: { email: person.email, role: "engineer" } });
+    const sent = await t.lead.fetch("/api/team/invitations", {
+      method: "POST",
+      json: { email: person.email, role: "engineer" },
+    });
     expect(sent.status).toBe(201);
     const mail = await readMail(person.email, /invitation to join/i);
     const link = firstLink(mail);
@@ -262,7 +303,10 @@ describe("teams, invitations and roles", () => {
 
   it("an invitation opened by another signed-in account says so and cannot be accepted by it", async () => {
     const invitee = uniqueEmail("invitee");
-    const sent = await t.owner.fetch("/api/team/invitations", { method: "POST", json: { email: invitee, role: "viewer" } });
+    const sent = await t.owner.fetch("/api/team/invitations", {
+      method: "POST",
+      json: { email: invitee, role: "viewer" },
+    });
     expect(sent.status).toBe(201);
     const { id } = await sent.json();
     const page = await t.engineer.fetch(`/invitations/${id}`);
@@ -290,7 +334,10 @@ describe("teams, invitations and roles", () => {
 
   it("a viewer may not invite (403), nor an engineer", async () => {
     for (const who of [t.viewer, t.engineer]) {
-      const res = await who.fetch("/api/team/invitations", { method: "POST", json: { email: uniqueEmail("x"), role: "viewer" } });
+      const res = await who.fetch("/api/team/invitations", {
+        method: "POST",
+        json: { email: uniqueEmail("x"), role: "viewer" },
+      });
       expect(res.status).toBe(403);
       const body = await res.json();
       expect(body.error.code).toBe("forbidden");
@@ -301,14 +348,23 @@ describe("teams, invitations and roles", () => {
   });
 
   it("a lead may invite, but not as owner", async () => {
-    const ok = await t.lead.fetch("/api/team/invitations", { method: "POST", json: { email: uniqueEmail("by-lead"), role: "viewer" } });
+    const ok = await t.lead.fetch("/api/team/invitations", {
+      method: "POST",
+      json: { email: uniqueEmail("by-lead"), role: "viewer" },
+    });
     expect(ok.status).toBe(201);
-    const owner = await t.lead.fetch("/api/team/invitations", { method: "POST", json: { email: uniqueEmail("as-owner"), role: "owner" } });
+    const owner = await t.lead.fetch("/api/team/invitations", {
+      method: "POST",
+      json: { email: uniqueEmail("as-owner"), role: "owner" },
+    });
     expect(owner.status).toBe(403);
   });
 
   it("an invitation with a malformed e-mail or unknown role is refused with the field named", async () => {
-    const res = await t.owner.fetch("/api/team/invitations", { method: "POST", json: { email: "nope", role: "admiral" } });
+    const res = await t.owner.fetch("/api/team/invitations", {
+      method: "POST",
+      json: { email: "nope", role: "admiral" },
+    });
     expect(res.status).toBe(400);
     const body = await res.json();
     const paths = body.error.issues.map((i: { path: string }) => i.path).sort();
@@ -320,12 +376,18 @@ describe("teams, invitations and roles", () => {
     const viewerMember = team.members.find((m: { email: string }) => m.email === t.viewer.email);
     const del = await t.engineer.fetch(`/api/team/members/${viewerMember.id}`, { method: "DELETE" });
     expect(del.status).toBe(403);
-    const patch = await t.engineer.fetch(`/api/team/members/${viewerMember.id}`, { method: "PATCH", json: { role: "owner" } });
+    const patch = await t.engineer.fetch(`/api/team/members/${viewerMember.id}`, {
+      method: "PATCH",
+      json: { role: "owner" },
+    });
     expect(patch.status).toBe(403);
     const leadDel = await t.lead.fetch(`/api/team/members/${viewerMember.id}`, { method: "DELETE" });
     expect(leadDel.status).toBe(403);
     // better-auth's own endpoint refuses as well.
-    const direct = await t.engineer.postJson("/api/auth/organization/remove-member", { memberIdOrEmail: viewerMember.id, organizationId: t.teamId });
+    const direct = await t.engineer.postJson("/api/auth/organization/remove-member", {
+      memberIdOrEmail: viewerMember.id,
+      organizationId: t.teamId,
+    });
     expect(direct.status).toBeGreaterThanOrEqual(400);
     const after = await (await t.owner.fetch("/api/team")).json();
     expect(after.members.find((m: { email: string }) => m.email === t.viewer.email)?.role).toBe("viewer");

@@ -7,7 +7,16 @@
  */
 import { readFileSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import { closeTestPool, createTeam, makeTeamWithRoles, newVerifiedUser, readMail, TestClient, testPool, type TeamWithRoles } from "../setup/auth-helpers";
+import {
+  closeTestPool,
+  createTeam,
+  makeTeamWithRoles,
+  newVerifiedUser,
+  readMail,
+  TestClient,
+  testPool,
+  type TeamWithRoles,
+} from "../setup/auth-helpers";
 import { call, callRaw, missionWithPlan } from "../setup/workspace-helpers";
 import { validPlanInput } from "../fixtures/valid-plan";
 
@@ -21,7 +30,9 @@ const ACTIONS: Action[] = ["submit", "baseline", "request-changes", "edit"];
 // The clean worked example (no error findings; invented demo data).
 // Importing a plan names the mission after the plan, so tests that look for a mission by name rename the plan.
 const cleanPlan = (name?: string) => {
-  const p = JSON.parse(readFileSync(new URL("../fixtures/plans/ex1-single-channel.plan.json", import.meta.url), "utf8"));
+  const p = JSON.parse(
+    readFileSync(new URL("../fixtures/plans/ex1-single-channel.plan.json", import.meta.url), "utf8"),
+  );
   if (name) p.name = name;
   return p;
 };
@@ -47,7 +58,11 @@ async function act(c: TestClient, id: string, action: Action) {
   if (action === "submit") return call(c, "POST", `${R(id)}/submit`, { note: "please review" });
   if (action === "edit") {
     const s = await call(team.owner, "GET", `/api/v1/missions/${id}/settings`);
-    return call(c, "PUT", `/api/v1/missions/${id}/settings`, { ...s.body, updatedAt: undefined, guardMHz: s.body.guardMHz + 1 });
+    return call(c, "PUT", `/api/v1/missions/${id}/settings`, {
+      ...s.body,
+      updatedAt: undefined,
+      guardMHz: s.body.guardMHz + 1,
+    });
   }
   return call(c, "POST", `${R(id)}/decide`, { decision: action, note: "decided in a test" });
 }
@@ -103,7 +118,9 @@ describe("every transition × every role", () => {
           const after = await call(team.owner, "GET", `/api/v1/missions/${id}/revisions`);
           if (action === "edit" && allowed) {
             // A new draft revision; the earlier one is unchanged, except that a review in progress is withdrawn.
-            expect(after.body.revisions?.length ?? after.body.length).toBe((before.body.revisions?.length ?? before.body.length) + 1);
+            expect(after.body.revisions?.length ?? after.body.length).toBe(
+              (before.body.revisions?.length ?? before.body.length) + 1,
+            );
           }
         });
       }
@@ -174,7 +191,10 @@ describe("waivers: no baseline with an unwaived open error", () => {
     const json = await callRaw(team.lead, "POST", `${R(id)}/waivers`, "{not json");
     expect(json.status).toBe(400);
     // A warning finding needs no waiver.
-    const { rows } = await testPool().query(`select f.id from findings f join plan_revisions r on r.id = f.revision_id where r.mission_id = $1 and f.severity = 'warning' limit 1`, [id]);
+    const { rows } = await testPool().query(
+      `select f.id from findings f join plan_revisions r on r.id = f.revision_id where r.mission_id = $1 and f.severity = 'warning' limit 1`,
+      [id],
+    );
     const warn = await call(team.lead, "POST", `${R(id)}/waivers`, { findingId: rows[0].id, reason: "not needed" });
     expect(warn.status).toBe(400);
     expect(warn.body.error.issues[0].path).toBe("findingId");
@@ -193,11 +213,20 @@ describe("waivers: no baseline with an unwaived open error", () => {
     expect(still.status).toBe(409);
     expect(still.body.error.unwaived).toEqual([errors.at(-1)!.key]);
     // change one reason (optimistic version), then a stale change is refused
-    const upd = await call(team.owner, "PATCH", `${R(id)}/waivers/${made[0].id}`, { reason: "accepted after analysis", version: made[0].version });
+    const upd = await call(team.owner, "PATCH", `${R(id)}/waivers/${made[0].id}`, {
+      reason: "accepted after analysis",
+      version: made[0].version,
+    });
     expect(upd.status).toBe(200);
-    const stale = await call(team.owner, "PATCH", `${R(id)}/waivers/${made[0].id}`, { reason: "x y z", version: made[0].version });
+    const stale = await call(team.owner, "PATCH", `${R(id)}/waivers/${made[0].id}`, {
+      reason: "x y z",
+      version: made[0].version,
+    });
     expect(stale.status).toBe(409);
-    const last = await call(team.owner, "POST", `${R(id)}/waivers`, { findingId: errors.at(-1)!.id, reason: "accepted for the demo" });
+    const last = await call(team.owner, "POST", `${R(id)}/waivers`, {
+      findingId: errors.at(-1)!.id,
+      reason: "accepted for the demo",
+    });
     expect(last.status).toBe(201);
     const ok = await call(team.owner, "POST", `${R(id)}/decide`, { decision: "baseline", note: "ready to order" });
     expect(ok.status).toBe(200);
@@ -252,14 +281,17 @@ describe("e-mail", () => {
     expect(toLead.text).toContain(`/missions/${id}`);
     expect(toLead.text).toContain("first look");
     await readMail(team.owner.email, `review requested: ${name}`);
-    const { rows } = await testPool().query(`select recipients from captured_mail where subject ilike $1 and received_at >= $2`, [
-      `Review requested: ${name}%`,
-      since,
-    ]);
+    const { rows } = await testPool().query(
+      `select recipients from captured_mail where subject ilike $1 and received_at >= $2`,
+      [`Review requested: ${name}%`, since],
+    );
     const all = rows.flatMap((r: { recipients: string[] }) => r.recipients);
     expect(all).not.toContain(team.engineer.email);
     expect(all).not.toContain(team.viewer.email);
-    const d = await call(team.lead, "POST", `${R(id)}/decide`, { decision: "request-changes", note: "widen the guard" });
+    const d = await call(team.lead, "POST", `${R(id)}/decide`, {
+      decision: "request-changes",
+      note: "widen the guard",
+    });
     expect(d.body.notified).toEqual([team.engineer.email]);
     const back = await readMail(team.engineer.email, `changes requested: ${name}`);
     expect(back.text).toContain("widen the guard");
@@ -290,15 +322,24 @@ describe("comments and @mentions", () => {
     const id = await missionWithPlan(team.engineer, { ...validPlanInput(), name });
     const ov = await call(team.viewer, "GET", R(id));
     const finding = ov.body.errors[0];
-    const c1 = await call(team.engineer, "POST", `${R(id)}/comments`, { body: `@${team.lead.email} can you check the slot overlap?` });
+    const c1 = await call(team.engineer, "POST", `${R(id)}/comments`, {
+      body: `@${team.lead.email} can you check the slot overlap?`,
+    });
     expect(c1.status).toBe(201);
     expect(c1.body.notified).toEqual([team.lead.email]);
     const m1 = await readMail(team.lead.email, `mentioned you on ${name}`);
     expect(m1.text).toContain("can you check the slot overlap?");
-    const c2 = await call(team.lead, "POST", `${R(id)}/comments`, { body: `Looks fine, @${team.viewer.name}.`, channelKey: "wv1" });
+    const c2 = await call(team.lead, "POST", `${R(id)}/comments`, {
+      body: `Looks fine, @${team.viewer.name}.`,
+      channelKey: "wv1",
+    });
     expect([c2.status, c2.body.channelKey, c2.body.notified]).toEqual([201, "wv1", [team.viewer.email]]);
     await readMail(team.viewer.email, `mentioned you on ${name}`);
-    const c3 = await call(team.owner, "POST", `${R(id)}/comments`, { body: "Known issue.", findingId: finding.id, revision: ov.body.revision.number });
+    const c3 = await call(team.owner, "POST", `${R(id)}/comments`, {
+      body: "Known issue.",
+      findingId: finding.id,
+      revision: ov.body.revision.number,
+    });
     expect([c3.status, c3.body.findingId]).toEqual([201, finding.id]);
     const list = await call(team.viewer, "GET", `${R(id)}/comments`);
     expect(list.body.comments.map((c: { body: string }) => c.body)).toEqual([c1.body.body, c2.body.body, c3.body.body]);
@@ -348,7 +389,9 @@ describe("audit trail CSV", () => {
     expect(res.headers.get("content-type")).toMatch(/text\/csv/);
     const text = await res.text();
     const lines = text.trim().split("\r\n");
-    expect(lines[0]).toBe("at_utc,person,person_id,mission,mission_id,action,entity,summary,revision_before,revision_after");
+    expect(lines[0]).toBe(
+      "at_utc,person,person_id,mission,mission_id,action,entity,summary,revision_before,revision_after",
+    );
     expect(lines.some((l) => l.includes(",review-submit,"))).toBe(true);
     expect(lines.some((l) => l.includes(",review-baseline,"))).toBe(true);
     expect(lines.slice(1).every((l) => l.includes(id))).toBe(true);

@@ -39,7 +39,10 @@ describe("optimistic concurrency", () => {
   it("answers 409 with the current row to a stale PATCH and keeps the other write", async () => {
     const list = await call(team.engineer, "GET", `${M()}/channels`);
     const ch = list.body.channels[0];
-    const first = await call(team.lead, "PATCH", `${M()}/channels/${ch.id}`, { name: "renamed by the lead", version: ch.version });
+    const first = await call(team.lead, "PATCH", `${M()}/channels/${ch.id}`, {
+      name: "renamed by the lead",
+      version: ch.version,
+    });
     expect(first.status).toBe(200);
     expect(first.body).toMatchObject({ name: "renamed by the lead", version: ch.version + 1 });
     expect(first.body.revision).toEqual({
@@ -49,12 +52,24 @@ describe("optimistic concurrency", () => {
       infoCount: expect.any(Number),
     });
     const before = await revisionCount();
-    const stale = await call(team.engineer, "PATCH", `${M()}/channels/${ch.id}`, { bandwidthMHz: 12, version: ch.version });
+    const stale = await call(team.engineer, "PATCH", `${M()}/channels/${ch.id}`, {
+      bandwidthMHz: 12,
+      version: ch.version,
+    });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe("stale-version");
-    expect(stale.body.error.current).toMatchObject({ id: ch.id, name: "renamed by the lead", version: ch.version + 1, bandwidthMHz: ch.bandwidthMHz });
+    expect(stale.body.error.current).toMatchObject({
+      id: ch.id,
+      name: "renamed by the lead",
+      version: ch.version + 1,
+      bandwidthMHz: ch.bandwidthMHz,
+    });
     const reread = await call(team.viewer, "GET", `${M()}/channels/${ch.id}`);
-    expect(reread.body).toMatchObject({ name: "renamed by the lead", bandwidthMHz: ch.bandwidthMHz, version: ch.version + 1 });
+    expect(reread.body).toMatchObject({
+      name: "renamed by the lead",
+      bandwidthMHz: ch.bandwidthMHz,
+      version: ch.version + 1,
+    });
     expect(await revisionCount()).toBe(before);
   });
 
@@ -77,8 +92,13 @@ describe("optimistic concurrency", () => {
     expect(stale.status).toBe(409);
     expect(stale.body.error.current).toMatchObject({ guardMHz: 45, version: settings.version + 1 });
     const m = await call(team.engineer, "GET", M());
-    expect((await call(team.lead, "PATCH", M(), { description: "lead's words", version: m.body.version })).status).toBe(200);
-    const staleM = await call(team.engineer, "PATCH", M(), { description: "engineer's words", version: m.body.version });
+    expect((await call(team.lead, "PATCH", M(), { description: "lead's words", version: m.body.version })).status).toBe(
+      200,
+    );
+    const staleM = await call(team.engineer, "PATCH", M(), {
+      description: "engineer's words",
+      version: m.body.version,
+    });
     expect(staleM.status).toBe(409);
     expect((await call(team.viewer, "GET", M())).body.description).toBe("lead's words");
   });
@@ -101,14 +121,24 @@ describe("concurrent edits of different rows", () => {
     const before = (await call(team.viewer, "GET", `${M()}/revisions`)).body.revisions[0].number;
     const replies = await Promise.all(
       ["RX1", "RX2", "RX3"].map((key, i) =>
-        call([team.engineer, team.lead, team.owner][i]!, "POST", `${M()}/resonators`, { key, fsrGHz: 100 + i, loadedQ: 1e6 }),
+        call([team.engineer, team.lead, team.owner][i]!, "POST", `${M()}/resonators`, {
+          key,
+          fsrGHz: 100 + i,
+          loadedQ: 1e6,
+        }),
       ),
     );
     expect(replies.map((r) => r.status)).toEqual([201, 201, 201]);
-    expect(replies.map((r) => r.body.revision.number).sort((a: number, b: number) => a - b)).toEqual([before + 1, before + 2, before + 3]);
+    expect(replies.map((r) => r.body.revision.number).sort((a: number, b: number) => a - b)).toEqual([
+      before + 1,
+      before + 2,
+      before + 3,
+    ]);
     const plan = (await call(team.viewer, "GET", `${M()}/plan`)).body;
     expect(plan.resonators.map((r: { id: string }) => r.id)).toEqual(expect.arrayContaining(["RX1", "RX2", "RX3"]));
-    const positions = (await call(team.viewer, "GET", `${M()}/resonators`)).body.resonators.map((r: { key: string }) => r.key);
+    const positions = (await call(team.viewer, "GET", `${M()}/resonators`)).body.resonators.map(
+      (r: { key: string }) => r.key,
+    );
     expect(new Set(positions).size).toBe(positions.length);
   });
 });
@@ -116,7 +146,12 @@ describe("concurrent edits of different rows", () => {
 describe("invalid input is refused and nothing is saved", () => {
   it("names every bad field of a create and of an update", async () => {
     const before = await revisionCount();
-    const bad = await call(team.engineer, "POST", `${M()}/lasers`, { ...laserBody(), carrierTHz: -1, reach: [{ minGHz: 5, maxGHz: 1 }], colour: "red" });
+    const bad = await call(team.engineer, "POST", `${M()}/lasers`, {
+      ...laserBody(),
+      carrierTHz: -1,
+      reach: [{ minGHz: 5, maxGHz: 1 }],
+      colour: "red",
+    });
     expect(bad.status).toBe(400);
     expect(bad.body.error.code).toBe("invalid-input");
     const paths = bad.body.error.issues.map((i: { path: string }) => i.path);
@@ -125,7 +160,10 @@ describe("invalid input is refused and nothing is saved", () => {
     const upd = await call(team.engineer, "PATCH", `${M()}/detectors/${d.id}`, { minGHz: 9, version: d.version });
     expect(upd.status).toBe(400);
     expect(upd.body.error.issues).toEqual([{ path: "maxGHz", message: "must be above minGHz" }]);
-    expect((await call(team.viewer, "GET", `${M()}/detectors/${d.id}`)).body).toMatchObject({ minGHz: d.minGHz, version: d.version });
+    expect((await call(team.viewer, "GET", `${M()}/detectors/${d.id}`)).body).toMatchObject({
+      minGHz: d.minGHz,
+      version: d.version,
+    });
     expect(await revisionCount()).toBe(before);
   });
 
@@ -142,7 +180,9 @@ describe("invalid input is refused and nothing is saved", () => {
     expect(r.status).toBe(400);
     expect(r.body.error.code).toBe("invalid-plan");
     // the issue about the new row is renamed to the form's field
-    expect(r.body.error.issues).toEqual([{ path: "laserId", message: expect.stringContaining("a laser serves one chain") }]);
+    expect(r.body.error.issues).toEqual([
+      { path: "laserId", message: expect.stringContaining("a laser serves one chain") },
+    ]);
     const after = (await call(team.engineer, "GET", `${M()}/chains`)).body.chains;
     expect(after.map((c: { key: string }) => c.key)).not.toContain("Z9");
     expect(await revisionCount()).toBe(before);
@@ -152,14 +192,25 @@ describe("invalid input is refused and nothing is saved", () => {
     const lasers = (await call(team.engineer, "GET", `${M()}/lasers`)).body.lasers;
     const dup = await call(team.engineer, "POST", `${M()}/lasers`, laserBody(lasers[0].key));
     expect(dup.status).toBe(400);
-    expect(dup.body.error.issues).toEqual([{ path: "key", message: "another laser of this mission already uses this key" }]);
-    const dangling = await call(team.engineer, "POST", `${M()}/chains`, chainBody({
-      laserId: "00000000-0000-4000-8000-000000000001",
-      resonatorId: "00000000-0000-4000-8000-000000000002",
-      detectorId: "00000000-0000-4000-8000-000000000003",
-    }));
+    expect(dup.body.error.issues).toEqual([
+      { path: "key", message: "another laser of this mission already uses this key" },
+    ]);
+    const dangling = await call(
+      team.engineer,
+      "POST",
+      `${M()}/chains`,
+      chainBody({
+        laserId: "00000000-0000-4000-8000-000000000001",
+        resonatorId: "00000000-0000-4000-8000-000000000002",
+        detectorId: "00000000-0000-4000-8000-000000000003",
+      }),
+    );
     expect(dangling.status).toBe(400);
-    expect(dangling.body.error.issues.map((i: { path: string }) => i.path)).toEqual(["laserId", "resonatorId", "detectorId"]);
+    expect(dangling.body.error.issues.map((i: { path: string }) => i.path)).toEqual([
+      "laserId",
+      "resonatorId",
+      "detectorId",
+    ]);
     const inUse = await call(team.engineer, "DELETE", `${M()}/lasers/${lasers[0].id}?version=${lasers[0].version}`);
     expect(inUse.status).toBe(409);
     expect(inUse.body.error.code).toBe("in-use");
@@ -211,7 +262,11 @@ describe("revisions, findings and activity", () => {
     if (first) {
       const q = `chain=${encodeURIComponent(first.chain)}&code=${encodeURIComponent(first.code)}`;
       const f = (await call(team.viewer, "GET", `${M()}/findings?${q}`)).body;
-      expect(f.findings).toEqual(stored.findings.filter((x: { chain: string; code: string }) => x.chain === first.chain && x.code === first.code));
+      expect(f.findings).toEqual(
+        stored.findings.filter(
+          (x: { chain: string; code: string }) => x.chain === first.chain && x.code === first.code,
+        ),
+      );
     }
     const ch = stored.findings.find((x: { channel: string | null }) => x.channel !== null);
     if (ch) {

@@ -39,7 +39,9 @@ const ids: Record<string, string> = {};
 const M = () => `/api/v1/missions/${missionId}`;
 
 /** The owner makes a fresh, unreferenced row of a kind (so any role's delete or update can succeed). */
-async function fresh(kind: "lasers" | "resonators" | "detectors" | "chains" | "channels"): Promise<{ id: string; version: number }> {
+async function fresh(
+  kind: "lasers" | "resonators" | "detectors" | "chains" | "channels",
+): Promise<{ id: string; version: number }> {
   const o = team.owner;
   let body: unknown;
   if (kind === "lasers") body = laserBody();
@@ -161,7 +163,11 @@ const CASES: Case[] = [
     ok: 200,
     prepare: async () => {
       const s = await call(team.owner, "GET", `${M()}/settings`);
-      return { method: "PUT", path: `${M()}/settings`, json: { ...s.body, updatedAt: undefined, guardMHz: 40 + Math.random() } };
+      return {
+        method: "PUT",
+        path: `${M()}/settings`,
+        json: { ...s.body, updatedAt: undefined, guardMHz: 40 + Math.random() },
+      };
     },
   },
   {
@@ -178,7 +184,11 @@ const CASES: Case[] = [
     name: "POST uploads/tuning-map (preview)",
     allowed: EDIT,
     ok: 200,
-    prepare: async () => ({ method: "POST", path: `${M()}/uploads/tuning-map?laserId=${ids.lasers}&gapMHz=15`, file: TUNING_CSV }),
+    prepare: async () => ({
+      method: "POST",
+      path: `${M()}/uploads/tuning-map?laserId=${ids.lasers}&gapMHz=15`,
+      file: TUNING_CSV,
+    }),
   },
   {
     name: "POST uploads/detector-response (preview)",
@@ -230,7 +240,11 @@ describe("workspace routes × roles", () => {
         const req = await c.prepare();
         const r = await send(team[role], req);
         const expected = c.allowed.includes(role) ? c.ok : 403;
-        expect({ role, status: r.status, body: r.status === expected ? null : r.text }).toEqual({ role, status: expected, body: null });
+        expect({ role, status: r.status, body: r.status === expected ? null : r.text }).toEqual({
+          role,
+          status: expected,
+          body: null,
+        });
         if (expected === 403) expect(r.body.error.code).toBe("forbidden");
       }
       const anon = await send(signedOut, await c.prepare());

@@ -49,7 +49,10 @@ describe("seedDemoMission", () => {
 
     const open = result.findings
       .filter((f: { severity: string }) => f.severity !== "info")
-      .map((f: { severity: string; code: string; chain: string; channel: string | null }) => `${f.severity} ${f.code} ${f.chain} ${f.channel}`);
+      .map(
+        (f: { severity: string; code: string; chain: string; channel: string | null }) =>
+          `${f.severity} ${f.code} ${f.chain} ${f.channel}`,
+      );
     expect(open.sort()).toEqual(
       [
         "warning carrier-dominates-lo O2-118 null",

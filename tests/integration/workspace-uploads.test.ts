@@ -34,9 +34,23 @@ vi.setConfig({ testTimeout: 180_000 });
 
 describe("bad files are refused with row and column, nothing saved is lost", () => {
   const tuning = () => `${M()}/uploads/tuning-map?laserId=${laser.id}&gapMHz=15&apply=1`;
-  const cases: { name: string; content: string | Uint8Array; filename?: string; type?: string; expect: { path: string; message: RegExp } }[] = [
-    { name: "a non-number", content: "offsetGHz\n150\n150.01\nabc\n", expect: { path: "row 4, column offsetGHz", message: /"abc" is not a number/ } },
-    { name: "a missing column", content: "setpoint,offset\n1,150\n", expect: { path: "row 1, column offsetGHz", message: /missing column offsetGHz/ } },
+  const cases: {
+    name: string;
+    content: string | Uint8Array;
+    filename?: string;
+    type?: string;
+    expect: { path: string; message: RegExp };
+  }[] = [
+    {
+      name: "a non-number",
+      content: "offsetGHz\n150\n150.01\nabc\n",
+      expect: { path: "row 4, column offsetGHz", message: /"abc" is not a number/ },
+    },
+    {
+      name: "a missing column",
+      content: "setpoint,offset\n1,150\n",
+      expect: { path: "row 1, column offsetGHz", message: /missing column offsetGHz/ },
+    },
     { name: "an empty file", content: "", expect: { path: "file", message: /empty/ } },
     { name: "a header without rows", content: "offsetGHz\n", expect: { path: "file", message: /no data rows/ } },
     { name: "a ragged row", content: "offsetGHz,sp\n150,1\n151\n", expect: { path: "row 3", message: /cells/ } },
@@ -91,7 +105,11 @@ describe("bad files are refused with row and column, nothing saved is lost", () 
     const badGap = await upload(team.engineer, `${M()}/uploads/tuning-map?laserId=${laser.id}&gapMHz=wide`, TUNING_CSV);
     expect(badGap.status).toBe(400);
     expect(badGap.body.error.issues[0].path).toBe("gapMHz");
-    const noLaser = await upload(team.engineer, `${M()}/uploads/tuning-map?laserId=00000000-0000-4000-8000-000000000000&gapMHz=10`, TUNING_CSV);
+    const noLaser = await upload(
+      team.engineer,
+      `${M()}/uploads/tuning-map?laserId=00000000-0000-4000-8000-000000000000&gapMHz=10`,
+      TUNING_CSV,
+    );
     expect(noLaser.status).toBe(404);
   });
 });
@@ -99,7 +117,11 @@ describe("bad files are refused with row and column, nothing saved is lost", () 
 describe("tuning map", () => {
   it("previews merged intervals without saving, then applies them to the laser as a new revision", async () => {
     const before = await revisionCount();
-    const preview = await upload(team.engineer, `${M()}/uploads/tuning-map?laserId=${laser.id}&gapMHz=15`, TUNING_CSV + "6,\n");
+    const preview = await upload(
+      team.engineer,
+      `${M()}/uploads/tuning-map?laserId=${laser.id}&gapMHz=15`,
+      TUNING_CSV + "6,\n",
+    );
     expect(preview.status).toBe(200);
     expect(preview.body).toMatchObject({
       intervals: [
@@ -110,7 +132,11 @@ describe("tuning map", () => {
       rejectedRows: [{ row: 7, message: "no measured offset" }],
     });
     expect(await revisionCount()).toBe(before);
-    const applied = await upload(team.engineer, `${M()}/uploads/tuning-map?laserId=${laser.id}&gapMHz=15&apply=1`, TUNING_CSV);
+    const applied = await upload(
+      team.engineer,
+      `${M()}/uploads/tuning-map?laserId=${laser.id}&gapMHz=15&apply=1`,
+      TUNING_CSV,
+    );
     expect(applied.status).toBe(200);
     expect(applied.body).toMatchObject({ id: laser.id, version: laser.version + 1, reach: preview.body.intervals });
     expect(applied.body.revision.number).toBe(before + 1);
@@ -124,16 +150,31 @@ describe("tuning map", () => {
 
 describe("detector response", () => {
   it("previews the usable band, then applies it", async () => {
-    const preview = await upload(team.engineer, `${M()}/uploads/detector-response?detectorId=${detector.id}&dropDB=3`, DETECTOR_CSV);
+    const preview = await upload(
+      team.engineer,
+      `${M()}/uploads/detector-response?detectorId=${detector.id}&dropDB=3`,
+      DETECTOR_CSV,
+    );
     expect(preview.status).toBe(200);
     expect(preview.body).toMatchObject({ minGHz: 0.05, maxGHz: 6, peakDB: 0 });
-    const applied = await upload(team.engineer, `${M()}/uploads/detector-response?detectorId=${detector.id}&dropDB=1.6&apply=1`, DETECTOR_CSV);
+    const applied = await upload(
+      team.engineer,
+      `${M()}/uploads/detector-response?detectorId=${detector.id}&dropDB=1.6&apply=1`,
+      DETECTOR_CSV,
+    );
     expect(applied.status).toBe(200);
     expect(applied.body).toMatchObject({ id: detector.id, minGHz: 1, maxGHz: 5, version: detector.version + 1 });
-    const bad = await upload(team.engineer, `${M()}/uploads/detector-response?detectorId=${detector.id}&apply=1`, "frequencyGHz,responseDB\n1,0\n2,loud\n");
+    const bad = await upload(
+      team.engineer,
+      `${M()}/uploads/detector-response?detectorId=${detector.id}&apply=1`,
+      "frequencyGHz,responseDB\n1,0\n2,loud\n",
+    );
     expect(bad.status).toBe(400);
     expect(bad.body.error.issues[0]).toMatchObject({ path: "row 3, column responseDB", row: 3, column: "responseDB" });
-    expect((await call(team.viewer, "GET", `${M()}/detectors/${detector.id}`)).body).toMatchObject({ minGHz: 1, maxGHz: 5 });
+    expect((await call(team.viewer, "GET", `${M()}/detectors/${detector.id}`)).body).toMatchObject({
+      minGHz: 1,
+      maxGHz: 5,
+    });
   });
 });
 
@@ -154,9 +195,16 @@ describe("channel list", () => {
     });
     const apply = await upload(team.engineer, `${M()}/uploads/channels?apply=1`, csv);
     expect(apply.status).toBe(400);
-    expect(apply.body.error.issues.map((i: { path: string }) => i.path)).toEqual(["row 3, column chain", "row 3, column centerGHz"]);
+    expect(apply.body.error.issues.map((i: { path: string }) => i.path)).toEqual([
+      "row 3, column chain",
+      "row 3, column centerGHz",
+    ]);
     expect((await call(team.viewer, "GET", `${M()}/channels`)).body.channels).toEqual(before);
-    const unknown = await upload(team.engineer, `${M()}/uploads/channels`, "key,name,chain,centerGHz,bandwidthMHz,integrationMs,antennaK,receiverK,colour\nk,n,A,1,1,1,1,1,red\n");
+    const unknown = await upload(
+      team.engineer,
+      `${M()}/uploads/channels`,
+      "key,name,chain,centerGHz,bandwidthMHz,integrationMs,antennaK,receiverK,colour\nk,n,A,1,1,1,1,1,red\n",
+    );
     expect(unknown.status).toBe(400);
     expect(unknown.body.error.issues[0].path).toBe("row 1, column colour");
   });
@@ -185,6 +233,11 @@ describe("channel list", () => {
     expect(r.body).toMatchObject({ created: 1, updated: 0 });
     const after = (await call(team.viewer, "GET", `${M()}/channels`)).body.channels;
     expect(after.length).toBe(before + 1);
-    expect(after[after.length - 1]).toMatchObject({ key: "new1", name: "wing, far", requiredNedtK: 30, dsbOffsetGHz: null });
+    expect(after[after.length - 1]).toMatchObject({
+      key: "new1",
+      name: "wing, far",
+      requiredNedtK: 30,
+      dsbOffsetGHz: null,
+    });
   });
 });

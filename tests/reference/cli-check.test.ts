@@ -44,7 +44,10 @@ describe("heterolane check (valid documents)", { timeout: 60_000 }, () => {
     expect(out.findings.some((f: { code: string }) => f.code === "pd-overload")).toBe(true);
   });
   it("the worked examples: the same document as checkPlan", () => {
-    for (const file of ["tests/fixtures/plans/ex1-single-channel.plan.json", "tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json"]) {
+    for (const file of [
+      "tests/fixtures/plans/ex1-single-channel.plan.json",
+      "tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json",
+    ]) {
       const r = cli(["check", file]);
       expect(r.code).toBe(0);
       expect(JSON.parse(r.stdout)).toEqual(expectedResult(file));

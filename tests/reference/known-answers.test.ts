@@ -132,6 +132,7 @@ describe("reference tables", () => {
       expect(b.fromMemory).toBe(true);
       expect(b.bandGHz[0]).toBeLessThan(b.bandGHz[1]);
     }
-    for (let i = 1; i < PROTECTED_BANDS.length; i++) expect(PROTECTED_BANDS[i]!.bandGHz[0]).toBeGreaterThan(PROTECTED_BANDS[i - 1]!.bandGHz[1]);
+    for (let i = 1; i < PROTECTED_BANDS.length; i++)
+      expect(PROTECTED_BANDS[i]!.bandGHz[0]).toBeGreaterThan(PROTECTED_BANDS[i - 1]!.bandGHz[1]);
   });
 });

@@ -42,10 +42,14 @@ let lines: AsyncIterator<string> | null = null;
 
 async function worker(): Promise<[ChildProcess, AsyncIterator<string>]> {
   if (!child || !lines) {
-    child = spawn(process.execPath, ["--import", "tsx", "--max-old-space-size=1024", "tests/reference/support/check-plan-worker.ts"], {
-      cwd: ROOT,
-      stdio: ["pipe", "pipe", "ignore"],
-    });
+    child = spawn(
+      process.execPath,
+      ["--import", "tsx", "--max-old-space-size=1024", "tests/reference/support/check-plan-worker.ts"],
+      {
+        cwd: ROOT,
+        stdio: ["pipe", "pipe", "ignore"],
+      },
+    );
     lines = createInterface({ input: child.stdout! })[Symbol.asyncIterator]();
     const first = await lines.next();
     if (first.value !== "ready") throw new Error("the check worker did not start");

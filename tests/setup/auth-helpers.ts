@@ -104,7 +104,11 @@ export interface CapturedMessage {
 }
 
 /** Waits (up to `timeoutMs`) for the newest mail to `to` whose subject matches, from `captured_mail`. */
-export async function readMail(to: string, subjectMatch: RegExp | string, timeoutMs = 10_000): Promise<CapturedMessage> {
+export async function readMail(
+  to: string,
+  subjectMatch: RegExp | string,
+  timeoutMs = 10_000,
+): Promise<CapturedMessage> {
   const deadline = Date.now() + timeoutMs;
   const re = typeof subjectMatch === "string" ? new RegExp(subjectMatch, "i") : subjectMatch;
   for (;;) {
@@ -170,7 +174,8 @@ export async function newVerifiedUser(label = "user"): Promise<TestClient> {
 export async function createTeam(c: TestClient, name = `Test team ${randomBytes(2).toString("hex")}`): Promise<string> {
   const slug = `t-${Date.now().toString(36)}-${randomBytes(3).toString("hex")}`;
   const created = await c.postJson("/api/auth/organization/create", { name, slug });
-  if (created.status !== 200) throw new Error(`team creation answered ${created.status}: ${JSON.stringify(created.body)}`);
+  if (created.status !== 200)
+    throw new Error(`team creation answered ${created.status}: ${JSON.stringify(created.body)}`);
   const teamId: string = created.body.id;
   await setActiveTeam(c, teamId);
   return teamId;

@@ -15,7 +15,13 @@ export const laserBody = (key = uniqueKey("L")) => ({
 
 export const resonatorBody = (key = uniqueKey("R")) => ({ key, fsrGHz: 183.31, loadedQ: 1e7 });
 
-export const detectorBody = (key = uniqueKey("D")) => ({ key, minGHz: 0.05, maxGHz: 6, maxInputMW: 5, sampleRateGHz: null });
+export const detectorBody = (key = uniqueKey("D")) => ({
+  key,
+  minGHz: 0.05,
+  maxGHz: 6,
+  maxInputMW: 5,
+  sampleRateGHz: null,
+});
 
 export const chainBody = (ids: { laserId: string; resonatorId: string; detectorId: string }, key = uniqueKey("C")) => ({
   key,

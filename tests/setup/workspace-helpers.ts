@@ -24,13 +24,25 @@ async function readReply(res: Response): Promise<Reply> {
 }
 
 /** Sends a request (JSON body when given) and reads the answer as JSON when possible. */
-export async function call(c: TestClient, method: string, path: string, json?: unknown, headers?: HeadersInit): Promise<Reply> {
+export async function call(
+  c: TestClient,
+  method: string,
+  path: string,
+  json?: unknown,
+  headers?: HeadersInit,
+): Promise<Reply> {
   const res = await c.fetch(path, { method, ...(json !== undefined ? { json } : {}), headers });
   return readReply(res);
 }
 
 /** Sends raw text as the request body with a content type. */
-export async function callRaw(c: TestClient, method: string, path: string, raw: string, contentType = "application/json"): Promise<Reply> {
+export async function callRaw(
+  c: TestClient,
+  method: string,
+  path: string,
+  raw: string,
+  contentType = "application/json",
+): Promise<Reply> {
   const res = await c.fetch(path, { method, body: raw, headers: { "content-type": contentType } });
   return readReply(res);
 }
@@ -51,7 +63,11 @@ export async function upload(
 }
 
 /** Creates a mission as `c` and imports `plan` into it; returns the mission id. */
-export async function missionWithPlan(c: TestClient, plan: unknown, name = `Test mission ${Math.random().toString(36).slice(2, 8)}`): Promise<string> {
+export async function missionWithPlan(
+  c: TestClient,
+  plan: unknown,
+  name = `Test mission ${Math.random().toString(36).slice(2, 8)}`,
+): Promise<string> {
   const created = await call(c, "POST", "/api/v1/missions", { name });
   if (created.status !== 201) throw new Error(`mission create answered ${created.status}: ${created.text}`);
   const id: string = created.body.id;

@@ -13,7 +13,9 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
   const actor = await requirePageActor("/audit");
   const raw = await searchParams;
   const given = Object.fromEntries(
-    Object.entries(raw).flatMap(([k, v]) => (typeof v === "string" && v !== "" && ["mission", "person", "action", "from", "to"].includes(k) ? [[k, v]] : [])),
+    Object.entries(raw).flatMap(([k, v]) =>
+      typeof v === "string" && v !== "" && ["mission", "person", "action", "from", "to"].includes(k) ? [[k, v]] : [],
+    ),
   );
   if (!roleCan(actor.role, { audit: ["read"] }))
     return (
@@ -76,7 +78,10 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
           Filter
         </button>
         {canExport ? (
-          <a href={`/api/v1/audit.csv${qs ? `?${qs}` : ""}`} className="rounded border border-slate-700 px-3 py-1.5 font-medium">
+          <a
+            href={`/api/v1/audit.csv${qs ? `?${qs}` : ""}`}
+            className="rounded border border-slate-700 px-3 py-1.5 font-medium"
+          >
             Download CSV
           </a>
         ) : null}
@@ -84,7 +89,8 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
       {!parsed.success ? (
         <div role="alert" className="mt-3 rounded border border-rose-300 bg-rose-50 px-3 py-2 text-sm text-rose-900">
           The filter is not valid:{" "}
-          {parsed.error.issues.map((i) => `${i.path.join(".") || "filter"} ${i.message}`).join("; ")}. Showing everything instead.
+          {parsed.error.issues.map((i) => `${i.path.join(".") || "filter"} ${i.message}`).join("; ")}. Showing
+          everything instead.
         </div>
       ) : null}
       <p className="mt-3 text-sm text-slate-700">
@@ -111,7 +117,9 @@ export default async function AuditPage({ searchParams }: { searchParams: Promis
               <td className="py-1 pr-3 font-mono text-xs">{r.action}</td>
               <td className="py-1 pr-3">{r.summary}</td>
               <td className="py-1 whitespace-nowrap">
-                {r.revisionBefore === r.revisionAfter ? (r.revisionAfter ?? "–") : `${r.revisionBefore ?? "–"} → ${r.revisionAfter ?? "–"}`}
+                {r.revisionBefore === r.revisionAfter
+                  ? (r.revisionAfter ?? "–")
+                  : `${r.revisionBefore ?? "–"} → ${r.revisionAfter ?? "–"}`}
               </td>
             </tr>
           ))}

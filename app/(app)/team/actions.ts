@@ -36,7 +36,10 @@ async function run(fn: (h: Headers) => Promise<unknown>, ok: string): Promise<Ac
 }
 
 export async function changeRoleAction(_prev: ActionState, formData: FormData): Promise<ActionState> {
-  return run((h) => changeMemberRole(h, { memberId: formData.get("memberId"), role: formData.get("role") }), "Role changed.");
+  return run(
+    (h) => changeMemberRole(h, { memberId: formData.get("memberId"), role: formData.get("role") }),
+    "Role changed.",
+  );
 }
 
 export async function removeMemberAction(_prev: ActionState, formData: FormData): Promise<ActionState> {

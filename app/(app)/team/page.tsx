@@ -15,7 +15,11 @@ const ROLE_TEXT: Record<string, string> = {
   viewer: "reads missions, plans, findings, reports and the audit trail",
 };
 
-export default async function TeamPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function TeamPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   await requirePageActor("/team");
   const { actor, team, members, invitations } = await getTeam(await headers());
   const { invited } = await searchParams;
@@ -102,16 +106,24 @@ export default async function TeamPage({ searchParams }: { searchParams: Promise
           <InviteForm action={inviteAction} roles={inviteRoles} />
           {invitations.length ? (
             <>
-              <h3 className="mb-2 mt-4 text-xs font-semibold uppercase tracking-wide text-ink-soft">Pending invitations</h3>
+              <h3 className="mb-2 mt-4 text-xs font-semibold uppercase tracking-wide text-ink-soft">
+                Pending invitations
+              </h3>
               <ul className="flex flex-col divide-y divide-ink/10 text-sm">
                 {invitations.map((i) => (
                   <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-1.5">
                     <span>
                       {i.email} as <strong>{i.role}</strong>
-                      <span className="ml-2 text-xs text-ink-soft">expires {new Date(i.expiresAt).toISOString().slice(0, 16).replace("T", " ")} UTC</span>
+                      <span className="ml-2 text-xs text-ink-soft">
+                        expires {new Date(i.expiresAt).toISOString().slice(0, 16).replace("T", " ")} UTC
+                      </span>
                     </span>
                     {canCancel ? (
-                      <ActionButton action={cancelInvitationAction} fields={{ invitationId: i.id }} label="Cancel invitation" />
+                      <ActionButton
+                        action={cancelInvitationAction}
+                        fields={{ invitationId: i.id }}
+                        label="Cancel invitation"
+                      />
                     ) : null}
                   </li>
                 ))}

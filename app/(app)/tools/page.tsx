@@ -1,9 +1,10 @@
 import type { Metadata } from "next";
-import { ToolsBoard } from "./_components/ToolsBoard";
+import { ToolsBoard } from "./_components/tools-board";
 
 export const metadata: Metadata = {
   title: "Engineering helpers",
-  description: "Wavelength and grid, resonator sizing, drift budget and receiver-noise helpers with their working and sources.",
+  description:
+    "Wavelength and grid, resonator sizing, drift budget and receiver-noise helpers with their working and sources.",
 };
 
 export default function ToolsPage() {
@@ -11,8 +12,8 @@ export default function ToolsPage() {
     <main className="mx-auto max-w-6xl px-6 py-8">
       <h1 className="text-2xl font-semibold tracking-tight text-ink">Engineering helpers</h1>
       <p className="mt-2 max-w-3xl text-sm text-ink-soft">
-        Small calculators for the numbers a plan needs: each shows its formula, inputs and sources. In the mission workspace
-        the same helpers sit beside the fields they feed, and <em>Apply</em> fills the field.
+        Small calculators for the numbers a plan needs: each shows its formula, inputs and sources. In the mission
+        workspace the same helpers sit beside the fields they feed, and <em>Apply</em> fills the field.
       </p>
       <ToolsBoard />
     </main>

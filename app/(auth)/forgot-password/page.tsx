@@ -5,7 +5,11 @@ import { forgotPasswordAction } from "../actions";
 
 export const metadata: Metadata = { title: "Forgot password" };
 
-export default async function ForgotPasswordPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function ForgotPasswordPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const { sent } = await searchParams;
   if (sent) {
     return (
@@ -24,7 +28,9 @@ export default async function ForgotPasswordPage({ searchParams }: { searchParam
   return (
     <>
       <h1 className="mb-1 text-2xl font-semibold tracking-tight">Forgot your password?</h1>
-      <p className="mb-5 text-sm text-ink-soft">Enter your e-mail address and we send you a link to choose a new one.</p>
+      <p className="mb-5 text-sm text-ink-soft">
+        Enter your e-mail address and we send you a link to choose a new one.
+      </p>
       <ForgotPasswordForm action={forgotPasswordAction} />
       <p className="mt-5 text-sm">
         <Link href="/sign-in" className="underline">

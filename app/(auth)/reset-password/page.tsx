@@ -6,7 +6,11 @@ import { resetPasswordAction } from "../actions";
 export const metadata: Metadata = { title: "Choose a new password" };
 
 /** better-auth's reset link redirects here with `?token=` (or `?error=INVALID_TOKEN` when expired or used). */
-export default async function ResetPasswordPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function ResetPasswordPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const { token, error } = await searchParams;
   if (error || !token) {
     return (

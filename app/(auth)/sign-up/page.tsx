@@ -5,12 +5,18 @@ import { signUpAction } from "../actions";
 
 export const metadata: Metadata = { title: "Create an account" };
 
-export default async function SignUpPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function SignUpPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const { next, email } = await searchParams;
   return (
     <>
       <h1 className="mb-1 text-2xl font-semibold tracking-tight">Create an account</h1>
-      <p className="mb-5 text-sm text-ink-soft">We send a link to confirm your e-mail address before you can sign in.</p>
+      <p className="mb-5 text-sm text-ink-soft">
+        We send a link to confirm your e-mail address before you can sign in.
+      </p>
       <SignUpForm action={signUpAction} next={next} email={email} />
       <p className="mt-5 text-sm">
         Already have an account?{" "}

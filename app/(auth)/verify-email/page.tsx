@@ -4,7 +4,11 @@ import { resendVerificationAction } from "../actions";
 
 export const metadata: Metadata = { title: "Confirm your e-mail address" };
 
-export default async function VerifyNoticePage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function VerifyNoticePage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const { email, resent } = await searchParams;
   return (
     <>
@@ -19,7 +23,9 @@ export default async function VerifyNoticePage({ searchParams }: { searchParams:
         ) : null}
         . Open it to confirm your address; you are signed in right after.
       </p>
-      <p className="mb-6 text-sm text-ink-soft">The link is valid for one hour. Nothing arrived? Check the spam folder, or ask for a new link:</p>
+      <p className="mb-6 text-sm text-ink-soft">
+        The link is valid for one hour. Nothing arrived? Check the spam folder, or ask for a new link:
+      </p>
       <ResendVerificationForm action={resendVerificationAction} email={email} />
     </>
   );

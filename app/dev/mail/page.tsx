@@ -24,7 +24,8 @@ export default async function DevMailPage() {
             <header className="border-b border-ink/10 px-4 py-2 text-sm">
               <p className="font-semibold">{m.subject}</p>
               <p className="text-xs text-ink-soft">
-                to {m.recipients.join(", ")} · from {m.sender} · {m.receivedAt.toISOString().replace("T", " ").slice(0, 19)} UTC
+                to {m.recipients.join(", ")} · from {m.sender} ·{" "}
+                {m.receivedAt.toISOString().replace("T", " ").slice(0, 19)} UTC
               </p>
             </header>
             <div className="whitespace-pre-wrap break-words px-4 py-3 font-mono text-xs leading-relaxed">

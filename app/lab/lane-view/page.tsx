@@ -1,5 +1,5 @@
 import { notFound } from "next/navigation";
-import { LabLaneView } from "./_components/LabLaneView";
+import { LabLaneView } from "./_components/lab-lane-view";
 
 export const metadata = { title: "Lane view lab" };
 export const dynamic = "force-dynamic";
@@ -16,7 +16,9 @@ export default async function LaneViewLab({ searchParams }: { searchParams: Prom
   return (
     <main className="mx-auto max-w-[1400px] p-4">
       <h1 className="mb-1 text-lg font-semibold text-ink">Lane view lab</h1>
-      <p className="mb-4 text-xs text-ink-soft">Development page, no database. Demo data: every plan here is invented.</p>
+      <p className="mb-4 text-xs text-ink-soft">
+        Development page, no database. Demo data: every plan here is invented.
+      </p>
       <LabLaneView name={plan ?? "demo64"} />
     </main>
   );

@@ -21,7 +21,12 @@ export function CreateTeamForm({ action }: { action: FormAction }) {
   return (
     <form {...getFormProps(form)} action={formAction} noValidate className="flex flex-col gap-2">
       <FormMessage id={form.errorId} errors={form.errors} />
-      <Field meta={fields.name} label="Team name" hint="For example the instrument or the group building it." autoFocus />
+      <Field
+        meta={fields.name}
+        label="Team name"
+        hint="For example the instrument or the group building it."
+        autoFocus
+      />
       <button type="submit" className={primaryButton} disabled={pending}>
         {pending ? "Creating…" : "Create team"}
       </button>

@@ -18,7 +18,12 @@ import {
 export type FormAction = (prev: unknown, formData: FormData) => Promise<SubmissionResult<string[]> | undefined>;
 
 /** conform + zod form state shared by every auth form: validate on blur, re-validate on input, server reply kept. */
-function useZodForm<S extends z.ZodType>(schema: S, action: FormAction, id: string, defaultValue?: Record<string, string>) {
+function useZodForm<S extends z.ZodType>(
+  schema: S,
+  action: FormAction,
+  id: string,
+  defaultValue?: Record<string, string>,
+) {
   const [lastResult, formAction, pending] = useActionState(action, undefined);
   const [form, fields] = useForm({
     id,
@@ -31,11 +36,21 @@ function useZodForm<S extends z.ZodType>(schema: S, action: FormAction, id: stri
     onSubmit: submitKeepingInput(formAction),
   });
   // Every auth form field is a single string; one cast instead of one per form.
-  return { form, fields: fields as unknown as { [K in keyof z.input<S>]-?: FieldMetadata<string | undefined> }, formAction, pending };
+  return {
+    form,
+    fields: fields as unknown as { [K in keyof z.input<S>]-?: FieldMetadata<string | undefined> },
+    formAction,
+    pending,
+  };
 }
 
 export function SignUpForm({ action, next, email }: { action: FormAction; next?: string; email?: string }) {
-  const { form, fields, formAction, pending } = useZodForm(SignUpSchema, action, "sign-up", email ? { email } : undefined);
+  const { form, fields, formAction, pending } = useZodForm(
+    SignUpSchema,
+    action,
+    "sign-up",
+    email ? { email } : undefined,
+  );
   return (
     <form {...getFormProps(form)} action={formAction} noValidate className="flex flex-col gap-2">
       <FormMessage id={form.errorId} errors={form.errors} />
@@ -57,7 +72,12 @@ export function SignUpForm({ action, next, email }: { action: FormAction; next?:
 }
 
 export function SignInForm({ action, next, email }: { action: FormAction; next?: string; email?: string }) {
-  const { form, fields, formAction, pending } = useZodForm(SignInSchema, action, "sign-in", email ? { email } : undefined);
+  const { form, fields, formAction, pending } = useZodForm(
+    SignInSchema,
+    action,
+    "sign-in",
+    email ? { email } : undefined,
+  );
   return (
     <form {...getFormProps(form)} action={formAction} noValidate className="flex flex-col gap-2">
       <FormMessage id={form.errorId} errors={form.errors} />
@@ -112,7 +132,12 @@ export function ResetPasswordForm({ action, token }: { action: FormAction; token
 }
 
 export function ResendVerificationForm({ action, email }: { action: FormAction; email?: string }) {
-  const { form, fields, formAction, pending } = useZodForm(ResendVerificationSchema, action, "resend-verification", email ? { email } : undefined);
+  const { form, fields, formAction, pending } = useZodForm(
+    ResendVerificationSchema,
+    action,
+    "resend-verification",
+    email ? { email } : undefined,
+  );
   return (
     <form {...getFormProps(form)} action={formAction} noValidate className="flex flex-col gap-2">
       <FormMessage id={form.errorId} errors={form.errors} />

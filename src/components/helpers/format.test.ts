@@ -64,9 +64,15 @@ describe("parseNumberField", () => {
     expect(parseNumberField("", "Carrier")).toEqual({ ok: false, message: "Carrier is required" });
     expect(parseNumberField("abc", "Carrier")).toEqual({ ok: false, message: "Carrier must be a number" });
     expect(parseNumberField("1e999", "Q")).toEqual({ ok: false, message: "Q is too large" });
-    expect(parseNumberField("0", "Q", { min: 0, exclusiveMin: true })).toEqual({ ok: false, message: "Q must be greater than 0" });
+    expect(parseNumberField("0", "Q", { min: 0, exclusiveMin: true })).toEqual({
+      ok: false,
+      message: "Q must be greater than 0",
+    });
     expect(parseNumberField("-1", "Loss", { min: 0 })).toEqual({ ok: false, message: "Loss must be at least 0" });
-    expect(parseNumberField("101", "Efficiency", { max: 100 })).toEqual({ ok: false, message: "Efficiency must be at most 100" });
+    expect(parseNumberField("101", "Efficiency", { max: 100 })).toEqual({
+      ok: false,
+      message: "Efficiency must be at most 100",
+    });
     expect(parseNumberField("1.5", "N", { integer: true })).toEqual({ ok: false, message: "N must be a whole number" });
   });
 

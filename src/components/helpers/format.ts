@@ -66,7 +66,10 @@ export interface FieldRules {
  * spaces, a Unicode minus and exponents ("1e8"); the message names the field.
  */
 export function parseNumberField(text: string, label: string, rules: FieldRules = {}): FieldParse {
-  const trimmed = text.trim().replace(/\u2212/g, "-").replace(/^(-?\d*),(\d+)$/, "$1.$2");
+  const trimmed = text
+    .trim()
+    .replace(/\u2212/g, "-")
+    .replace(/^(-?\d*),(\d+)$/, "$1.$2");
   if (trimmed === "") return { ok: false, message: `${label} is required` };
   if (!/^[-+]?(\d+(\.\d*)?|\.\d+)([eE][-+]?\d+)?$/.test(trimmed)) {
     return { ok: false, message: `${label} must be a number` };
@@ -76,10 +79,14 @@ export function parseNumberField(text: string, label: string, rules: FieldRules 
   if (rules.integer && !Number.isInteger(value)) return { ok: false, message: `${label} must be a whole number` };
   if (rules.min !== undefined) {
     if (rules.exclusiveMin ? !(value > rules.min) : !(value >= rules.min)) {
-      return { ok: false, message: `${label} must be ${rules.exclusiveMin ? "greater than" : "at least"} ${rules.min}` };
+      return {
+        ok: false,
+        message: `${label} must be ${rules.exclusiveMin ? "greater than" : "at least"} ${rules.min}`,
+      };
     }
   }
-  if (rules.max !== undefined && value > rules.max) return { ok: false, message: `${label} must be at most ${rules.max}` };
+  if (rules.max !== undefined && value > rules.max)
+    return { ok: false, message: `${label} must be at most ${rules.max}` };
   return { ok: true, value };
 }
 

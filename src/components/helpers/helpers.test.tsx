@@ -1,18 +1,21 @@
 import { renderToString } from "react-dom/server";
 import { describe, expect, it } from "vitest";
-import { DriftBudget } from "./DriftBudget";
-import { OpticalFrequency } from "./OpticalFrequency";
-import { ReceiverNoise } from "./ReceiverNoise";
-import { ResonatorSizing } from "./ResonatorSizing";
-import { WavelengthGrid } from "./WavelengthGrid";
-import { ChannelNotation } from "./ChannelNotation";
+import { DriftBudget } from "./drift-budget";
+import { OpticalFrequency } from "./optical-frequency";
+import { ReceiverNoise } from "./receiver-noise";
+import { ResonatorSizing } from "./resonator-sizing";
+import { WavelengthGrid } from "./wavelength-grid";
+import { ChannelNotation } from "./channel-notation";
 
 /** Text of the element carrying data-testid, tags stripped (server render, no DOM needed). */
 function byTestId(html: string, id: string): string {
   const m = new RegExp(`data-testid="${id}"[^>]*>(.*?)</span></span>|data-testid="${id}"[^>]*>(.*?)</span>`).exec(html);
   const inner = m?.[1] ?? m?.[2];
   if (inner === undefined) throw new Error(`no element with data-testid=${id}`);
-  return inner.replace(/<[^>]+>/g, "").replace(/<!-- -->/g, "").replace(/&#x27;/g, "'");
+  return inner
+    .replace(/<[^>]+>/g, "")
+    .replace(/<!-- -->/g, "")
+    .replace(/&#x27;/g, "'");
 }
 
 describe("helper components (first render, server-side)", () => {
@@ -28,7 +31,14 @@ describe("helper components (first render, server-side)", () => {
   });
 
   it("ResonatorSizing sizes a 183.31 GHz FSR disc and shows the thermal shifts", () => {
-    const html = renderToString(<ResonatorSizing initialFsrGHz={183.31} initialCarrierTHz={193.4} initialTemperatureC={25} initialLoadedQ={1e8} />);
+    const html = renderToString(
+      <ResonatorSizing
+        initialFsrGHz={183.31}
+        initialCarrierTHz={193.4}
+        initialTemperatureC={25}
+        initialLoadedQ={1e8}
+      />,
+    );
     // derived (domain reference §2.1): R ≈ 119.3 µm for 183.31 GHz
     expect(Number(byTestId(html, "rs-radius").replace(/[^\d.]/g, ""))).toBeCloseTo(119.27, 1);
     // derived (§2.2): 1.934 MHz at Q 1e8, 193.4 THz
@@ -40,7 +50,9 @@ describe("helper components (first render, server-side)", () => {
   });
 
   it("ResonatorSizing uses a measured group index when given", () => {
-    const html = renderToString(<ResonatorSizing initialRadiusUm={1000} initialMeasuredGroupIndex={2.1824} onApply={() => {}} />);
+    const html = renderToString(
+      <ResonatorSizing initialRadiusUm={1000} initialMeasuredGroupIndex={2.1824} onApply={() => {}} />,
+    );
     // derived (§2.1): R = 1 mm, n_g = 2.1824 → 21.86 GHz
     expect(byTestId(html, "rs-fsr")).toMatch(/^21\.86/);
     expect(html).toContain(">Apply FSR and Q<");
@@ -48,7 +60,14 @@ describe("helper components (first render, server-side)", () => {
 
   it("DriftBudget adds the terms and rounds the applied value up", () => {
     const html = renderToString(
-      <DriftBudget initialLaser2MHz={10} initialResonatorMilliK={1} initialLockOffsetMHz={0.5} initialStepMHz={10} initialModeShiftGHzPerK={-6.2} onApply={() => {}} />,
+      <DriftBudget
+        initialLaser2MHz={10}
+        initialResonatorMilliK={1}
+        initialLockOffsetMHz={0.5}
+        initialStepMHz={10}
+        initialModeShiftGHzPerK={-6.2}
+        onApply={() => {}}
+      />,
     );
     // worked by hand: 10 + 6.2 + 0.5 + 5 = 21.7 MHz
     expect(byTestId(html, "db-drift")).toMatch(/21\.700/);
@@ -57,7 +76,12 @@ describe("helper components (first render, server-side)", () => {
 
   it("ReceiverNoise is marked as a design estimate and shows the quantum limit", () => {
     const html = renderToString(
-      <ReceiverNoise initialRfGHz={183.31} initialPhotonEfficiency={0.01} initialOpticalEfficiency={0.5} initialFrontEnd={null} />,
+      <ReceiverNoise
+        initialRfGHz={183.31}
+        initialPhotonEfficiency={0.01}
+        initialOpticalEfficiency={0.5}
+        initialFrontEnd={null}
+      />,
     );
     expect(html).toContain("Design estimate");
     // exact SI constants: h·f/k = 8.797 K at 183.31 GHz

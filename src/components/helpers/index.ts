@@ -1,6 +1,6 @@
-export { WavelengthGrid, type WavelengthGridProps } from "./WavelengthGrid";
-export { ResonatorSizing, type ResonatorSizingProps, type ResonatorApplyValue } from "./ResonatorSizing";
-export { DriftBudget, type DriftBudgetProps } from "./DriftBudget";
-export { ReceiverNoise, type ReceiverNoiseProps } from "./ReceiverNoise";
-export { OpticalFrequency, type OpticalFrequencyProps } from "./OpticalFrequency";
-export { ChannelNotation, type ChannelNotationProps } from "./ChannelNotation";
+export { WavelengthGrid, type WavelengthGridProps } from "./wavelength-grid";
+export { ResonatorSizing, type ResonatorSizingProps, type ResonatorApplyValue } from "./resonator-sizing";
+export { DriftBudget, type DriftBudgetProps } from "./drift-budget";
+export { ReceiverNoise, type ReceiverNoiseProps } from "./receiver-noise";
+export { OpticalFrequency, type OpticalFrequencyProps } from "./optical-frequency";
+export { ChannelNotation, type ChannelNotationProps } from "./channel-notation";

@@ -45,7 +45,14 @@ export function chartLayout(model: LaneModel): ChartLayout {
     boxes.push({ lane, y, h, rowH });
     y += h + LANE_GAP;
   }
-  return { ghzAxisY: AXIS_H, ifAxisY: ifAxisY + AXIS_H, boxes, height: y + 4, ghzSection: [0, ghzEnd], ifSection: [ghzEnd, y] };
+  return {
+    ghzAxisY: AXIS_H,
+    ifAxisY: ifAxisY + AXIS_H,
+    boxes,
+    height: y + 4,
+    ghzSection: [0, ghzEnd],
+    ifSection: [ghzEnd, y],
+  };
 }
 
 export const ROW_PAD = PAD;

@@ -1,6 +1,13 @@
 import type { EntityChange, FieldChange, Json } from "@/lib/review";
 
-type FindingView = { id: string; code: string; severity: string; chain: string; channel: string | null; message: string };
+type FindingView = {
+  id: string;
+  code: string;
+  severity: string;
+  chain: string;
+  channel: string | null;
+  message: string;
+};
 
 export interface CompareViewProps {
   from: { number: number; status: string; authorName: string; createdAt: string };
@@ -19,7 +26,8 @@ const SECTION: Record<string, string> = {
   channels: "Channel",
 };
 
-const show = (v: Json | undefined) => (v === undefined ? "—" : v === null ? "none" : typeof v === "string" ? v : JSON.stringify(v));
+const show = (v: Json | undefined) =>
+  v === undefined ? "—" : v === null ? "none" : typeof v === "string" ? v : JSON.stringify(v);
 
 function FieldRow({ f }: { f: FieldChange }) {
   return (
@@ -83,16 +91,30 @@ export function CompareView({ from, to, entities, findings }: CompareViewProps) 
       <h2 className="mt-6 text-lg font-semibold">Findings</h2>
       <div className="grid grid-cols-2 gap-4">
         <div>
-          <h3 className="text-sm font-semibold">Resolved (only in revision {from.number}): {findings.resolved.length}</h3>
-          <ul>{findings.resolved.map((f) => <FindingItem key={f.id} f={f} />)}</ul>
+          <h3 className="text-sm font-semibold">
+            Resolved (only in revision {from.number}): {findings.resolved.length}
+          </h3>
+          <ul>
+            {findings.resolved.map((f) => (
+              <FindingItem key={f.id} f={f} />
+            ))}
+          </ul>
         </div>
         <div>
-          <h3 className="text-sm font-semibold">New (only in revision {to.number}): {findings.new.length}</h3>
-          <ul>{findings.new.map((f) => <FindingItem key={f.id} f={f} />)}</ul>
+          <h3 className="text-sm font-semibold">
+            New (only in revision {to.number}): {findings.new.length}
+          </h3>
+          <ul>
+            {findings.new.map((f) => (
+              <FindingItem key={f.id} f={f} />
+            ))}
+          </ul>
         </div>
       </div>
       <details className="mt-3">
-        <summary className="cursor-pointer text-sm font-semibold">Unchanged findings: {findings.unchanged.length}</summary>
+        <summary className="cursor-pointer text-sm font-semibold">
+          Unchanged findings: {findings.unchanged.length}
+        </summary>
         <ul>
           {findings.unchanged.map((p) => (
             <FindingItem key={p.after.id} f={p.after} />

@@ -11,7 +11,11 @@ type Action = (prev: unknown, formData: FormData) => Promise<unknown>;
 
 const OPTIONS: { name: keyof Prefs; label: string; hint: string }[] = [
   { name: "reviewRequested", label: "A plan is submitted for review", hint: "Sent to the team's leads and owners." },
-  { name: "reviewDecided", label: "My submitted plan is baselined or sent back", hint: "Sent to whoever submitted or wrote the revision." },
+  {
+    name: "reviewDecided",
+    label: "My submitted plan is baselined or sent back",
+    hint: "Sent to whoever submitted or wrote the revision.",
+  },
   { name: "mentioned", label: "Someone mentions me in a comment", hint: "@your name or @your e-mail address." },
 ];
 
@@ -48,7 +52,11 @@ export function NotificationForm({ initial, action }: { initial: Prefs; action: 
         );
       })}
       <div className="flex items-center gap-3">
-        <button type="submit" disabled={pending} className="rounded bg-slate-900 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50">
+        <button
+          type="submit"
+          disabled={pending}
+          className="rounded bg-slate-900 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50"
+        >
           Save
         </button>
         {saved && !pending ? (

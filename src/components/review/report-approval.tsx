@@ -26,7 +26,11 @@ const day = (iso: string | null) => (iso ? `${iso.slice(0, 16).replace("T", " ")
 
 export function ReportApproval({ approval }: { approval: ReportApprovalData | null }) {
   return (
-    <section aria-labelledby="approval-heading" className="mt-8 break-inside-avoid border-t-2 border-slate-800 pt-4" data-testid="report-approval">
+    <section
+      aria-labelledby="approval-heading"
+      className="mt-8 break-inside-avoid border-t-2 border-slate-800 pt-4"
+      data-testid="report-approval"
+    >
       <h2 id="approval-heading" className="text-lg font-semibold text-slate-900">
         Approval
       </h2>
@@ -52,7 +56,11 @@ export function ReportApproval({ approval }: { approval: ReportApprovalData | nu
           </dl>
           <h3 className="mt-3 text-sm font-semibold text-slate-900">Waivers of error findings</h3>
           {approval.waivers.length === 0 ? (
-            <p className="text-sm text-slate-700">{approval.state === "baselined" ? "None: the baseline had no open error finding." : "None recorded for an approval."}</p>
+            <p className="text-sm text-slate-700">
+              {approval.state === "baselined"
+                ? "None: the baseline had no open error finding."
+                : "None recorded for an approval."}
+            </p>
           ) : (
             <table className="mt-1 w-full border-collapse text-left text-sm">
               <thead>

@@ -66,7 +66,10 @@ export function ReviewPanel({ missionId, can }: { missionId: string; can: Review
         ) : null}
         <span className="ml-auto flex gap-3 text-sm">
           {d?.revision && d.revision.number > 1 ? (
-            <Link className="text-sky-800 underline" href={`/missions/${missionId}/compare?from=${d.baselineRevision ?? d.revision.number - 1}&to=${d.revision.number}`}>
+            <Link
+              className="text-sky-800 underline"
+              href={`/missions/${missionId}/compare?from=${d.baselineRevision ?? d.revision.number - 1}&to=${d.revision.number}`}
+            >
               Compare revisions
             </Link>
           ) : null}
@@ -96,7 +99,8 @@ function Actions({ missionId, data, can }: { missionId: string; data: ReviewOver
   const noteId = useId();
   const rev = data.revision?.number;
   const unwaived = data.errors.filter((e) => !e.waiver).length;
-  const canSubmitNow = can.canSubmit && rev !== undefined && (data.state === "draft" || data.state === "changes-requested");
+  const canSubmitNow =
+    can.canSubmit && rev !== undefined && (data.state === "draft" || data.state === "changes-requested");
   const canDecideNow = can.canDecide && data.state === "in-review";
   if (!canSubmitNow && !canDecideNow)
     return (
@@ -115,10 +119,22 @@ function Actions({ missionId, data, can }: { missionId: string; data: ReviewOver
       <label htmlFor={noteId} className="block text-sm font-medium text-slate-800">
         Note {canDecideNow ? "(required when requesting changes)" : "(optional)"}
       </label>
-      <textarea id={noteId} value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={2000} className="mt-1 w-full rounded border border-slate-400 px-2 py-1 text-sm" />
+      <textarea
+        id={noteId}
+        value={note}
+        onChange={(e) => setNote(e.target.value)}
+        rows={2}
+        maxLength={2000}
+        className="mt-1 w-full rounded border border-slate-400 px-2 py-1 text-sm"
+      />
       <div className="mt-2 flex flex-wrap gap-2">
         {canSubmitNow ? (
-          <button type="button" disabled={submit.isPending} onClick={() => submit.mutate({ revision: rev, note: note || undefined }, { onSuccess: () => setNote("") })} className="rounded bg-slate-900 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50">
+          <button
+            type="button"
+            disabled={submit.isPending}
+            onClick={() => submit.mutate({ revision: rev, note: note || undefined }, { onSuccess: () => setNote("") })}
+            className="rounded bg-slate-900 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50"
+          >
             Submit revision {rev} for review
           </button>
         ) : null}
@@ -127,7 +143,12 @@ function Actions({ missionId, data, can }: { missionId: string; data: ReviewOver
             <button
               type="button"
               disabled={decide.isPending}
-              onClick={() => decide.mutate({ decision: "baseline", revision: rev, note: note || undefined }, { onSuccess: () => setNote("") })}
+              onClick={() =>
+                decide.mutate(
+                  { decision: "baseline", revision: rev, note: note || undefined },
+                  { onSuccess: () => setNote("") },
+                )
+              }
               className="rounded bg-emerald-800 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50"
             >
               Baseline revision {rev}
@@ -135,7 +156,12 @@ function Actions({ missionId, data, can }: { missionId: string; data: ReviewOver
             <button
               type="button"
               disabled={decide.isPending}
-              onClick={() => decide.mutate({ decision: "request-changes", revision: rev, note: note || undefined }, { onSuccess: () => setNote("") })}
+              onClick={() =>
+                decide.mutate(
+                  { decision: "request-changes", revision: rev, note: note || undefined },
+                  { onSuccess: () => setNote("") },
+                )
+              }
               className="rounded border border-rose-700 px-3 py-1.5 text-sm font-medium text-rose-800 disabled:opacity-50"
             >
               Request changes
@@ -145,7 +171,8 @@ function Actions({ missionId, data, can }: { missionId: string; data: ReviewOver
       </div>
       {canDecideNow && unwaived > 0 ? (
         <p className="mt-2 text-sm text-amber-900">
-          {unwaived} open error finding{unwaived === 1 ? "" : "s"} without a waiver: record a waiver for each below, or request changes.
+          {unwaived} open error finding{unwaived === 1 ? "" : "s"} without a waiver: record a waiver for each below, or
+          request changes.
         </p>
       ) : null}
       <ErrorLine error={submit.error ?? decide.error} />
@@ -169,8 +196,18 @@ function WaiverForm({ missionId, findingId }: { missionId: string; findingId: st
         Why is this error acceptable?
       </label>
       <div className="flex gap-2">
-        <input id={id} value={reason} onChange={(e) => setReason(e.target.value)} aria-invalid={waive.error ? true : undefined} className="min-w-0 flex-1 rounded border border-slate-400 px-2 py-1 text-sm" />
-        <button type="submit" disabled={waive.isPending} className="rounded border border-slate-700 px-2 py-1 text-sm font-medium">
+        <input
+          id={id}
+          value={reason}
+          onChange={(e) => setReason(e.target.value)}
+          aria-invalid={waive.error ? true : undefined}
+          className="min-w-0 flex-1 rounded border border-slate-400 px-2 py-1 text-sm"
+        />
+        <button
+          type="submit"
+          disabled={waive.isPending}
+          className="rounded border border-slate-700 px-2 py-1 text-sm font-medium"
+        >
           Record waiver
         </button>
       </div>
@@ -181,7 +218,8 @@ function WaiverForm({ missionId, findingId }: { missionId: string; findingId: st
 
 function OpenErrors({ missionId, data, can }: { missionId: string; data: ReviewOverview; can: ReviewAbilities }) {
   const withdraw = useWithdrawWaiverMutation(missionId);
-  if (data.errors.length === 0) return <p className="mt-4 text-sm text-slate-700">No open error findings in this revision.</p>;
+  if (data.errors.length === 0)
+    return <p className="mt-4 text-sm text-slate-700">No open error findings in this revision.</p>;
   return (
     <div className="mt-4">
       <h3 className="text-sm font-semibold text-slate-900">Open error findings and waivers</h3>
@@ -197,7 +235,11 @@ function OpenErrors({ missionId, data, can }: { missionId: string; data: ReviewO
               <p className="mt-1 text-sm text-emerald-900">
                 Waived by {e.waiver.waivedBy} on {when(e.waiver.waivedAt)}: “{e.waiver.reason}”
                 {can.canWaive && data.state !== "baselined" ? (
-                  <button type="button" onClick={() => withdraw.mutate(e.waiver!.id)} className="ml-2 text-xs text-rose-800 underline">
+                  <button
+                    type="button"
+                    onClick={() => withdraw.mutate(e.waiver!.id)}
+                    className="ml-2 text-xs text-rose-800 underline"
+                  >
                     Withdraw
                   </button>
                 ) : null}
@@ -217,14 +259,20 @@ function OpenErrors({ missionId, data, can }: { missionId: string; data: ReviewO
 
 function History({ data }: { data: ReviewOverview }) {
   if (data.reviews.length === 0) return null;
-  const label: Record<string, string> = { open: "waiting for a decision", baselined: "baselined", "changes-requested": "changes requested", withdrawn: "withdrawn by an edit" };
+  const label: Record<string, string> = {
+    open: "waiting for a decision",
+    baselined: "baselined",
+    "changes-requested": "changes requested",
+    withdrawn: "withdrawn by an edit",
+  };
   return (
     <div className="mt-4">
       <h3 className="text-sm font-semibold text-slate-900">Reviews</h3>
       <ul className="mt-1 space-y-1 text-sm text-slate-800">
         {data.reviews.map((r) => (
           <li key={r.id}>
-            Revision {r.revision}: submitted by {r.submittedBy} ({when(r.submittedAt)}){r.note ? ` “${r.note}”` : ""} — {label[r.outcome] ?? r.outcome}
+            Revision {r.revision}: submitted by {r.submittedBy} ({when(r.submittedAt)}){r.note ? ` “${r.note}”` : ""} —{" "}
+            {label[r.outcome] ?? r.outcome}
             {r.decidedBy && r.outcome !== "withdrawn" ? ` by ${r.decidedBy}` : ""}
             {r.decisionNote && r.outcome !== "withdrawn" ? `: “${r.decisionNote}”` : ""}
             {r.waivers.length ? ` (${r.waivers.length} waiver${r.waivers.length === 1 ? "" : "s"})` : ""}
@@ -242,7 +290,9 @@ function Comments({ missionId, data, can }: { missionId: string; data: ReviewOve
   const [target, setTarget] = useState("");
   const bodyId = useId();
   const targetId = useId();
-  const findingName = new Map(data.errors.map((e) => [e.id, `${e.code} (${e.chain}${e.channel ? `/${e.channel}` : ""})`]));
+  const findingName = new Map(
+    data.errors.map((e) => [e.id, `${e.code} (${e.chain}${e.channel ? `/${e.channel}` : ""})`]),
+  );
   return (
     <div className="mt-4">
       <h3 className="text-sm font-semibold text-slate-900">Comments</h3>
@@ -282,7 +332,12 @@ function Comments({ missionId, data, can }: { missionId: string; data: ReviewOve
           <label htmlFor={targetId} className="block text-xs font-medium text-slate-800">
             On
           </label>
-          <select id={targetId} value={target} onChange={(e) => setTarget(e.target.value)} className="rounded border border-slate-400 px-2 py-1 text-sm">
+          <select
+            id={targetId}
+            value={target}
+            onChange={(e) => setTarget(e.target.value)}
+            className="rounded border border-slate-400 px-2 py-1 text-sm"
+          >
             <option value="">revision {data.revision.number} as a whole</option>
             {data.channels.map((c) => (
               <option key={c} value={`channel:${c}`}>
@@ -298,8 +353,19 @@ function Comments({ missionId, data, can }: { missionId: string; data: ReviewOve
           <label htmlFor={bodyId} className="mt-2 block text-xs font-medium text-slate-800">
             Comment (mention someone with @name or @e-mail address to send them an e-mail)
           </label>
-          <textarea id={bodyId} value={body} onChange={(e) => setBody(e.target.value)} rows={2} maxLength={5000} className="w-full rounded border border-slate-400 px-2 py-1 text-sm" />
-          <button type="submit" disabled={post.isPending || body.trim() === ""} className="mt-1 rounded bg-slate-900 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50">
+          <textarea
+            id={bodyId}
+            value={body}
+            onChange={(e) => setBody(e.target.value)}
+            rows={2}
+            maxLength={5000}
+            className="w-full rounded border border-slate-400 px-2 py-1 text-sm"
+          />
+          <button
+            type="submit"
+            disabled={post.isPending || body.trim() === ""}
+            className="mt-1 rounded bg-slate-900 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50"
+          >
             Post comment
           </button>
           <ErrorLine error={post.error} />

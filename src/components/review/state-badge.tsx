@@ -11,7 +11,10 @@ const LOOK: Record<ReviewState, { label: string; cls: string }> = {
 export function ReviewStateBadge({ state }: { state: ReviewState }) {
   const l = LOOK[state] ?? LOOK.draft;
   return (
-    <span data-testid="review-state" className={`inline-flex items-center rounded px-2 py-0.5 text-xs font-semibold ring-1 ${l.cls}`}>
+    <span
+      data-testid="review-state"
+      className={`inline-flex items-center rounded px-2 py-0.5 text-xs font-semibold ring-1 ${l.cls}`}
+    >
       {l.label}
     </span>
   );

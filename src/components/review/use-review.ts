@@ -31,7 +31,15 @@ export interface ReviewOverview {
   revision: { number: number; authorName: string; createdAt: string; errorCount: number } | null;
   baselineRevision: number | null;
   channels: string[];
-  errors: { id: string; key: string; code: string; chain: string; channel: string | null; message: string; waiver: WaiverView | null }[];
+  errors: {
+    id: string;
+    key: string;
+    code: string;
+    chain: string;
+    channel: string | null;
+    message: string;
+    waiver: WaiverView | null;
+  }[];
   reviews: {
     id: string;
     revision: number;
@@ -57,7 +65,10 @@ export interface CommentView {
 }
 
 export function useReviewQuery(missionId: string) {
-  return useQuery({ queryKey: reviewKeys.overview(missionId), queryFn: () => apiFetch<ReviewOverview>(base(missionId)) });
+  return useQuery({
+    queryKey: reviewKeys.overview(missionId),
+    queryFn: () => apiFetch<ReviewOverview>(base(missionId)),
+  });
 }
 
 export function useCommentsQuery(missionId: string) {
@@ -78,7 +89,11 @@ function useReviewMutation<V>(missionId: string, fn: (v: V) => Promise<unknown>)
     mutationFn: fn,
     onSettled: async () => {
       await qc.invalidateQueries({ queryKey: reviewKeys.overview(missionId) });
-      for (const key of [missionKeys.mission(missionId), missionKeys.revisions(missionId), missionKeys.activity(missionId)])
+      for (const key of [
+        missionKeys.mission(missionId),
+        missionKeys.revisions(missionId),
+        missionKeys.activity(missionId),
+      ])
         void qc.invalidateQueries({ queryKey: key });
     },
   });
@@ -87,10 +102,14 @@ function useReviewMutation<V>(missionId: string, fn: (v: V) => Promise<unknown>)
 export const useSubmitMutation = (m: string) =>
   useReviewMutation(m, (v: { revision?: number; note?: string }) => sendJson(`${base(m)}/submit`, "POST", v));
 export const useDecideMutation = (m: string) =>
-  useReviewMutation(m, (v: { decision: "baseline" | "request-changes"; revision?: number; note?: string }) => sendJson(`${base(m)}/decide`, "POST", v));
+  useReviewMutation(m, (v: { decision: "baseline" | "request-changes"; revision?: number; note?: string }) =>
+    sendJson(`${base(m)}/decide`, "POST", v),
+  );
 export const useWaiveMutation = (m: string) =>
   useReviewMutation(m, (v: { findingId: string; reason: string }) => sendJson(`${base(m)}/waivers`, "POST", v));
 export const useWithdrawWaiverMutation = (m: string) =>
   useReviewMutation(m, (id: string) => apiFetch(`${base(m)}/waivers/${encodeURIComponent(id)}`, { method: "DELETE" }));
 export const useCommentMutation = (m: string) =>
-  useReviewMutation(m, (v: { body: string; revision?: number; channelKey?: string; findingId?: string }) => sendJson(`${base(m)}/comments`, "POST", v));
+  useReviewMutation(m, (v: { body: string; revision?: number; channelKey?: string; findingId?: string }) =>
+    sendJson(`${base(m)}/comments`, "POST", v),
+  );

@@ -5,7 +5,10 @@ export function AccountMenu({ name, email, signOut }: { name: string; email: str
   return (
     <details className="relative">
       <summary className="flex cursor-pointer list-none items-center gap-2 rounded px-2 py-1 text-sm text-white hover:bg-white/10">
-        <span aria-hidden className="flex h-7 w-7 items-center justify-center rounded-full bg-white/20 text-xs font-semibold">
+        <span
+          aria-hidden
+          className="flex h-7 w-7 items-center justify-center rounded-full bg-white/20 text-xs font-semibold"
+        >
           {initials(name)}
         </span>
         <span className="hidden sm:inline">{name}</span>
@@ -25,6 +28,10 @@ export function AccountMenu({ name, email, signOut }: { name: string; email: str
 }
 
 function initials(name: string): string {
-  const parts = name.replace(/\(.*?\)/g, "").trim().split(/\s+/).filter(Boolean);
+  const parts = name
+    .replace(/\(.*?\)/g, "")
+    .trim()
+    .split(/\s+/)
+    .filter(Boolean);
   return ((parts[0]?.[0] ?? "?") + (parts.length > 1 ? (parts[parts.length - 1]?.[0] ?? "") : "")).toUpperCase();
 }

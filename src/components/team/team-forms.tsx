@@ -85,7 +85,11 @@ export function RoleSelectForm({
           </option>
         ))}
       </select>
-      <button type="submit" disabled={pending} className="rounded border border-ink/30 px-2 py-1 text-xs hover:bg-ink-faint">
+      <button
+        type="submit"
+        disabled={pending}
+        className="rounded border border-ink/30 px-2 py-1 text-xs hover:bg-ink-faint"
+      >
         Save role
       </button>
       <Status state={state} />

@@ -51,16 +51,7 @@ export function buildChannelRows(
 }
 
 export type ChannelSortKey =
-  | "key"
-  | "center"
-  | "sideband"
-  | "chain"
-  | "slot"
-  | "image"
-  | "bandwidth"
-  | "nedt"
-  | "margin"
-  | "worst";
+  "key" | "center" | "sideband" | "chain" | "slot" | "image" | "bandwidth" | "nedt" | "margin" | "worst";
 
 export function channelCell(row: ChannelRow, key: ChannelSortKey): Cell {
   switch (key) {

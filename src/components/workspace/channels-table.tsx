@@ -113,7 +113,11 @@ export function ChannelsTable({
                       aria-sort={active ? (sort.dir === "asc" ? "ascending" : "descending") : "none"}
                       className={`whitespace-nowrap px-2 py-1.5 font-medium ${c.align === "right" ? "text-right" : ""}`}
                     >
-                      <button type="button" className="inline-flex items-center gap-1 hover:text-ink" onClick={() => setSort(nextSort(sort, c.key))}>
+                      <button
+                        type="button"
+                        className="inline-flex items-center gap-1 hover:text-ink"
+                        onClick={() => setSort(nextSort(sort, c.key))}
+                      >
                         <span>
                           {c.label}
                           {c.unit ? <span className="font-normal"> ({c.unit})</span> : null}
@@ -130,7 +134,14 @@ export function ChannelsTable({
             </thead>
             <tbody>
               {shown.map((row) => (
-                <ChannelTr key={row.channel.id} row={row} pending={resultPending} canEdit={canEdit} onEdit={onEdit} onSelect={onSelect} />
+                <ChannelTr
+                  key={row.channel.id}
+                  row={row}
+                  pending={resultPending}
+                  canEdit={canEdit}
+                  onEdit={onEdit}
+                  onSelect={onSelect}
+                />
               ))}
             </tbody>
           </table>
@@ -171,12 +182,16 @@ function ChannelTr({
       </td>
       <td className="px-2 py-1.5">{row.sideband}</td>
       <td className="px-2 py-1.5">{row.chainKey}</td>
-      <td className="whitespace-nowrap px-2 py-1.5 tabular-nums">{r?.ifSlotGHz ? formatInterval(r.ifSlotGHz, "") : pending ? "…" : "no slot"}</td>
+      <td className="whitespace-nowrap px-2 py-1.5 tabular-nums">
+        {r?.ifSlotGHz ? formatInterval(r.ifSlotGHz, "") : pending ? "…" : "no slot"}
+      </td>
       <td className="whitespace-nowrap px-2 py-1.5 tabular-nums">
         {r?.imageGHz ? (
           <>
             <div>{formatInterval(r.imageGHz, "")}</div>
-            <div className="text-xs text-ink-soft">{r.imageRejectionDB === null ? "fully rejected" : `${formatDB(r.imageRejectionDB)} dB`}</div>
+            <div className="text-xs text-ink-soft">
+              {r.imageRejectionDB === null ? "fully rejected" : `${formatDB(r.imageRejectionDB)} dB`}
+            </div>
           </>
         ) : (
           "–"
@@ -206,7 +221,12 @@ function ChannelTr({
       </td>
       {canEdit ? (
         <td className="px-2 py-1.5 text-right">
-          <button type="button" className={buttonClass.quiet} onClick={() => onEdit(row.channel)} aria-label={`Edit channel ${row.channel.key}`}>
+          <button
+            type="button"
+            className={buttonClass.quiet}
+            onClick={() => onEdit(row.channel)}
+            aria-label={`Edit channel ${row.channel.key}`}
+          >
             Edit
           </button>
         </td>

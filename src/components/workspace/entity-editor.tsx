@@ -57,29 +57,62 @@ export interface Refs {
 
 const opts = (rows: { id: string; key: string }[]) => rows.map((r) => ({ value: r.id, label: r.key }));
 
-function specFor(kind: Collection, refs: Refs): { groups: FieldGroup[]; schema: unknown; defaults: Record<string, unknown> } {
+function specFor(
+  kind: Collection,
+  refs: Refs,
+): { groups: FieldGroup[]; schema: unknown; defaults: Record<string, unknown> } {
   switch (kind) {
     case "lasers":
-      return { groups: laserGroups(), schema: laserSchema, defaults: { ...laserDefaults, key: nextKey(refs.lasers.map((r) => r.key), "LP") } };
+      return {
+        groups: laserGroups(),
+        schema: laserSchema,
+        defaults: {
+          ...laserDefaults,
+          key: nextKey(
+            refs.lasers.map((r) => r.key),
+            "LP",
+          ),
+        },
+      };
     case "resonators":
       return {
         groups: resonatorGroups(),
         schema: resonatorSchema,
-        defaults: { ...resonatorDefaults, key: nextKey(refs.resonators.map((r) => r.key), "R") },
+        defaults: {
+          ...resonatorDefaults,
+          key: nextKey(
+            refs.resonators.map((r) => r.key),
+            "R",
+          ),
+        },
       };
     case "detectors":
       return {
         groups: detectorGroups(),
         schema: detectorSchema,
-        defaults: { ...detectorDefaults, key: nextKey(refs.detectors.map((r) => r.key), "D") },
+        defaults: {
+          ...detectorDefaults,
+          key: nextKey(
+            refs.detectors.map((r) => r.key),
+            "D",
+          ),
+        },
       };
     case "chains":
       return {
-        groups: chainGroups({ lasers: opts(refs.lasers), resonators: opts(refs.resonators), detectors: opts(refs.detectors) }),
+        groups: chainGroups({
+          lasers: opts(refs.lasers),
+          resonators: opts(refs.resonators),
+          detectors: opts(refs.detectors),
+        }),
         schema: chainSchema,
         defaults: {
           ...chainDefaults,
-          key: nextKey(refs.chains.map((c) => c.key), "", ["A", "B", "C", "D", "E", "F", "G", "H"]),
+          key: nextKey(
+            refs.chains.map((c) => c.key),
+            "",
+            ["A", "B", "C", "D", "E", "F", "G", "H"],
+          ),
           laserId: refs.lasers.find((l) => !refs.chains.some((c) => c.laserId === l.id))?.id ?? "",
           resonatorId: refs.resonators[0]?.id ?? "",
           detectorId: refs.detectors[0]?.id ?? "",
@@ -135,10 +168,16 @@ export function EntityEditor({
       />
       {row ? (
         <div className="mt-6 border-t border-ink/10 pt-3">
-          {deleteError ? <p role="alert" className="mb-2 text-sm text-sev-error">{deleteError}</p> : null}
+          {deleteError ? (
+            <p role="alert" className="mb-2 text-sm text-sev-error">
+              {deleteError}
+            </p>
+          ) : null}
           {confirming ? (
             <div className="flex items-center gap-2 text-sm">
-              <span>Delete {KIND_LABEL[kind]} {String(row.key)}? The plan is re-checked at once.</span>
+              <span>
+                Delete {KIND_LABEL[kind]} {String(row.key)}? The plan is re-checked at once.
+              </span>
               <button
                 type="button"
                 className={buttonClass.danger}
@@ -171,7 +210,15 @@ export function EntityEditor({
   );
 }
 
-export function SettingsEditor({ missionId, settings, onClose }: { missionId: string; settings: Settings; onClose: () => void }) {
+export function SettingsEditor({
+  missionId,
+  settings,
+  onClose,
+}: {
+  missionId: string;
+  settings: Settings;
+  onClose: () => void;
+}) {
   const save = useSaveSettingsMutation(missionId);
   return (
     <EntityForm

@@ -83,9 +83,7 @@ function IntervalsField({ spec }: { spec: Extract<FieldSpec, { kind: "intervals"
             <div key={item.key} className="flex flex-wrap items-start gap-2">
               {(["minGHz", "maxGHz"] as const).map((k) => (
                 <label key={k} className="flex flex-col text-xs">
-                  <span>
-                    {k === "minGHz" ? "From" : "To"} (GHz)
-                  </span>
+                  <span>{k === "minGHz" ? "From" : "To"} (GHz)</span>
                   <input
                     {...getInputProps(f[k], { type: "number" })}
                     step="any"
@@ -148,7 +146,13 @@ function Field({ spec, disabled }: { spec: FieldSpec; disabled: boolean }) {
     );
   } else if (spec.kind === "textarea") {
     control = (
-      <textarea {...getTextareaProps(meta)} aria-describedby={describedBy} disabled={disabled} rows={3} className={inputClass} />
+      <textarea
+        {...getTextareaProps(meta)}
+        aria-describedby={describedBy}
+        disabled={disabled}
+        rows={3}
+        className={inputClass}
+      />
     );
   } else {
     control = (
@@ -164,7 +168,10 @@ function Field({ spec, disabled }: { spec: FieldSpec; disabled: boolean }) {
   }
   return (
     <div className={spec.wide || spec.helper ? "col-span-2" : ""}>
-      <label htmlFor={meta.id} className={`text-sm font-medium ${spec.kind === "checkbox" ? "flex items-center gap-2" : "block"}`}>
+      <label
+        htmlFor={meta.id}
+        className={`text-sm font-medium ${spec.kind === "checkbox" ? "flex items-center gap-2" : "block"}`}
+      >
         {spec.kind === "checkbox" ? control : null}
         <span>{labelText(spec)}</span>
       </label>
@@ -250,7 +257,13 @@ export function EntityForm<S extends z.ZodType>(props: EntityFormProps<S>) {
           </div>
         </div>
       ) : null}
-      <InnerForm key={base.generation} {...props} defaultValue={base.values} version={base.version} onConflict={setConflict} />
+      <InnerForm
+        key={base.generation}
+        {...props}
+        defaultValue={base.values}
+        version={base.version}
+        onConflict={setConflict}
+      />
     </div>
   );
 }
@@ -298,9 +311,7 @@ function InnerForm<S extends z.ZodType>(
           if (sub) setLastResult(sub.reply());
         } else if (sub) {
           const { fieldErrors, formErrors } = splitIssues(err.issues, names);
-          setLastResult(
-            sub.reply({ fieldErrors, formErrors: [statusText(err), ...formErrors] }),
-          );
+          setLastResult(sub.reply({ fieldErrors, formErrors: [statusText(err), ...formErrors] }));
         }
       } finally {
         setPending(false);
@@ -311,7 +322,11 @@ function InnerForm<S extends z.ZodType>(
     <FormProvider context={form.context}>
       <form {...getFormProps(form)} className="space-y-4" aria-busy={pending}>
         {form.errors && form.errors.length > 0 ? (
-          <div id={form.errorId} role="alert" className="rounded border border-sev-error/40 bg-red-50 px-3 py-2 text-sm text-sev-error">
+          <div
+            id={form.errorId}
+            role="alert"
+            className="rounded border border-sev-error/40 bg-red-50 px-3 py-2 text-sm text-sev-error"
+          >
             <p className="font-semibold">Not saved.</p>
             <ul className="mt-0.5 list-disc pl-5 text-ink">
               {form.errors.map((e) => (

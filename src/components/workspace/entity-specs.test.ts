@@ -1,6 +1,13 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { channelSchema, chainSchema, detectorSchema, laserSchema, resonatorSchema, settingsFields } from "@/schemas/workspace";
+import {
+  channelSchema,
+  chainSchema,
+  detectorSchema,
+  laserSchema,
+  resonatorSchema,
+  settingsFields,
+} from "@/schemas/workspace";
 import {
   chainDefaults,
   chainGroups,
@@ -30,9 +37,13 @@ describe("nextKey", () => {
   });
   it("never returns a used key", () => {
     fc.assert(
-      fc.property(fc.array(fc.string({ maxLength: 4 }), { maxLength: 20 }), fc.string({ maxLength: 3 }), (used, prefix) => {
-        expect(used).not.toContain(nextKey(used, prefix));
-      }),
+      fc.property(
+        fc.array(fc.string({ maxLength: 4 }), { maxLength: 20 }),
+        fc.string({ maxLength: 3 }),
+        (used, prefix) => {
+          expect(used).not.toContain(nextKey(used, prefix));
+        },
+      ),
     );
   });
 });
@@ -43,8 +54,12 @@ describe("form defaults", () => {
     expect(laserSchema.safeParse(laserDefaults).success).toBe(true);
     expect(resonatorSchema.safeParse(resonatorDefaults).success).toBe(true);
     expect(detectorSchema.safeParse(detectorDefaults).success).toBe(true);
-    expect(chainSchema.safeParse({ ...chainDefaults, laserId: uuid, resonatorId: uuid, detectorId: uuid }).success).toBe(true);
-    expect(channelSchema.safeParse({ ...channelDefaults, key: "ch1", name: "line centre", chainId: uuid }).success).toBe(true);
+    expect(
+      chainSchema.safeParse({ ...chainDefaults, laserId: uuid, resonatorId: uuid, detectorId: uuid }).success,
+    ).toBe(true);
+    expect(
+      channelSchema.safeParse({ ...channelDefaults, key: "ch1", name: "line centre", chainId: uuid }).success,
+    ).toBe(true);
   });
 });
 
@@ -58,11 +73,19 @@ describe("form fields", () => {
     settings: [settingsGroups(), settingsFields],
   } as const;
   it("name a unit or kind in every label", () => {
-    for (const [g] of Object.values(groups)) for (const f of g.flatMap((x) => x.fields)) expect(f.unit.trim()).not.toBe("");
+    for (const [g] of Object.values(groups))
+      for (const f of g.flatMap((x) => x.fields)) expect(f.unit.trim()).not.toBe("");
   });
   it("cover every field of the schema, and only those", () => {
     for (const [kind, [g, schema]] of Object.entries(groups)) {
-      const shape = Object.keys((schema as unknown as { shape?: Record<string, unknown>; _def: { schema?: { shape: Record<string, unknown> } } }).shape ?? {});
+      const shape = Object.keys(
+        (
+          schema as unknown as {
+            shape?: Record<string, unknown>;
+            _def: { schema?: { shape: Record<string, unknown> } };
+          }
+        ).shape ?? {},
+      );
       const tops = new Set(fieldNames(g).map((n) => n.split(".")[0]));
       expect(shape.length, kind).toBeGreaterThan(0);
       expect([...tops].sort(), kind).toEqual([...shape].sort());
@@ -70,13 +93,16 @@ describe("form fields", () => {
   });
   it("put the laser-safety caution beside every optical power", () => {
     const all = [...laserGroups(), ...detectorGroups()].flatMap((g) => g.fields);
-    for (const name of ["carrierPowerMW", "loPowerMW", "maxInputMW"]) expect(all.find((f) => f.name === name)?.caution).toBe("laser");
+    for (const name of ["carrierPowerMW", "loPowerMW", "maxInputMW"])
+      expect(all.find((f) => f.name === name)?.caution).toBe("laser");
   });
 });
 
 describe("rowToFormValue", () => {
   it("drops the bookkeeping fields the strict schemas refuse", () => {
-    expect(rowToFormValue({ id: "x", version: 3, createdAt: "t", updatedAt: "t", key: "R1", fsrGHz: 183.31, loadedQ: 1e7 })).toEqual({
+    expect(
+      rowToFormValue({ id: "x", version: 3, createdAt: "t", updatedAt: "t", key: "R1", fsrGHz: 183.31, loadedQ: 1e7 }),
+    ).toEqual({
       key: "R1",
       fsrGHz: 183.31,
       loadedQ: 1e7,

@@ -67,8 +67,11 @@ export function FindingsPanel({
                 className={`mt-2 rounded ${focus === c.channel ? "bg-amber-50 ring-1 ring-sev-warning/40" : ""}`}
               >
                 <h4 className="text-xs font-medium text-ink-soft">
-                  <span className="uppercase tracking-wide">Channel</span> <span className="font-semibold text-ink">{c.channel}</span>
-                  {channelNames.get(c.channel) ? <span className="normal-case"> · {channelNames.get(c.channel)}</span> : null}
+                  <span className="uppercase tracking-wide">Channel</span>{" "}
+                  <span className="font-semibold text-ink">{c.channel}</span>
+                  {channelNames.get(c.channel) ? (
+                    <span className="normal-case"> · {channelNames.get(c.channel)}</span>
+                  ) : null}
                 </h4>
                 <ul className="divide-y divide-ink/5">
                   {c.findings.map((f, i) => (

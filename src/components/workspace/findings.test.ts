@@ -15,7 +15,12 @@ const f = (severity: Severity, chain: string, channel: string | null, code = "x"
 
 describe("worstFinding", () => {
   it("prefers errors, then warnings, then info, keeping engine order among equals", () => {
-    const list = [f("info", "A", "a", "i1"), f("warning", "A", "a", "w1"), f("error", "A", "a", "e1"), f("error", "A", "a", "e2")];
+    const list = [
+      f("info", "A", "a", "i1"),
+      f("warning", "A", "a", "w1"),
+      f("error", "A", "a", "e1"),
+      f("error", "A", "a", "e2"),
+    ];
     expect(worstFinding(list)?.code).toBe("e1");
     expect(worstFinding([])).toBeNull();
   });

@@ -51,10 +51,14 @@ describe("nedtStatus", () => {
   });
   it("is met exactly when the margin is not negative", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 1e3, noNaN: true }), fc.double({ min: 0, max: 1e3, noNaN: true }), (n, r) => {
-        const s = nedtStatus(n, r);
-        expect(s.state === "met").toBe(r - n >= -1e-9);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 1e3, noNaN: true }),
+        fc.double({ min: 0, max: 1e3, noNaN: true }),
+        (n, r) => {
+          const s = nedtStatus(n, r);
+          expect(s.state === "met").toBe(r - n >= -1e-9);
+        },
+      ),
     );
   });
 });

@@ -32,7 +32,16 @@ function ItemHeader({ title, onEdit, label }: { title: string; onEdit?: () => vo
 }
 
 /** Column headings of a laser-pair table (overview and report), units in every label. */
-export const LASER_HEADERS = ["Laser pair", "Carrier (THz)", "Carrier power (mW)", "LO power (mW)", "Reach (GHz)", "Step (MHz)", "Drift (± MHz)", "PDH lock"] as const;
+export const LASER_HEADERS = [
+  "Laser pair",
+  "Carrier (THz)",
+  "Carrier power (mW)",
+  "LO power (mW)",
+  "Reach (GHz)",
+  "Step (MHz)",
+  "Drift (± MHz)",
+  "PDH lock",
+] as const;
 
 const th = "whitespace-nowrap px-2 py-1 text-left text-xs font-medium text-ink-soft";
 const td = "whitespace-nowrap px-2 py-1.5 tabular-nums align-top";
@@ -74,7 +83,9 @@ export function LaserTable({ lasers, onEdit }: { lasers: Laser[]; onEdit: Editab
                 </td>
                 <td className={td}>{formatNumber(l.carrierPowerMW, 2)}</td>
                 <td className={td}>{formatNumber(l.loPowerMW, 2)}</td>
-                <td className={`${td} whitespace-normal`}>{l.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "")).join(", ")}</td>
+                <td className={`${td} whitespace-normal`}>
+                  {l.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "")).join(", ")}
+                </td>
                 <td className={td}>{formatMHz(l.stepMHz)}</td>
                 <td className={td}>{formatMHz(l.driftMHz)}</td>
                 <td className={td}>
@@ -186,25 +197,41 @@ export function ChainItem({
           ["Mode · sideband", `k = ${chain.mode}, ${chain.sideband}`],
           ["LO offset", `${formatGHz(chain.loOffsetGHz)} GHz`],
           ...(carrierTHz !== undefined
-            ? ([["LO (laser 2)", <OpticalFrequency key="lo" thz={loTHz(carrierTHz, chain.loOffsetGHz)} />]] as [string, React.ReactNode][])
+            ? ([["LO (laser 2)", <OpticalFrequency key="lo" thz={loTHz(carrierTHz, chain.loOffsetGHz)} />]] as [
+                string,
+                React.ReactNode,
+              ][])
             : []),
           ...(carrierTHz !== undefined && fsrGHz !== undefined
             ? ([
                 [
                   "Sideband mode",
-                  <OpticalFrequency key="sb" thz={loTHz(carrierTHz, (chain.sideband === "upper" ? 1 : -1) * chain.mode * fsrGHz)} />,
+                  <OpticalFrequency
+                    key="sb"
+                    thz={loTHz(carrierTHz, (chain.sideband === "upper" ? 1 : -1) * chain.mode * fsrGHz)}
+                  />,
                 ],
               ] as [string, React.ReactNode][])
             : []),
           ["RF input", formatInterval([chain.rfInput.minGHz, chain.rfInput.maxGHz])],
-          ["Path", `tap ${formatNumber(chain.tapFraction, 3)}, loss ${formatNumber(chain.pathLossDB, 1)} dB, notch ${formatNumber(chain.carrierRejectionDB, 1)} dB${chain.sharedIf ? ", shared IF" : ""}`],
+          [
+            "Path",
+            `tap ${formatNumber(chain.tapFraction, 3)}, loss ${formatNumber(chain.pathLossDB, 1)} dB, notch ${formatNumber(chain.carrierRejectionDB, 1)} dB${chain.sharedIf ? ", shared IF" : ""}`,
+          ],
           ...(result
             ? ([
                 ["Per-photodiode input", `${formatNumber(result.pdInputMW, 3)} mW`],
-                ["Feasible LO", result.feasibleGHz.length === 0 ? "none" : result.feasibleGHz.map((iv) => formatInterval(iv)).join(", ")],
+                [
+                  "Feasible LO",
+                  result.feasibleGHz.length === 0
+                    ? "none"
+                    : result.feasibleGHz.map((iv) => formatInterval(iv)).join(", "),
+                ],
                 [
                   "Place",
-                  result.placeGHz === null ? `no place (${result.placeReason ?? "unknown"})` : `${formatGHz(result.placeGHz)} GHz`,
+                  result.placeGHz === null
+                    ? `no place (${result.placeReason ?? "unknown"})`
+                    : `${formatGHz(result.placeGHz)} GHz`,
                 ],
               ] as [string, string][])
             : []),

@@ -10,9 +10,13 @@ describe("loTHz", () => {
   });
   it("offset back from the difference (independent: (lo − carrier) × 1000)", () => {
     fc.assert(
-      fc.property(fc.double({ min: 180, max: 200, noNaN: true }), fc.double({ min: -500, max: 500, noNaN: true }), (c, o) => {
-        expect((loTHz(c, o) - c) * 1000).toBeCloseTo(o, 6);
-      }),
+      fc.property(
+        fc.double({ min: 180, max: 200, noNaN: true }),
+        fc.double({ min: -500, max: 500, noNaN: true }),
+        (c, o) => {
+          expect((loTHz(c, o) - c) * 1000).toBeCloseTo(o, 6);
+        },
+      ),
     );
   });
 });

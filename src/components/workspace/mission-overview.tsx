@@ -24,16 +24,33 @@ import { ChainItem, DetectorTable, LaserTable, ResonatorTable } from "./hardware
 import { formatAge, formatNumber, plural } from "./format";
 import { buttonClass, Card, ErrorNote, SENSITIVITY_TEXT, Spinner } from "./ui";
 
-type Editing = { kind: Collection; row: (Record<string, unknown> & { id: string; version: number }) | null } | { kind: "settings" } | { kind: "mission" } | null;
+type Editing =
+  | { kind: Collection; row: (Record<string, unknown> & { id: string; version: number }) | null }
+  | { kind: "settings" }
+  | { kind: "mission" }
+  | null;
 
-export function MissionOverview({ missionId, canEdit, canDelete = false }: { missionId: string; canEdit: boolean; canDelete?: boolean }) {
+export function MissionOverview({
+  missionId,
+  canEdit,
+  canDelete = false,
+}: {
+  missionId: string;
+  canEdit: boolean;
+  canDelete?: boolean;
+}) {
   const mission = useMissionQuery(missionId);
   const router = useRouter();
   const deleteMission = useDeleteMissionMutation(missionId);
   const confirmDelete = () => {
     const m = mission.data;
     if (!m) return;
-    if (!window.confirm(`Delete the mission "${m.name}" with all its hardware, chains, channels, revisions and findings? This cannot be undone.`)) return;
+    if (
+      !window.confirm(
+        `Delete the mission "${m.name}" with all its hardware, chains, channels, revisions and findings? This cannot be undone.`,
+      )
+    )
+      return;
     deleteMission.mutate({ version: m.version }, { onSuccess: () => router.push("/missions") });
   };
   const lasers = useCollectionQuery(missionId, "lasers");
@@ -62,7 +79,9 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
   const channelNames = useMemo(() => new Map((channels.data ?? []).map((c) => [c.key, c.name])), [channels.data]);
   const keyOf = (rows: { id: string; key: string }[], id: string) => rows.find((r) => r.id === id)?.key ?? "?";
   const edit = (kind: Collection) => (row: { id: string; version: number }) =>
-    canEdit ? () => setEditing({ kind, row: row as unknown as Record<string, unknown> & { id: string; version: number } }) : undefined;
+    canEdit
+      ? () => setEditing({ kind, row: row as unknown as Record<string, unknown> & { id: string; version: number } })
+      : undefined;
 
   if (mission.error) return <ErrorNote title="This mission could not be loaded.">{mission.error.message}</ErrorNote>;
   const busy = [lasers, resonators, detectors, chains, channels, result].some((q) => q.isFetching);
@@ -87,12 +106,23 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
           <h1 className="flex items-baseline gap-2 text-2xl font-semibold tracking-tight">
             {mission.data?.name ?? "…"}
             {canEdit && mission.data ? (
-              <button type="button" className={buttonClass.quiet} onClick={() => setEditing({ kind: "mission" })} aria-label="Edit mission name and description">
+              <button
+                type="button"
+                className={buttonClass.quiet}
+                onClick={() => setEditing({ kind: "mission" })}
+                aria-label="Edit mission name and description"
+              >
                 Edit
               </button>
             ) : null}
             {canDelete && mission.data ? (
-              <button type="button" className={buttonClass.quiet} onClick={confirmDelete} disabled={deleteMission.isPending} aria-label="Delete this mission">
+              <button
+                type="button"
+                className={buttonClass.quiet}
+                onClick={confirmDelete}
+                disabled={deleteMission.isPending}
+                aria-label="Delete this mission"
+              >
                 {deleteMission.isPending ? "Deleting…" : "Delete"}
               </button>
             ) : null}
@@ -102,11 +132,18 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
               {deleteMission.error.message} Reload the page to see its current state.
             </ErrorNote>
           ) : null}
-          {mission.data?.description ? <p className="mt-0.5 max-w-2xl text-sm text-ink-soft">{mission.data.description}</p> : null}
+          {mission.data?.description ? (
+            <p className="mt-0.5 max-w-2xl text-sm text-ink-soft">{mission.data.description}</p>
+          ) : null}
           <p className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm" data-testid="revision-line">
-            <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs font-medium uppercase tracking-wide">{mission.data?.status ?? "draft"}</span>
+            <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs font-medium uppercase tracking-wide">
+              {mission.data?.status ?? "draft"}
+            </span>
             <span>
-              Revision <span className="font-semibold tabular-nums" data-testid="revision-number">{latest ?? "–"}</span>
+              Revision{" "}
+              <span className="font-semibold tabular-nums" data-testid="revision-number">
+                {latest ?? "–"}
+              </span>
             </span>
             {result.data ? (
               <>
@@ -164,20 +201,32 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
           />
         </Card>
         <Card title="Detectors" actions={addButton("detectors")}>
-          {detectors.isLoading ? <Spinner label="Loading…" /> : <DetectorTable detectors={refs.detectors} onEdit={edit("detectors")} />}
+          {detectors.isLoading ? (
+            <Spinner label="Loading…" />
+          ) : (
+            <DetectorTable detectors={refs.detectors} onEdit={edit("detectors")} />
+          )}
         </Card>
       </div>
 
       <Card title="Receiver chains" actions={addButton("chains")}>
         <div className="grid gap-2 md:grid-cols-2 xl:grid-cols-3">
           {chains.isLoading ? <Spinner label="Loading…" /> : null}
-          {!chains.isLoading && refs.chains.length === 0 ? <p className="text-sm text-ink-soft">No chain yet: a chain joins one laser pair, one resonator mode and one detector.</p> : null}
+          {!chains.isLoading && refs.chains.length === 0 ? (
+            <p className="text-sm text-ink-soft">
+              No chain yet: a chain joins one laser pair, one resonator mode and one detector.
+            </p>
+          ) : null}
           {refs.chains.map((c) => (
             <ChainItem
               key={c.id}
               chain={c}
               result={result.data?.chains.find((r) => r.id === c.key)}
-              keys={{ laser: keyOf(refs.lasers, c.laserId), resonator: keyOf(refs.resonators, c.resonatorId), detector: keyOf(refs.detectors, c.detectorId) }}
+              keys={{
+                laser: keyOf(refs.lasers, c.laserId),
+                resonator: keyOf(refs.resonators, c.resonatorId),
+                detector: keyOf(refs.detectors, c.detectorId),
+              }}
               carrierTHz={refs.lasers.find((l) => l.id === c.laserId)?.carrierTHz}
               fsrGHz={refs.resonators.find((r) => r.id === c.resonatorId)?.fsrGHz}
               onEdit={edit("chains")(c)}
@@ -196,7 +245,12 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
             chains={refs.chains}
             result={result.data}
             canEdit={canEdit}
-            onEdit={(c: Channel) => setEditing({ kind: "channels", row: c as unknown as Record<string, unknown> & { id: string; version: number } })}
+            onEdit={(c: Channel) =>
+              setEditing({
+                kind: "channels",
+                row: c as unknown as Record<string, unknown> & { id: string; version: number },
+              })
+            }
             onSelect={(key) => {
               setFocus(key);
               document.getElementById(`findings-${key}`)?.scrollIntoView({ behavior: "smooth", block: "center" });
@@ -208,7 +262,11 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
 
       <div className="grid gap-4 lg:grid-cols-3">
         <Card title={`Findings${latest ? ` · revision ${latest}` : ""}`} className="lg:col-span-2">
-          {result.isLoading ? <Spinner label="Loading findings…" /> : <FindingsPanel findings={findings} channelNames={channelNames} focus={focus} />}
+          {result.isLoading ? (
+            <Spinner label="Loading findings…" />
+          ) : (
+            <FindingsPanel findings={findings} channelNames={channelNames} focus={focus} />
+          )}
         </Card>
         <Card
           title="Check settings"
@@ -237,7 +295,9 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
             <Spinner label="Loading…" />
           )}
           <h3 className="mt-5 border-t border-ink/10 pt-3 text-sm font-semibold">Recent changes</h3>
-          {activity.data && activity.data.length === 0 ? <p className="text-sm text-ink-soft">No changes yet.</p> : null}
+          {activity.data && activity.data.length === 0 ? (
+            <p className="text-sm text-ink-soft">No changes yet.</p>
+          ) : null}
           <ol className="mt-1 space-y-1.5 text-sm" data-testid="activity">
             {(activity.data ?? []).slice(0, 8).map((a, i) => (
               <li key={`${a.at}-${i}`}>
@@ -267,7 +327,11 @@ export function MissionOverview({ missionId, canEdit, canDelete = false }: { mis
           ) : null
         ) : (
           <Drawer
-            title={editing.row ? `Edit ${KIND_LABEL[editing.kind]} ${String(editing.row.key)}` : `New ${KIND_LABEL[editing.kind]}`}
+            title={
+              editing.row
+                ? `Edit ${KIND_LABEL[editing.kind]} ${String(editing.row.key)}`
+                : `New ${KIND_LABEL[editing.kind]}`
+            }
             onClose={close}
           >
             <EntityEditor missionId={missionId} kind={editing.kind} row={editing.row} refs={refs} onClose={close} />

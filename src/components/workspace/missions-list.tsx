@@ -35,7 +35,11 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
   const shown = useMemo(
     () =>
       sortRows(
-        filterByValue(filterByText(rows, query, (m) => [m.name, m.description]), status, (m) => m.status),
+        filterByValue(
+          filterByText(rows, query, (m) => [m.name, m.description]),
+          status,
+          (m) => m.status,
+        ),
         sort,
         (m: MissionSummary, k: Key) => m[k],
       ),
@@ -64,7 +68,14 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
               {
                 legend: "Mission",
                 fields: [
-                  { name: "name", label: "Name", unit: "text", kind: "text", wide: true, help: "E.g. the instrument and its platform." },
+                  {
+                    name: "name",
+                    label: "Name",
+                    unit: "text",
+                    kind: "text",
+                    wide: true,
+                    help: "E.g. the instrument and its platform.",
+                  },
                   { name: "description", label: "Description", unit: "text, optional", kind: "textarea", wide: true },
                 ],
               },
@@ -92,7 +103,11 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
         </label>
         <label className="text-xs text-ink-soft">
           Status{" "}
-          <select value={status} onChange={(e) => setStatus(e.target.value)} className="rounded border border-ink/30 bg-white px-2 py-1 text-sm text-ink">
+          <select
+            value={status}
+            onChange={(e) => setStatus(e.target.value)}
+            className="rounded border border-ink/30 bg-white px-2 py-1 text-sm text-ink"
+          >
             <option value="">all</option>
             {statuses.map((s) => (
               <option key={s} value={s}>
@@ -105,7 +120,9 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
           {shown.length} of {rows.length}
         </span>
       </div>
-      {missions.error ? <ErrorNote title="The missions could not be loaded.">{missions.error.message}</ErrorNote> : null}
+      {missions.error ? (
+        <ErrorNote title="The missions could not be loaded.">{missions.error.message}</ErrorNote>
+      ) : null}
       {missions.isLoading ? <Spinner label="Loading missions…" /> : null}
       {missions.data && rows.length === 0 ? (
         <Empty>No missions in this team yet.{canCreate ? " Create the first one." : ""}</Empty>
@@ -121,7 +138,11 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
                   aria-sort={sort.key === c.key ? (sort.dir === "asc" ? "ascending" : "descending") : "none"}
                   className={`px-2 py-1.5 font-medium ${c.numeric ? "text-right" : ""}`}
                 >
-                  <button type="button" className="inline-flex items-center gap-1 hover:text-ink" onClick={() => setSort(nextSort(sort, c.key))}>
+                  <button
+                    type="button"
+                    className="inline-flex items-center gap-1 hover:text-ink"
+                    onClick={() => setSort(nextSort(sort, c.key))}
+                  >
                     {c.label}
                     <span aria-hidden className={sort.key === c.key ? "text-ink" : "text-transparent"}>
                       {sort.dir === "asc" ? "▲" : "▼"}

@@ -4,7 +4,13 @@ import Link from "next/link";
 import { OpticalFrequency } from "@/components/helpers";
 import { LASER_HEADERS, loTHz } from "./hardware";
 import { LINE_CENTRES, PROTECTED_BANDS } from "@/lib/reference";
-import { useCollectionQuery, useMissionQuery, useResultQuery, useRevisionsQuery, useSettingsQuery } from "@/queries/missions";
+import {
+  useCollectionQuery,
+  useMissionQuery,
+  useResultQuery,
+  useRevisionsQuery,
+  useSettingsQuery,
+} from "@/queries/missions";
 import { buildChannelRows } from "./channel-rows";
 import { countBySeverity, groupFindings } from "./findings";
 import { formatDB, formatGHz, formatInterval, formatK, formatMHz, formatNumber, formatQ } from "./format";
@@ -50,7 +56,8 @@ export function MissionReport({ missionId }: { missionId: string }) {
   if (failed?.error) return <p className="text-sev-error">The report could not be prepared: {failed.error.message}</p>;
 
   const ch = chains.data ?? [];
-  const keyOf = (rows: { id: string; key: string }[] | undefined, id: string) => rows?.find((r) => r.id === id)?.key ?? "?";
+  const keyOf = (rows: { id: string; key: string }[] | undefined, id: string) =>
+    rows?.find((r) => r.id === id)?.key ?? "?";
   const rows = buildChannelRows(channels.data ?? [], ch, result.data);
   const findings = result.data?.findings ?? [];
   const counts = countBySeverity(findings);
@@ -88,12 +95,19 @@ export function MissionReport({ missionId }: { missionId: string }) {
         <p className="mt-1 text-xs">
           Status {mission.data?.status ?? "draft"} · revision {latest?.number ?? "–"}
           {latest?.authorName ? ` by ${latest.authorName}` : ""}
-          {latest?.createdAt ? ` · ${new Date(latest.createdAt).toISOString().replace("T", " ").slice(0, 16)} UTC` : ""} · printed{" "}
-          {new Date().toISOString().replace("T", " ").slice(0, 16)} UTC · {counts.error} errors, {counts.warning} warnings, {counts.info} info
+          {latest?.createdAt
+            ? ` · ${new Date(latest.createdAt).toISOString().replace("T", " ").slice(0, 16)} UTC`
+            : ""}{" "}
+          · printed {new Date().toISOString().replace("T", " ").slice(0, 16)} UTC · {counts.error} errors,{" "}
+          {counts.warning} warnings, {counts.info} info
         </p>
       </header>
 
-      <section className="mt-3 rounded border border-sev-warning/50 p-2.5 text-xs" aria-label="Cautions" data-testid="report-cautions">
+      <section
+        className="mt-3 rounded border border-sev-warning/50 p-2.5 text-xs"
+        aria-label="Cautions"
+        data-testid="report-cautions"
+      >
         <p>
           <strong>Laser safety.</strong> {LASER_SAFETY_TEXT}
         </p>
@@ -108,8 +122,9 @@ export function MissionReport({ missionId }: { missionId: string }) {
       <Section title="Check settings">
         {settings.data ? (
           <p>
-            Guard band {formatNumber(settings.data.guardMHz, 1)} MHz · required image rejection {formatNumber(settings.data.imageRejectionDB, 1)} dB · spur
-            orders up to {settings.data.spurMaxOrder} · lock replica limit {formatNumber(settings.data.replicaLimitDB, 1)} dB
+            Guard band {formatNumber(settings.data.guardMHz, 1)} MHz · required image rejection{" "}
+            {formatNumber(settings.data.imageRejectionDB, 1)} dB · spur orders up to {settings.data.spurMaxOrder} · lock
+            replica limit {formatNumber(settings.data.replicaLimitDB, 1)} dB
           </p>
         ) : null}
       </Section>
@@ -139,7 +154,8 @@ export function MissionReport({ missionId }: { missionId: string }) {
                 <td className={td}>{formatMHz(l.stepMHz)}</td>
                 <td className={td}>{formatMHz(l.driftMHz)}</td>
                 <td className={td}>
-                  {formatMHz(l.lock.modulationMHz)} MHz, β {formatNumber(l.lock.modulationIndex, 2)}, {l.lock.orders} {l.lock.orders === 1 ? "order" : "orders"}
+                  {formatMHz(l.lock.modulationMHz)} MHz, β {formatNumber(l.lock.modulationIndex, 2)}, {l.lock.orders}{" "}
+                  {l.lock.orders === 1 ? "order" : "orders"}
                 </td>
               </tr>
             ))}
@@ -210,7 +226,8 @@ export function MissionReport({ missionId }: { missionId: string }) {
                 <tr key={c.id}>
                   <td className={td}>{c.key}</td>
                   <td className={td}>
-                    {keyOf(lasers.data, c.laserId)} · {keyOf(resonators.data, c.resonatorId)} · {keyOf(detectors.data, c.detectorId)}
+                    {keyOf(lasers.data, c.laserId)} · {keyOf(resonators.data, c.resonatorId)} ·{" "}
+                    {keyOf(detectors.data, c.detectorId)}
                   </td>
                   <td className={td}>
                     k = {c.mode}, {c.sideband}
@@ -222,13 +239,24 @@ export function MissionReport({ missionId }: { missionId: string }) {
                   </td>
                   <td className={td}>
                     {formatGHz(c.loOffsetGHz)}
-                    <LoOptical carrierTHz={lasers.data?.find((l) => l.id === c.laserId)?.carrierTHz} loOffsetGHz={c.loOffsetGHz} />
+                    <LoOptical
+                      carrierTHz={lasers.data?.find((l) => l.id === c.laserId)?.carrierTHz}
+                      loOffsetGHz={c.loOffsetGHz}
+                    />
                   </td>
                   <td className={td}>{formatInterval([c.rfInput.minGHz, c.rfInput.maxGHz], "")}</td>
                   <td className={td}>{formatMHz(r?.linewidthMHz, 2)}</td>
                   <td className={td}>{formatNumber(r?.pdInputMW, 3)}</td>
-                  <td className={td}>{r ? (r.feasibleGHz.length ? r.feasibleGHz.map((iv) => formatInterval(iv, "")).join(", ") : "none") : "–"}</td>
-                  <td className={td}>{r ? (r.placeGHz === null ? `none (${r.placeReason ?? ""})` : formatGHz(r.placeGHz)) : "–"}</td>
+                  <td className={td}>
+                    {r
+                      ? r.feasibleGHz.length
+                        ? r.feasibleGHz.map((iv) => formatInterval(iv, "")).join(", ")
+                        : "none"
+                      : "–"}
+                  </td>
+                  <td className={td}>
+                    {r ? (r.placeGHz === null ? `none (${r.placeReason ?? ""})` : formatGHz(r.placeGHz)) : "–"}
+                  </td>
                 </tr>
               );
             })}
@@ -268,10 +296,18 @@ export function MissionReport({ missionId }: { missionId: string }) {
                 <td className={td}>{r.sideband}</td>
                 <td className={td}>{r.result?.ifSlotGHz ? formatInterval(r.result.ifSlotGHz, "") : "no slot"}</td>
                 <td className={td}>{r.result?.imageGHz ? formatInterval(r.result.imageGHz, "") : "–"}</td>
-                <td className={td}>{r.result?.imageGHz ? (r.result.imageRejectionDB === null ? "full" : formatDB(r.result.imageRejectionDB)) : "–"}</td>
+                <td className={td}>
+                  {r.result?.imageGHz
+                    ? r.result.imageRejectionDB === null
+                      ? "full"
+                      : formatDB(r.result.imageRejectionDB)
+                    : "–"}
+                </td>
                 <td className={td}>{formatMHz(r.result?.radiometricBandwidthMHz, 2)}</td>
                 <td className={td}>{formatNumber(r.channel.integrationMs, 1)}</td>
-                <td className={`${td} ${r.nedt.state === "unmet" ? "font-semibold text-sev-error" : ""}`}>{formatK(r.result?.nedtK)}</td>
+                <td className={`${td} ${r.nedt.state === "unmet" ? "font-semibold text-sev-error" : ""}`}>
+                  {formatK(r.result?.nedtK)}
+                </td>
                 <td className={td}>{r.channel.requiredNedtK === null ? "–" : formatK(r.channel.requiredNedtK)}</td>
                 <td className={td}>{r.worst ? `${r.worst.severity}: ${r.worst.code}` : "none"}</td>
               </tr>
@@ -286,18 +322,19 @@ export function MissionReport({ missionId }: { missionId: string }) {
           <div key={g.chain} className="mb-2">
             <h3 className="font-semibold">Chain {g.chain}</h3>
             <ul>
-              {[...g.chainFindings.map((f) => ({ where: "chain", f })), ...g.channels.flatMap((c) => c.findings.map((f) => ({ where: c.channel, f })))].map(
-                ({ where, f }, i) => (
-                  <li key={i} className="flex gap-2 border-b border-ink/5 py-0.5">
-                    <span className="shrink-0">
-                      <SeverityBadge severity={f.severity} />
-                    </span>
-                    <span className="w-16 shrink-0 font-medium">{where}</span>
-                    <span className="w-40 shrink-0 font-mono text-[11px]">{f.code}</span>
-                    <span>{f.message}</span>
-                  </li>
-                ),
-              )}
+              {[
+                ...g.chainFindings.map((f) => ({ where: "chain", f })),
+                ...g.channels.flatMap((c) => c.findings.map((f) => ({ where: c.channel, f }))),
+              ].map(({ where, f }, i) => (
+                <li key={i} className="flex gap-2 border-b border-ink/5 py-0.5">
+                  <span className="shrink-0">
+                    <SeverityBadge severity={f.severity} />
+                  </span>
+                  <span className="w-16 shrink-0 font-medium">{where}</span>
+                  <span className="w-40 shrink-0 font-mono text-[11px]">{f.code}</span>
+                  <span>{f.message}</span>
+                </li>
+              ))}
             </ul>
           </div>
         ))}
@@ -305,11 +342,13 @@ export function MissionReport({ missionId }: { missionId: string }) {
 
       <Section title="Sources of reference values">
         <ul className="list-disc pl-5 text-xs">
-          <li>Rules, units and the result document: Heterolane plan model v1 (heterolane.plan/1, heterolane.result/1).</li>
           <li>
-            NEΔT: the total-power radiometer equation with gain fluctuations, (T_A + T_R)·√(1/(Bτ) + (ΔG/G)²), generalised to the resonator
-            response (F. T. Ulaby, D. G. Long, Microwave Radar and Radiometric Remote Sensing, 2014; N. Skou, D. M. Le Vine, Microwave
-            Radiometer Systems: Design and Analysis, 2nd ed.).
+            Rules, units and the result document: Heterolane plan model v1 (heterolane.plan/1, heterolane.result/1).
+          </li>
+          <li>
+            NEΔT: the total-power radiometer equation with gain fluctuations, (T_A + T_R)·√(1/(Bτ) + (ΔG/G)²),
+            generalised to the resonator response (F. T. Ulaby, D. G. Long, Microwave Radar and Radiometric Remote
+            Sensing, 2014; N. Skou, D. M. Le Vine, Microwave Radiometer Systems: Design and Analysis, 2nd ed.).
           </li>
           <li>Lock sideband amplitudes: Bessel functions of the first kind J_m(β) of phase modulation.</li>
           {bandSources.map((s) => (
@@ -335,7 +374,15 @@ function LoOptical({ carrierTHz, loOffsetGHz }: { carrierTHz: number | undefined
 }
 
 /** The wanted sideband's resonator mode as an optical frequency (carrier ± k × FSR), when both are known. */
-function SidebandOptical({ carrierTHz, fsrGHz, signedMode }: { carrierTHz: number | undefined; fsrGHz: number | undefined; signedMode: number }) {
+function SidebandOptical({
+  carrierTHz,
+  fsrGHz,
+  signedMode,
+}: {
+  carrierTHz: number | undefined;
+  fsrGHz: number | undefined;
+  signedMode: number;
+}) {
   if (carrierTHz === undefined || fsrGHz === undefined) return null;
   return (
     <span className="block text-xs">

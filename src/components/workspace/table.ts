@@ -25,7 +25,11 @@ export function compareCells(a: Cell, b: Cell): number {
 }
 
 /** A stable sort by one column; missing values stay at the end in both directions. */
-export function sortRows<R, K extends string>(rows: readonly R[], sort: SortState<K>, get: (row: R, key: K) => Cell): R[] {
+export function sortRows<R, K extends string>(
+  rows: readonly R[],
+  sort: SortState<K>,
+  get: (row: R, key: K) => Cell,
+): R[] {
   const sign = sort.dir === "asc" ? 1 : -1;
   return rows
     .map((row, index) => ({ row, index, v: get(row, sort.key) }))

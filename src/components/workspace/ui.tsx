@@ -5,7 +5,8 @@ import type { Severity } from "@/queries/types";
 export const LASER_SAFETY_TEXT =
   "Class 3B/4 1550 nm sources may be in use: follow IEC 60825-1 and your site's laser safety officer; figures here are planning values.";
 
-export const SENSITIVITY_TEXT = "Sensitivity figures (NEΔT, radiometric bandwidth) are design estimates, not calibration.";
+export const SENSITIVITY_TEXT =
+  "Sensitivity figures (NEΔT, radiometric bandwidth) are design estimates, not calibration.";
 
 /** The short laser-safety caution shown wherever optical power is entered or shown. */
 export function LaserSafetyNote({ className = "" }: { className?: string }) {

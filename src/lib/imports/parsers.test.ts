@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { parseTuningMap } from "./parseTuningMap";
-import { parseDetectorResponse } from "./parseDetectorResponse";
-import { parseChannelCsv } from "./parseChannelCsv";
-import { channelsToCsv, type ChannelCsvSource } from "./channelsToCsv";
-import { decodeUtf8 } from "./decodeUtf8";
-import { CHANNEL_COLUMNS } from "./internals/channelColumns";
+import { parseTuningMap } from "./parse-tuning-map";
+import { parseDetectorResponse } from "./parse-detector-response";
+import { parseChannelCsv } from "./parse-channel-csv";
+import { channelsToCsv, type ChannelCsvSource } from "./channels-to-csv";
+import { decodeUtf8 } from "./decode-utf8";
+import { CHANNEL_COLUMNS } from "./internals/channel-columns";
 
 const CHAINS = [
   { id: "11111111-1111-4111-8111-111111111111", key: "A" },
@@ -14,10 +14,16 @@ const CHAINS = [
 
 describe("decodeUtf8", () => {
   it("accepts UTF-8 (with a byte-order mark) and refuses Latin-1, UTF-16 and binary", () => {
-    expect(decodeUtf8(new TextEncoder().encode("\uFEFFoffsetGHz\n150 µ"))).toEqual({ ok: true, text: "offsetGHz\n150 µ" });
+    expect(decodeUtf8(new TextEncoder().encode("\uFEFFoffsetGHz\n150 µ"))).toEqual({
+      ok: true,
+      text: "offsetGHz\n150 µ",
+    });
     expect(decodeUtf8(Uint8Array.from([0x6f, 0x66, 0xb5, 0x0a])).ok).toBe(false); // Latin-1 µ
     expect(decodeUtf8(Uint8Array.from([0xff, 0xfe, 0x6f, 0x00])).ok).toBe(false); // UTF-16LE
-    expect(decodeUtf8(Uint8Array.from([0x6f, 0x00, 0x66]))).toMatchObject({ ok: false, message: expect.stringContaining("NUL") });
+    expect(decodeUtf8(Uint8Array.from([0x6f, 0x00, 0x66]))).toMatchObject({
+      ok: false,
+      message: expect.stringContaining("NUL"),
+    });
   });
 });
 
@@ -54,7 +60,10 @@ describe("parseTuningMap", () => {
     expect(parseTuningMap("  \n\n", 10)).toMatchObject({ ok: false, issues: [{ message: "the file is empty" }] });
     expect(parseTuningMap("offset\n150\n", 10)).toMatchObject({ ok: false, issues: [{ row: 1, column: "offsetGHz" }] });
     expect(parseTuningMap("offsetGHz\n", 10)).toMatchObject({ ok: false, issues: [{ row: null }] });
-    expect(parseTuningMap("offsetGHz,sp\n150,1\n151\n", 10)).toMatchObject({ ok: false, issues: [{ row: 3, column: null }] });
+    expect(parseTuningMap("offsetGHz,sp\n150,1\n151\n", 10)).toMatchObject({
+      ok: false,
+      issues: [{ row: 3, column: null }],
+    });
   });
 
   it("counts rows as a spreadsheet does, blank lines included", () => {
@@ -70,7 +79,8 @@ describe("parseTuningMap", () => {
         if (!r.ok) return;
         expect(r.points).toBe(pts.length);
         for (const p of pts) {
-          const n = r.intervals.filter((iv) => p >= iv.minGHz && p <= iv.maxGHz).length + (r.isolatedGHz.includes(p) ? 1 : 0);
+          const n =
+            r.intervals.filter((iv) => p >= iv.minGHz && p <= iv.maxGHz).length + (r.isolatedGHz.includes(p) ? 1 : 0);
           expect(n).toBe(1);
         }
       }),
@@ -92,8 +102,14 @@ describe("parseDetectorResponse", () => {
         { row: 4, column: "frequencyGHz", message: "repeats the frequency of row 2" },
       ],
     });
-    expect(parseDetectorResponse("frequencyGHz\n1\n", 3)).toMatchObject({ ok: false, issues: [{ row: 1, column: "responseDB" }] });
-    expect(parseDetectorResponse("frequencyGHz,responseDB\n1,0\n2,-10\n", 3)).toMatchObject({ ok: false, issues: [{ column: "responseDB" }] });
+    expect(parseDetectorResponse("frequencyGHz\n1\n", 3)).toMatchObject({
+      ok: false,
+      issues: [{ row: 1, column: "responseDB" }],
+    });
+    expect(parseDetectorResponse("frequencyGHz,responseDB\n1,0\n2,-10\n", 3)).toMatchObject({
+      ok: false,
+      issues: [{ column: "responseDB" }],
+    });
   });
 });
 
@@ -136,7 +152,19 @@ describe("channel CSV", () => {
   });
 
   it("guards text a spreadsheet would run as a formula and reads it back unchanged", () => {
-    const src = { key: "f1", name: "=HYPERLINK(\"x\")", chain: "A", centerGHz: 1, bandwidthMHz: 1, dsbOffsetGHz: null, integrationMs: 1, antennaK: 1, receiverK: 1, gainStability: 0, requiredNedtK: null };
+    const src = {
+      key: "f1",
+      name: '=HYPERLINK("x")',
+      chain: "A",
+      centerGHz: 1,
+      bandwidthMHz: 1,
+      dsbOffsetGHz: null,
+      integrationMs: 1,
+      antennaK: 1,
+      receiverK: 1,
+      gainStability: 0,
+      requiredNedtK: null,
+    };
     const csv = channelsToCsv([src]);
     expect(csv.split("\r\n")[1]).toBe('f1,"\'=HYPERLINK(""x"")",A,1,1,,1,1,1,0,');
     const back = parseChannelCsv(csv, CHAINS);
@@ -147,14 +175,18 @@ describe("channel CSV", () => {
     const csv = [
       "key,name,chain,centerGHz,bandwidthMHz,dsbOffsetGHz,integrationMs,antennaK,receiverK,gainStability,requiredNedtK",
       "wv1,line centre,A,183.31,10,,10,250,5000,0,20",
-      "wv2,\"wing, far\",Z,abc,10,0.001,10,250,5000,,",
+      'wv2,"wing, far",Z,abc,10,0.001,10,250,5000,,',
       "wv1,dup,B,183,-1,,10,250,5000,,",
     ].join("\n");
     const r = parseChannelCsv(csv, CHAINS);
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.valid).toBe(false);
-    expect(r.rows[0]).toMatchObject({ row: 2, errors: [], channel: { key: "wv1", chain: "A", dsbOffsetGHz: null, requiredNedtK: 20 } });
+    expect(r.rows[0]).toMatchObject({
+      row: 2,
+      errors: [],
+      channel: { key: "wv1", chain: "A", dsbOffsetGHz: null, requiredNedtK: 20 },
+    });
     expect(r.rows[1]).toEqual({
       row: 3,
       errors: [
@@ -172,20 +204,34 @@ describe("channel CSV", () => {
   });
 
   it("refuses unknown and missing columns for the whole file", () => {
-    expect(parseChannelCsv("key,name,chain,centerGHz,bandwidthMHz,integrationMs,antennaK,receiverK,colour\n", CHAINS)).toMatchObject({
+    expect(
+      parseChannelCsv("key,name,chain,centerGHz,bandwidthMHz,integrationMs,antennaK,receiverK,colour\n", CHAINS),
+    ).toMatchObject({
       ok: false,
       issues: [{ row: 1, column: "colour" }],
     });
     const missing = parseChannelCsv("key,name\nx,y\n", CHAINS);
     expect(missing.ok).toBe(false);
-    if (!missing.ok) expect(missing.issues.map((i) => i.column)).toEqual(["chain", "centerGHz", "bandwidthMHz", "integrationMs", "antennaK", "receiverK"]);
+    if (!missing.ok)
+      expect(missing.issues.map((i) => i.column)).toEqual([
+        "chain",
+        "centerGHz",
+        "bandwidthMHz",
+        "integrationMs",
+        "antennaK",
+        "receiverK",
+      ]);
   });
 
   it("refuses a file above the row limit", () => {
     const csv = "offsetGHz\n" + "1\n".repeat(11);
     expect(parseTuningMap(csv, 1).ok).toBe(true);
-    const big = "key,name,chain,centerGHz,bandwidthMHz,integrationMs,antennaK,receiverK\n" + "a,b,A,1,1,1,1,1\n".repeat(100_001);
+    const big =
+      "key,name,chain,centerGHz,bandwidthMHz,integrationMs,antennaK,receiverK\n" + "a,b,A,1,1,1,1,1\n".repeat(100_001);
     const r = parseChannelCsv(big, CHAINS);
-    expect(r).toMatchObject({ ok: false, issues: [{ row: 100_002, message: "the file has more than 100000 data rows" }] });
+    expect(r).toMatchObject({
+      ok: false,
+      issues: [{ row: 100_002, message: "the file has more than 100000 data rows" }],
+    });
   });
 });

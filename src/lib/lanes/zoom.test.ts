@@ -1,14 +1,17 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { scaleLinear } from "d3-scale";
-import { zoomAbout } from "./zoomAbout";
-import { clampDomain } from "./clampDomain";
-import { zoomToItem } from "./zoomToItem";
+import { zoomAbout } from "./zoom-about";
+import { clampDomain } from "./clamp-domain";
+import { zoomToItem } from "./zoom-to-item";
 import { GHZ_LIMITS, IF_LIMITS } from "./internals/limits";
 import type { Domain } from "./types";
 
 const domainArb = fc
-  .record({ lo: fc.double({ min: -50, max: 400, noNaN: true }), span: fc.double({ min: 0.002, max: 360, noNaN: true }) })
+  .record({
+    lo: fc.double({ min: -50, max: 400, noNaN: true }),
+    span: fc.double({ min: 0.002, max: 360, noNaN: true }),
+  })
   .map(({ lo, span }): Domain => [lo, lo + span]);
 
 describe("zoomAbout", () => {
@@ -19,13 +22,18 @@ describe("zoomAbout", () => {
 
   it("keeps the pivot on the same pixel (checked with a d3 linear scale)", () => {
     fc.assert(
-      fc.property(domainArb, fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0.1, max: 10, noNaN: true }), (d, t, f) => {
-        const pivot = d[0] + t * (d[1] - d[0]);
-        const next = zoomAbout(d, f, pivot, GHZ_LIMITS);
-        const before = scaleLinear().domain(d).range([0, 1000]);
-        const after = scaleLinear().domain(next).range([0, 1000]);
-        expect(Math.abs(after(pivot) - before(pivot))).toBeLessThan(1e-6);
-      }),
+      fc.property(
+        domainArb,
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.double({ min: 0.1, max: 10, noNaN: true }),
+        (d, t, f) => {
+          const pivot = d[0] + t * (d[1] - d[0]);
+          const next = zoomAbout(d, f, pivot, GHZ_LIMITS);
+          const before = scaleLinear().domain(d).range([0, 1000]);
+          const after = scaleLinear().domain(next).range([0, 1000]);
+          expect(Math.abs(after(pivot) - before(pivot))).toBeLessThan(1e-6);
+        },
+      ),
     );
   });
 
@@ -41,14 +49,19 @@ describe("zoomAbout", () => {
 
   it("zoom in then out about the same point returns the domain (when the limits do not bite)", () => {
     fc.assert(
-      fc.property(domainArb, fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 1, max: 8, noNaN: true }), (d, t, f) => {
-        const span = d[1] - d[0];
-        fc.pre(span / f >= GHZ_LIMITS.minSpan);
-        const pivot = d[0] + t * span;
-        const back = zoomAbout(zoomAbout(d, f, pivot, GHZ_LIMITS), 1 / f, pivot, GHZ_LIMITS);
-        expect(back[0]).toBeCloseTo(d[0], 6);
-        expect(back[1]).toBeCloseTo(d[1], 6);
-      }),
+      fc.property(
+        domainArb,
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.double({ min: 1, max: 8, noNaN: true }),
+        (d, t, f) => {
+          const span = d[1] - d[0];
+          fc.pre(span / f >= GHZ_LIMITS.minSpan);
+          const pivot = d[0] + t * span;
+          const back = zoomAbout(zoomAbout(d, f, pivot, GHZ_LIMITS), 1 / f, pivot, GHZ_LIMITS);
+          expect(back[0]).toBeCloseTo(d[0], 6);
+          expect(back[1]).toBeCloseTo(d[1], 6);
+        },
+      ),
     );
   });
 
@@ -93,16 +106,20 @@ describe("zoomToItem", () => {
   });
   it("contains the item, is centred on it and respects the limits", () => {
     fc.assert(
-      fc.property(fc.double({ min: -400, max: 400, noNaN: true }), fc.double({ min: 0, max: 300, noNaN: true }), (lo, w) => {
-        const [a, b] = zoomToItem(lo, lo + w, 0.1, GHZ_LIMITS);
-        expect(b - a).toBeGreaterThanOrEqual(GHZ_LIMITS.minSpan * (1 - 1e-9));
-        expect(b - a).toBeLessThanOrEqual(GHZ_LIMITS.maxSpan * (1 + 1e-9));
-        expect((a + b) / 2).toBeCloseTo(lo + w / 2, 6);
-        if (w * 1.2 <= GHZ_LIMITS.maxSpan) {
-          expect(a).toBeLessThanOrEqual(lo + 1e-9);
-          expect(b).toBeGreaterThanOrEqual(lo + w - 1e-9);
-        }
-      }),
+      fc.property(
+        fc.double({ min: -400, max: 400, noNaN: true }),
+        fc.double({ min: 0, max: 300, noNaN: true }),
+        (lo, w) => {
+          const [a, b] = zoomToItem(lo, lo + w, 0.1, GHZ_LIMITS);
+          expect(b - a).toBeGreaterThanOrEqual(GHZ_LIMITS.minSpan * (1 - 1e-9));
+          expect(b - a).toBeLessThanOrEqual(GHZ_LIMITS.maxSpan * (1 + 1e-9));
+          expect((a + b) / 2).toBeCloseTo(lo + w / 2, 6);
+          if (w * 1.2 <= GHZ_LIMITS.maxSpan) {
+            expect(a).toBeLessThanOrEqual(lo + 1e-9);
+            expect(b).toBeGreaterThanOrEqual(lo + w - 1e-9);
+          }
+        },
+      ),
     );
   });
 });

@@ -1,7 +1,7 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { flexGridSlot } from "./flexGridSlot";
-import { GRID_SPACINGS_GHZ, type GridSpacingGHz, nearestGridChannel } from "./nearestGridChannel";
+import { flexGridSlot } from "./flex-grid-slot";
+import { GRID_SPACINGS_GHZ, type GridSpacingGHz, nearestGridChannel } from "./nearest-grid-channel";
 
 // Simpler independent implementation: scan the channel indices around the
 // input and keep the closest centre (ties to the higher index).

@@ -1,10 +1,10 @@
 import fc from "fast-check";
 import { derivative, evaluate } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { groupIndex } from "./groupIndex";
-import { centralDifference } from "./internals/finiteDifference";
-import { lnExtraordinaryIndexJundt } from "./lnExtraordinaryIndexJundt";
-import { lnIndexZelmon } from "./lnIndexZelmon";
+import { groupIndex } from "./group-index";
+import { centralDifference } from "./internals/finite-difference";
+import { lnExtraordinaryIndexJundt } from "./ln-extraordinary-index-jundt";
+import { lnIndexZelmon } from "./ln-index-zelmon";
 
 // Independent implementations: the same published formulas typed out as
 // strings and evaluated (and differentiated symbolically) by mathjs.
@@ -88,7 +88,10 @@ describe("groupIndex", () => {
     const dE = derivative(ZELMON_E, "x");
     fc.assert(
       fc.property(lambda, (x) => {
-        expect(groupIndex(x, { fit: "zelmon", axis: "e" }).dnDlambdaPerUm).toBeCloseTo(dE.evaluate({ x }) as number, 12);
+        expect(groupIndex(x, { fit: "zelmon", axis: "e" }).dnDlambdaPerUm).toBeCloseTo(
+          dE.evaluate({ x }) as number,
+          12,
+        );
       }),
     );
     const dJ = derivative(jundtAt(60), "x");

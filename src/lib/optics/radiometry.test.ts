@@ -1,9 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { physicalTemperatureFromRadiation } from "./physicalTemperatureFromRadiation";
-import { planckRadiationTemperature } from "./planckRadiationTemperature";
-import { quantumLimitK } from "./quantumLimitK";
-import { receiverNoise } from "./receiverNoise";
+import { physicalTemperatureFromRadiation } from "./physical-temperature-from-radiation";
+import { planckRadiationTemperature } from "./planck-radiation-temperature";
+import { quantumLimitK } from "./quantum-limit-k";
+import { receiverNoise } from "./receiver-noise";
 
 const H = 6.626_070_15e-34; // exact, 2019 SI
 const K = 1.380_649e-23; // exact, 2019 SI
@@ -41,34 +41,52 @@ describe("planckRadiationTemperature", () => {
 
   it("agrees with the textbook form written with exp", () => {
     fc.assert(
-      fc.property(fc.double({ min: 1, max: 5000, noNaN: true }), fc.double({ min: 1, max: 1000, noNaN: true }), (t, f) => {
-        const x = (H * f * 1e9) / (K * t);
-        const direct = (H * f * 1e9) / K / (Math.exp(x) - 1);
-        expect(planckRadiationTemperature(t, f) / direct).toBeCloseTo(1, 6);
-      }),
+      fc.property(
+        fc.double({ min: 1, max: 5000, noNaN: true }),
+        fc.double({ min: 1, max: 1000, noNaN: true }),
+        (t, f) => {
+          const x = (H * f * 1e9) / (K * t);
+          const direct = (H * f * 1e9) / K / (Math.exp(x) - 1);
+          expect(planckRadiationTemperature(t, f) / direct).toBeCloseTo(1, 6);
+        },
+      ),
     );
   });
 
   it("lies below T and approaches T − hf/2k when hf ≪ kT", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.01, max: 5000, noNaN: true }), fc.double({ min: 1, max: 1000, noNaN: true }), (t, f) => {
-        expect(planckRadiationTemperature(t, f)).toBeLessThan(t);
-      }),
+      fc.property(
+        fc.double({ min: 0.01, max: 5000, noNaN: true }),
+        fc.double({ min: 1, max: 1000, noNaN: true }),
+        (t, f) => {
+          expect(planckRadiationTemperature(t, f)).toBeLessThan(t);
+        },
+      ),
     );
     fc.assert(
-      fc.property(fc.double({ min: 200, max: 5000, noNaN: true }), fc.double({ min: 1, max: 100, noNaN: true }), (t, f) => {
-        const hfk = quantumLimitK(f);
-        // next term of the expansion is (hf/k)²/(12T)
-        expect(Math.abs(planckRadiationTemperature(t, f) - (t - hfk / 2))).toBeLessThan((hfk * hfk) / (12 * t) * 1.01 + 1e-9);
-      }),
+      fc.property(
+        fc.double({ min: 200, max: 5000, noNaN: true }),
+        fc.double({ min: 1, max: 100, noNaN: true }),
+        (t, f) => {
+          const hfk = quantumLimitK(f);
+          // next term of the expansion is (hf/k)²/(12T)
+          expect(Math.abs(planckRadiationTemperature(t, f) - (t - hfk / 2))).toBeLessThan(
+            ((hfk * hfk) / (12 * t)) * 1.01 + 1e-9,
+          );
+        },
+      ),
     );
   });
 
   it("round-trips through its inverse", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0.1, max: 5000, noNaN: true }), fc.double({ min: 1, max: 1000, noNaN: true }), (t, f) => {
-        expect(physicalTemperatureFromRadiation(planckRadiationTemperature(t, f), f) / t).toBeCloseTo(1, 9);
-      }),
+      fc.property(
+        fc.double({ min: 0.1, max: 5000, noNaN: true }),
+        fc.double({ min: 1, max: 1000, noNaN: true }),
+        (t, f) => {
+          expect(physicalTemperatureFromRadiation(planckRadiationTemperature(t, f), f) / t).toBeCloseTo(1, 9);
+        },
+      ),
     );
   });
 
@@ -110,7 +128,12 @@ describe("receiverNoise (design estimate)", () => {
         fc.double({ min: 0, max: 10, noNaN: true }),
         fc.double({ min: 0, max: 400, noNaN: true }),
         (f, ph, opt, lossDB, tPhys) => {
-          const r = receiverNoise({ rfGHz: f, photonEfficiency: ph, opticalEfficiency: opt, frontEnd: { lossDB, physicalK: tPhys } });
+          const r = receiverNoise({
+            rfGHz: f,
+            photonEfficiency: ph,
+            opticalEfficiency: opt,
+            frontEnd: { lossDB, physicalK: tPhys },
+          });
           const loss = 10 ** (lossDB / 10);
           const cascade = friis([
             { tK: (loss - 1) * tPhys, gain: 1 / loss },
@@ -124,12 +147,19 @@ describe("receiverNoise (design estimate)", () => {
   });
 
   it("refuses efficiencies outside (0, 1] and negative loss, naming the field", () => {
-    expect(() => receiverNoise({ rfGHz: 183.31, photonEfficiency: 0, opticalEfficiency: 1 })).toThrow(/photonEfficiency/);
+    expect(() => receiverNoise({ rfGHz: 183.31, photonEfficiency: 0, opticalEfficiency: 1 })).toThrow(
+      /photonEfficiency/,
+    );
     expect(() => receiverNoise({ rfGHz: 183.31, photonEfficiency: 0.1, opticalEfficiency: 50 })).toThrow(
       /opticalEfficiency: must be at most 1/,
     );
     expect(() =>
-      receiverNoise({ rfGHz: 183.31, photonEfficiency: 0.1, opticalEfficiency: 1, frontEnd: { lossDB: -1, physicalK: 290 } }),
+      receiverNoise({
+        rfGHz: 183.31,
+        photonEfficiency: 0.1,
+        opticalEfficiency: 1,
+        frontEnd: { lossDB: -1, physicalK: 290 },
+      }),
     ).toThrow(/frontEnd.lossDB/);
   });
 });

@@ -1,9 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { freeSpectralRange } from "./freeSpectralRange";
-import { linewidthFromQ } from "./linewidthFromQ";
-import { loadedQFromLinewidth } from "./loadedQFromLinewidth";
-import { radiusForFsr } from "./radiusForFsr";
+import { freeSpectralRange } from "./free-spectral-range";
+import { linewidthFromQ } from "./linewidth-from-q";
+import { loadedQFromLinewidth } from "./loaded-q-from-linewidth";
+import { radiusForFsr } from "./radius-for-fsr";
 
 const radius = fc.double({ min: 10, max: 10_000, noNaN: true });
 const ng = fc.double({ min: 1.3, max: 4, noNaN: true });
@@ -64,10 +64,14 @@ describe("linewidthFromQ / loadedQFromLinewidth", () => {
 
   it("round-trips Q → linewidth → Q and is inversely proportional", () => {
     fc.assert(
-      fc.property(fc.double({ min: 100, max: 1000, noNaN: true }), fc.double({ min: 1e3, max: 1e11, noNaN: true }), (nu, q) => {
-        expect(loadedQFromLinewidth(nu, linewidthFromQ(nu, q)) / q).toBeCloseTo(1, 12);
-        expect(linewidthFromQ(nu, 2 * q) * 2).toBeCloseTo(linewidthFromQ(nu, q), 9);
-      }),
+      fc.property(
+        fc.double({ min: 100, max: 1000, noNaN: true }),
+        fc.double({ min: 1e3, max: 1e11, noNaN: true }),
+        (nu, q) => {
+          expect(loadedQFromLinewidth(nu, linewidthFromQ(nu, q)) / q).toBeCloseTo(1, 12);
+          expect(linewidthFromQ(nu, 2 * q) * 2).toBeCloseTo(linewidthFromQ(nu, q), 9);
+        },
+      ),
     );
   });
 

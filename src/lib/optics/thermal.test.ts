@@ -1,9 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { fsrShiftPerKelvin } from "./fsrShiftPerKelvin";
-import { lnExtraordinaryIndexJundt } from "./lnExtraordinaryIndexJundt";
-import { lnThermalExpansion, LN_EXPANSION_A } from "./lnThermalExpansion";
-import { modeShiftPerKelvin } from "./modeShiftPerKelvin";
+import { fsrShiftPerKelvin } from "./fsr-shift-per-kelvin";
+import { lnExtraordinaryIndexJundt } from "./ln-extraordinary-index-jundt";
+import { lnThermalExpansion, LN_EXPANSION_A } from "./ln-thermal-expansion";
+import { modeShiftPerKelvin } from "./mode-shift-per-kelvin";
 
 /*
  * Independent check, with no closed-form formula: a disc of radius R(T) with
@@ -26,8 +26,8 @@ function modeFrequencyHz(m: number, r19: number, t: number, guessHz: number): nu
 }
 function setup(carrierTHz: number, fsrGHz: number, t: number) {
   const ng = modeShiftPerKelvin(carrierTHz, t).ng;
-  const r = (C / (2 * Math.PI * fsrGHz * 1e9 * ng));
-  const r19 = r / (radiusAt(1, t));
+  const r = C / (2 * Math.PI * fsrGHz * 1e9 * ng);
+  const r19 = r / radiusAt(1, t);
   const n = lnExtraordinaryIndexJundt((C / (carrierTHz * 1e12)) * 1e6, t);
   const m = Math.round((2 * Math.PI * r * n * carrierTHz * 1e12) / C);
   return { m, r19, guess: carrierTHz * 1e12 };

@@ -1,8 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { frequencyTHzFromNm } from "./frequencyTHzFromNm";
+import { frequencyTHzFromNm } from "./frequency-thz-from-nm";
 import { OpticsInputError } from "./internals/errors";
-import { wavelengthNmFromTHz } from "./wavelengthNmFromTHz";
+import { wavelengthNmFromTHz } from "./wavelength-nm-from-thz";
 
 // Simpler independent form: SI units throughout, λ[m] = c / f[Hz].
 const lambdaNmSi = (fTHz: number) => (299_792_458 / (fTHz * 1e12)) * 1e9;

@@ -59,7 +59,14 @@ describe("checkChainAtOffset: one rule at a time on example 1 (δ = 19.34 MHz, g
   });
 
   it("image-response: 49.48 dB against a 50 dB requirement", () => {
-    const f = find(checkChainAtOffset(example1((p) => (p.settings.imageRejectionDB = 50)), "A", 184.81), "image-response");
+    const f = find(
+      checkChainAtOffset(
+        example1((p) => (p.settings.imageRejectionDB = 50)),
+        "A",
+        184.81,
+      ),
+      "image-response",
+    );
     expect(f).toHaveLength(1);
     expect(f[0]!.data.imageRejectionDB).toBeCloseTo(49.4817, 3);
     expect(f[0]!.message).toContain("0.52 dB short");
@@ -169,7 +176,9 @@ describe("checkChainAtOffset on any valid plan", () => {
             const chainLevel = all.findIndex((f) => f.channel !== null);
             if (chainLevel >= 0) expect(all.slice(chainLevel).every((f) => f.channel !== null)).toBe(true);
             const key = (f: Finding) => `${f.code}|${f.channel}|${JSON.stringify(f.data)}`;
-            const expected = all.filter((f) => f.severity === "error" && L_DEPENDENT_ERROR_CODES.includes(f.code)).map(key);
+            const expected = all
+              .filter((f) => f.severity === "error" && L_DEPENDENT_ERROR_CODES.includes(f.code))
+              .map(key);
             const mapOnly = checkChainAtOffset(plan, chain.id, at, { mapOnly: true });
             expect(mapOnly.map(key)).toEqual(expected);
           }

@@ -14,6 +14,11 @@ import type { Finding } from "./types";
  * skipped. For many offsets of one chain, build the context once with
  * `chainContext` and call `evaluateChain` from `internals/`.
  */
-export function checkChainAtOffset(plan: Plan, chainId: string, loOffsetGHz: number, options: EvaluateOptions = {}): Finding[] {
+export function checkChainAtOffset(
+  plan: Plan,
+  chainId: string,
+  loOffsetGHz: number,
+  options: EvaluateOptions = {},
+): Finding[] {
   return evaluateChain(chainContext(plan, chainId), loOffsetGHz, options).findings;
 }

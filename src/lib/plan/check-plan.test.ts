@@ -10,9 +10,27 @@ function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], plan
   expect(Object.keys(doc)).toEqual(["format", "chains", "channels", "spurs", "findings"]);
   expect(doc.chains.map((c) => c.id)).toEqual(planChainIds);
   expect(doc.channels.map((c) => c.id)).toEqual(planChannelIds);
-  for (const c of doc.chains) expect(Object.keys(c)).toEqual(["id", "linewidthMHz", "pdInputMW", "feasibleGHz", "excludedGHz", "placeGHz", "placeReason"]);
+  for (const c of doc.chains)
+    expect(Object.keys(c)).toEqual([
+      "id",
+      "linewidthMHz",
+      "pdInputMW",
+      "feasibleGHz",
+      "excludedGHz",
+      "placeGHz",
+      "placeReason",
+    ]);
   for (const c of doc.channels) {
-    expect(Object.keys(c)).toEqual(["id", "ifSlotGHz", "occupiedGHz", "imageGHz", "imageRejectionDB", "radiometricBandwidthMHz", "nedtK", "lockReplicaDB"]);
+    expect(Object.keys(c)).toEqual([
+      "id",
+      "ifSlotGHz",
+      "occupiedGHz",
+      "imageGHz",
+      "imageRejectionDB",
+      "radiometricBandwidthMHz",
+      "nedtK",
+      "lockReplicaDB",
+    ]);
     if (c.ifSlotGHz === null) {
       expect(c.occupiedGHz).toBeNull();
       expect(c.nedtK).toBeNull();
@@ -30,7 +48,10 @@ function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], plan
       const fa = SPUR_FAMILIES.indexOf(a.family);
       const fb = SPUR_FAMILIES.indexOf(b.family);
       expect(fa).toBeLessThanOrEqual(fb);
-      if (fa === fb) expect(a.bandGHz[0] < b.bandGHz[0] || (a.bandGHz[0] === b.bandGHz[0] && a.bandGHz[1] <= b.bandGHz[1])).toBe(true);
+      if (fa === fb)
+        expect(a.bandGHz[0] < b.bandGHz[0] || (a.bandGHz[0] === b.bandGHz[0] && a.bandGHz[1] <= b.bandGHz[1])).toBe(
+          true,
+        );
     }
   }
   // findings grouped by chain in input order
@@ -44,7 +65,11 @@ describe("checkPlan", () => {
   it("example 2: document shape, and the findings equal the per-offset check at the written LO", () => {
     const plan = example2();
     const doc = checkPlan(plan);
-    assertDocumentShape(doc, plan.channels.map((c) => c.id), plan.chains.map((c) => c.id));
+    assertDocumentShape(
+      doc,
+      plan.channels.map((c) => c.id),
+      plan.chains.map((c) => c.id),
+    );
     expect(doc.findings).toEqual(checkChainAtOffset(plan, "O2", -121));
     expect(doc.spurs.every((s) => s.chain === "O2")).toBe(true);
     // a spur's hits are channel ids in input order
@@ -58,7 +83,11 @@ describe("checkPlan", () => {
     fc.assert(
       fc.property(arbitraryPlan(), (plan) => {
         const doc = checkPlan(plan);
-        assertDocumentShape(doc, plan.channels.map((c) => c.id), plan.chains.map((c) => c.id));
+        assertDocumentShape(
+          doc,
+          plan.channels.map((c) => c.id),
+          plan.chains.map((c) => c.id),
+        );
       }),
       { numRuns: 150 },
     );

@@ -4,7 +4,14 @@ import { evaluateChain } from "./internals/evaluate-chain";
 import { pair } from "./internals/format";
 import { feasibilityMap } from "./feasibility-map";
 import { placeLo } from "./place-lo";
-import { type ChainResult, type ChannelResult, type Finding, RESULT_FORMAT, type ResultDocument, type Spur } from "./types";
+import {
+  type ChainResult,
+  type ChannelResult,
+  type Finding,
+  RESULT_FORMAT,
+  type ResultDocument,
+  type Spur,
+} from "./types";
 
 /** A JSON-safe number: non-finite values (only reachable with absurd inputs) become null. */
 function finite(v: number | null): number | null {

@@ -21,7 +21,11 @@ function fullCheckCodes(plan: Plan, chainId: string, L: number): FindingCode[] {
 }
 
 /** Points inside every piece, kept `margin` away from its edges (image edges are bisected to 1e-6 GHz). */
-function interiorPoints(pieces: readonly MapPiece[], fractions: readonly number[], margin = 3e-6): { L: number; piece: MapPiece }[] {
+function interiorPoints(
+  pieces: readonly MapPiece[],
+  fractions: readonly number[],
+  margin = 3e-6,
+): { L: number; piece: MapPiece }[] {
   const out: { L: number; piece: MapPiece }[] = [];
   for (const piece of pieces) {
     if (piece.hi - piece.lo <= 2 * margin) continue;
@@ -82,7 +86,9 @@ describe("feasibility map: the worked examples", () => {
       [example2(), "O2"],
     ] as const) {
       const map = feasibilityMap(plan, chain);
-      const all = [...map.feasibleGHz.map((b) => ({ b })), ...map.excludedGHz.map((e) => ({ b: e.bandGHz }))].sort((p, q) => p.b[0] - q.b[0]);
+      const all = [...map.feasibleGHz.map((b) => ({ b })), ...map.excludedGHz.map((e) => ({ b: e.bandGHz }))].sort(
+        (p, q) => p.b[0] - q.b[0],
+      );
       const reach = buildMapModel(plan, chain).reach;
       let total = 0;
       for (const { b } of all) total += b[1] - b[0];
@@ -155,7 +161,10 @@ describe("feasibility map: hand-worked small cases", () => {
   it("a sampled IF excludes the offsets where O straddles fs/2 (nyquist-straddle)", () => {
     // fs = 4 GHz, h = 2. Above the band O = [L − 183.335, L − 183.285] straddles 2 when
     // L − 183.335 < 2 < L − 183.285 ⇔ 185.285 < L < 185.335, and 4 when 187.285 < L < 187.335.
-    const map = feasibilityMap(simple((p) => void (p.detectors[0]!.sampleRateGHz = 4)), "A");
+    const map = feasibilityMap(
+      simple((p) => void (p.detectors[0]!.sampleRateGHz = 4)),
+      "A",
+    );
     const straddles = map.excludedGHz.filter((e) => e.codes.join() === "nyquist-straddle").map((e) => e.bandGHz);
     const above = straddles.filter((b) => b[0] > 183.4);
     expect(above.length).toBe(2);
@@ -188,7 +197,10 @@ describe("feasibility map: hand-worked small cases", () => {
     // Between the bands the slot is [min(L − 180.315, 186.305 − L), max(L − 180.305, 186.315 − L)]:
     // for L ≥ 183.31, O = [186.285 − L, L − 180.285]. O.hi ≤ 6 ⇔ L ≤ 186.285 and O.lo ≥ 0.05 ⇔ L ≤ 186.235;
     // symmetric below: L ≥ 180.385. So the feasible interval is [180.385, 186.235].
-    const map = feasibilityMap(simple((p) => void (p.channels[0]!.dsbOffsetGHz = 3)), "A");
+    const map = feasibilityMap(
+      simple((p) => void (p.channels[0]!.dsbOffsetGHz = 3)),
+      "A",
+    );
     const mid = map.feasibleGHz.find((iv) => iv[0] < 183.31 && iv[1] > 183.31)!;
     expect(mid[0]).toBeCloseTo(180.385, 9);
     expect(mid[1]).toBeCloseTo(186.235, 9);
@@ -196,10 +208,16 @@ describe("feasibility map: hand-worked small cases", () => {
 
   it("a chain with no channels is limited by its reach and drift only; no reach gives an empty map", () => {
     // reach [150, 200], D = 0.02: feasible [150.02, 199.98]
-    const bare = feasibilityMap(example1((p) => void (p.channels = [])), "A");
+    const bare = feasibilityMap(
+      example1((p) => void (p.channels = [])),
+      "A",
+    );
     expect(bare.feasibleGHz).toEqual([[150.02, 199.98]]);
     expect(bare.excludedGHz.map((e) => e.codes)).toEqual([["lo-uncovered"], ["lo-uncovered"]]);
-    const none = feasibilityMap(example1((p) => void (p.lasers[0]!.reach = [])), "A");
+    const none = feasibilityMap(
+      example1((p) => void (p.lasers[0]!.reach = [])),
+      "A",
+    );
     expect(none).toEqual({ feasibleGHz: [], excludedGHz: [] });
   });
 
@@ -276,22 +294,27 @@ describe("feasibility map: properties on random small plans", () => {
 
   it("widening reach never removes a feasible offset", () => {
     fc.assert(
-      fc.property(arbitrarySmallPlanInput(), fc.double({ min: 0, max: 3, noNaN: true }), fc.double({ min: 0, max: 3, noNaN: true }), (input, wl, wh) => {
-        const narrow = parseOrThrow(input);
-        const wideInput = structuredClone(input);
-        const r = wideInput.lasers[0]!.reach[0]!;
-        r.minGHz -= wl;
-        r.maxGHz += wh;
-        const wide = parseOrThrow(wideInput);
-        const before = feasibilityMap(narrow, "A").feasibleGHz;
-        const after = feasibilityMap(wide, "A").feasibleGHz;
-        for (const iv of before) {
-          for (const f of [0, 0.25, 0.5, 0.75, 1]) {
-            const L = iv[0] + f * (iv[1] - iv[0]);
-            expect(after.some((w) => L >= w[0] - 3e-6 && L <= w[1] + 3e-6)).toBe(true);
+      fc.property(
+        arbitrarySmallPlanInput(),
+        fc.double({ min: 0, max: 3, noNaN: true }),
+        fc.double({ min: 0, max: 3, noNaN: true }),
+        (input, wl, wh) => {
+          const narrow = parseOrThrow(input);
+          const wideInput = structuredClone(input);
+          const r = wideInput.lasers[0]!.reach[0]!;
+          r.minGHz -= wl;
+          r.maxGHz += wh;
+          const wide = parseOrThrow(wideInput);
+          const before = feasibilityMap(narrow, "A").feasibleGHz;
+          const after = feasibilityMap(wide, "A").feasibleGHz;
+          for (const iv of before) {
+            for (const f of [0, 0.25, 0.5, 0.75, 1]) {
+              const L = iv[0] + f * (iv[1] - iv[0]);
+              expect(after.some((w) => L >= w[0] - 3e-6 && L <= w[1] + 3e-6)).toBe(true);
+            }
           }
-        }
-      }),
+        },
+      ),
       { numRuns: 150 },
     );
   }, 60_000);

@@ -72,7 +72,12 @@ export function arbitrarySmallPlanInput(opts: SmallPlanOptions = {}): fc.Arbitra
       const input: PlanInput = {
         format: "heterolane.plan/1",
         name: "Demo data: generated small plan",
-        settings: { guardMHz: kHz(g.guardMHz / 1000) * 1000, imageRejectionDB: g.imageDB, spurMaxOrder: 3, replicaLimitDB: -20 },
+        settings: {
+          guardMHz: kHz(g.guardMHz / 1000) * 1000,
+          imageRejectionDB: g.imageDB,
+          spurMaxOrder: 3,
+          replicaLimitDB: -20,
+        },
         lasers: [
           {
             id: "LP",
@@ -87,7 +92,13 @@ export function arbitrarySmallPlanInput(opts: SmallPlanOptions = {}): fc.Arbitra
         ],
         resonators: [{ id: "R", fsrGHz: g.fsr, loadedQ: g.loadedQ }],
         detectors: [
-          { id: "D", minGHz: kHz(g.detMin), maxGHz: kHz(g.detMin + g.detWidth), maxInputMW: 10, sampleRateGHz: g.fs === null ? null : kHz(g.fs) },
+          {
+            id: "D",
+            minGHz: kHz(g.detMin),
+            maxGHz: kHz(g.detMin + g.detWidth),
+            maxInputMW: 10,
+            sampleRateGHz: g.fs === null ? null : kHz(g.fs),
+          },
         ],
         chains: [
           {

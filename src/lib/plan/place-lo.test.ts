@@ -26,7 +26,12 @@ describe("placeLo", () => {
     // 186.455, so the first wins. 180.165 lies exactly half-way between the 10 MHz multiples
     // 180.16 and 180.17: the one with the smaller |L|, 180.16, is chosen.
     const plan = example1();
-    expect(placeLo(plan, "A", [[177.335, 182.995], [183.625, 189.285]])).toEqual({ placeGHz: 180.16, placeReason: null });
+    expect(
+      placeLo(plan, "A", [
+        [177.335, 182.995],
+        [183.625, 189.285],
+      ]),
+    ).toEqual({ placeGHz: 180.16, placeReason: null });
     // on the negative side the smaller |L| is the upper multiple
     expect(placeLo(plan, "A", [[-182.995, -177.335]])).toEqual({ placeGHz: -180.16, placeReason: null });
   });
@@ -34,9 +39,19 @@ describe("placeLo", () => {
   it("takes the widest interval (after rounding widths to 1 kHz) and rounds to the nearest multiple", () => {
     const plan = withStep(10);
     // widths 2 GHz and 2.0000004 GHz: equal at 1 kHz, the smaller |midpoint| (11) wins
-    expect(placeLo(plan, "A", [[10, 12], [20, 22.0000004]]).placeGHz).toBe(11);
+    expect(
+      placeLo(plan, "A", [
+        [10, 12],
+        [20, 22.0000004],
+      ]).placeGHz,
+    ).toBe(11);
     // 3 GHz beats 2 GHz; midpoint 21.5013 → nearest 10 MHz multiple 21.5
-    expect(placeLo(plan, "A", [[10, 12], [20.0013, 23.0013]]).placeGHz).toBe(21.5);
+    expect(
+      placeLo(plan, "A", [
+        [10, 12],
+        [20.0013, 23.0013],
+      ]).placeGHz,
+    ).toBe(21.5);
   });
 
   it("a narrow interval holding one multiple places on it, not on the nearest multiple outside", () => {
@@ -48,13 +63,23 @@ describe("placeLo", () => {
 
   it("skips intervals with no multiple of the step; none left is no-grid-point", () => {
     const plan = withStep(100);
-    expect(placeLo(plan, "A", [[1.01, 1.09], [2.05, 2.15]]).placeGHz).toBe(2.1);
+    expect(
+      placeLo(plan, "A", [
+        [1.01, 1.09],
+        [2.05, 2.15],
+      ]).placeGHz,
+    ).toBe(2.1);
     expect(placeLo(plan, "A", [[1.01, 1.09]])).toEqual({ placeGHz: null, placeReason: "no-grid-point" });
     expect(placeLo(plan, "A", [])).toEqual({ placeGHz: null, placeReason: "no-feasible-interval" });
   });
 
   it("a zero step places at the midpoint of the widest interval", () => {
-    expect(placeLo(withStep(0), "A", [[1.0001, 1.0003], [2, 2.00033]]).placeGHz).toBeCloseTo(2.000165, 12);
+    expect(
+      placeLo(withStep(0), "A", [
+        [1.0001, 1.0003],
+        [2, 2.00033],
+      ]).placeGHz,
+    ).toBeCloseTo(2.000165, 12);
   });
 
   it("on random plans: lands on a step multiple inside a feasible interval of the greatest width", () => {
@@ -64,7 +89,8 @@ describe("placeLo", () => {
         const step = plan.lasers[0]!.stepMHz / 1000;
         const got = placeLo(plan, "A", feasible);
         // independent candidate list: intervals holding a multiple k·step (any point for step 0)
-        const holds = (iv: [number, number]) => step === 0 || Math.floor(iv[1] / step + 1e-7) >= Math.ceil(iv[0] / step - 1e-7);
+        const holds = (iv: [number, number]) =>
+          step === 0 || Math.floor(iv[1] / step + 1e-7) >= Math.ceil(iv[0] / step - 1e-7);
         const candidates = feasible.filter(holds);
         if (candidates.length === 0) {
           expect(got.placeGHz).toBeNull();

@@ -42,7 +42,8 @@ describe("sampleFeasibility (brute-force reference)", () => {
         for (const s of samples) {
           const at = pieceAt(pieces, s.L);
           expect(at).not.toBeNull();
-          if (at!.margin > step) expect({ L: s.L, codes: s.codes }).toEqual({ L: s.L, codes: codesOfMask(at!.piece.mask) });
+          if (at!.margin > step)
+            expect({ L: s.L, codes: s.codes }).toEqual({ L: s.L, codes: codesOfMask(at!.piece.mask) });
         }
         // every edge between two pieces longer than a step lies within a step of a sampler transition
         for (let i = 0; i + 1 < pieces.length; i++) {

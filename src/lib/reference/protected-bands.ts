@@ -11,7 +11,8 @@ export interface ProtectedBand {
   fromMemory: boolean;
 }
 
-const RR_5_340 = "ITU Radio Regulations, Article 5, No. 5.340 (all emissions are prohibited); edges from memory, not checked against the current edition";
+const RR_5_340 =
+  "ITU Radio Regulations, Article 5, No. 5.340 (all emissions are prohibited); edges from memory, not checked against the current edition";
 
 /**
  * Bands at or near 100–350 GHz listed in RR No. 5.340. The 182–185 GHz band
@@ -26,7 +27,11 @@ export const PROTECTED_BANDS: readonly ProtectedBand[] = [
   { bandGHz: [114.25, 116], source: RR_5_340, fromMemory: true },
   { bandGHz: [148.5, 151.5], source: RR_5_340, fromMemory: true },
   { bandGHz: [164, 167], source: RR_5_340, fromMemory: true },
-  { bandGHz: [182, 185], source: `${RR_5_340}; the regulation makes a specific exception in this band`, fromMemory: true },
+  {
+    bandGHz: [182, 185],
+    source: `${RR_5_340}; the regulation makes a specific exception in this band`,
+    fromMemory: true,
+  },
   { bandGHz: [190, 191.8], source: RR_5_340, fromMemory: true },
   { bandGHz: [200, 209], source: RR_5_340, fromMemory: true },
   { bandGHz: [226, 231.5], source: RR_5_340, fromMemory: true },

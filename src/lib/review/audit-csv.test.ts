@@ -24,8 +24,12 @@ describe("auditCsv", () => {
     );
   });
   it("formula-looking text is defused and nulls are empty", () => {
-    const csv = auditCsv([row({ actorName: "=HYPERLINK(1)", missionName: null, missionId: null, revisionBefore: null })]);
-    expect(csv.split("\r\n")[1]).toBe("2026-12-01T10:00:00.000Z,'=HYPERLINK(1),u1,,,review-submit,revision 3,Submitted revision 3 for review,,3");
+    const csv = auditCsv([
+      row({ actorName: "=HYPERLINK(1)", missionName: null, missionId: null, revisionBefore: null }),
+    ]);
+    expect(csv.split("\r\n")[1]).toBe(
+      "2026-12-01T10:00:00.000Z,'=HYPERLINK(1),u1,,,review-submit,revision 3,Submitted revision 3 for review,,3",
+    );
   });
   it("property: an independent CSV parser (papaparse) reads back every field", () => {
     const text = fc.string({ maxLength: 20 });

@@ -44,7 +44,18 @@ export function auditCsv(rows: readonly AuditCsvRow[]): string {
   for (const r of rows) {
     const at = typeof r.at === "string" ? r.at : r.at.toISOString();
     lines.push(
-      [at, r.actorName, r.actorId, r.missionName, r.missionId, r.action, r.entity, r.summary, r.revisionBefore, r.revisionAfter]
+      [
+        at,
+        r.actorName,
+        r.actorId,
+        r.missionName,
+        r.missionId,
+        r.action,
+        r.entity,
+        r.summary,
+        r.revisionBefore,
+        r.revisionAfter,
+      ]
         .map(field)
         .join(","),
     );

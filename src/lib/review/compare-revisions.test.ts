@@ -6,10 +6,18 @@ import { isEmptyComparison } from "./is-empty-comparison";
 import type { FindingLike } from "./types";
 
 // The clean worked example plan of the project's fixtures (invented demo data).
-const ex1 = JSON.parse(readFileSync(new URL("../../../tests/fixtures/plans/ex1-single-channel.plan.json", import.meta.url), "utf8"));
+const ex1 = JSON.parse(
+  readFileSync(new URL("../../../tests/fixtures/plans/ex1-single-channel.plan.json", import.meta.url), "utf8"),
+);
 const clone = <T>(v: T): T => JSON.parse(JSON.stringify(v));
 
-const f = (code: string, chain: string, channel: string | null, severity: FindingLike["severity"] = "error", message = "m"): FindingLike => ({
+const f = (
+  code: string,
+  chain: string,
+  channel: string | null,
+  severity: FindingLike["severity"] = "error",
+  message = "m",
+): FindingLike => ({
   code,
   severity,
   chain,
@@ -27,8 +35,22 @@ describe("compareRevisions: worked cases", () => {
     b.settings.guardMHz = a.settings.guardMHz + 10;
     const c = compareRevisions({ plan: a, findings: [] }, { plan: b, findings: [] });
     expect(c.entities).toEqual([
-      { section: "settings", id: "", kind: "changed", fields: [{ path: "guardMHz", before: a.settings.guardMHz, after: a.settings.guardMHz + 10 }] },
-      { section: "resonators", id: "R-old", kind: "removed", fields: [{ path: "fsrGHz", before: 100 }, { path: "id", before: "R-old" }, { path: "loadedQ", before: 1e6 }] },
+      {
+        section: "settings",
+        id: "",
+        kind: "changed",
+        fields: [{ path: "guardMHz", before: a.settings.guardMHz, after: a.settings.guardMHz + 10 }],
+      },
+      {
+        section: "resonators",
+        id: "R-old",
+        kind: "removed",
+        fields: [
+          { path: "fsrGHz", before: 100 },
+          { path: "id", before: "R-old" },
+          { path: "loadedQ", before: 1e6 },
+        ],
+      },
       {
         section: "channels",
         id: a.channels[0].id,
@@ -61,8 +83,16 @@ describe("compareRevisions: worked cases", () => {
   });
 
   it("findings: new, resolved and unchanged (paired by rule, chain and channel)", () => {
-    const a = [f("image-in-mode", "A", "wv1", "error", "old numbers"), f("spur-in-slot", "A", "wv1"), f("spur-in-slot", "A", "wv1")];
-    const b = [f("image-in-mode", "A", "wv1", "error", "new numbers"), f("spur-in-slot", "A", "wv1"), f("lo-in-band", "B", null)];
+    const a = [
+      f("image-in-mode", "A", "wv1", "error", "old numbers"),
+      f("spur-in-slot", "A", "wv1"),
+      f("spur-in-slot", "A", "wv1"),
+    ];
+    const b = [
+      f("image-in-mode", "A", "wv1", "error", "new numbers"),
+      f("spur-in-slot", "A", "wv1"),
+      f("lo-in-band", "B", null),
+    ];
     const c = compareRevisions({ plan: ex1, findings: a }, { plan: ex1, findings: b });
     expect(c.entities).toEqual([]);
     expect(c.findings.new).toEqual([b[2]]);
@@ -76,7 +106,12 @@ describe("compareRevisions: worked cases", () => {
 
 // --- property tests on generated plans ---
 const ids = fc.constantFrom("A", "B", "C", "wv1", "o2");
-const leaf = fc.oneof(fc.double({ min: -1e6, max: 1e6, noNaN: true }), fc.constant(null), fc.boolean(), fc.string({ maxLength: 6 }));
+const leaf = fc.oneof(
+  fc.double({ min: -1e6, max: 1e6, noNaN: true }),
+  fc.constant(null),
+  fc.boolean(),
+  fc.string({ maxLength: 6 }),
+);
 const entity = fc.record({
   id: ids,
   x: leaf,
@@ -91,14 +126,13 @@ const plan = fc.record({
   chains: fc.array(entity, { maxLength: 3 }),
   channels: fc.array(entity, { maxLength: 4 }),
 });
-const finding = fc
-  .record({
-    code: fc.constantFrom("image-in-mode", "spur-in-slot", "lo-in-band"),
-    severity: fc.constantFrom<FindingLike["severity"]>("error", "warning", "info"),
-    chain: fc.constantFrom("A", "B"),
-    channel: fc.constantFrom<string | null>(null, "wv1", "o2"),
-    message: fc.string({ maxLength: 5 }),
-  });
+const finding = fc.record({
+  code: fc.constantFrom("image-in-mode", "spur-in-slot", "lo-in-band"),
+  severity: fc.constantFrom<FindingLike["severity"]>("error", "warning", "info"),
+  chain: fc.constantFrom("A", "B"),
+  channel: fc.constantFrom<string | null>(null, "wv1", "o2"),
+  message: fc.string({ maxLength: 5 }),
+});
 const revision = fc.record({ plan, findings: fc.array(finding, { maxLength: 6 }) });
 
 /** compare(b, a) written in terms of compare(a, b): the mirror image. */
@@ -165,7 +199,11 @@ describe("compareRevisions: properties", () => {
         Array.isArray(v)
           ? v.map(sortKeys)
           : v !== null && typeof v === "object"
-            ? Object.fromEntries(Object.entries(v as object).sort(([x], [y]) => (x < y ? -1 : 1)).map(([k, x]) => [k, sortKeys(x)]))
+            ? Object.fromEntries(
+                Object.entries(v as object)
+                  .sort(([x], [y]) => (x < y ? -1 : 1))
+                  .map(([k, x]) => [k, sortKeys(x)]),
+              )
             : v;
       const out: Record<string, unknown> = {};
       for (const [k, v] of Object.entries(p)) {

@@ -3,7 +3,15 @@ import { flatten, sameLeaf, type Json } from "./internals/flatten";
 import type { FindingLike } from "./types";
 
 export type PlanSection = "plan" | "settings" | "lasers" | "resonators" | "detectors" | "chains" | "channels";
-export const PLAN_SECTIONS: readonly PlanSection[] = ["plan", "settings", "lasers", "resonators", "detectors", "chains", "channels"];
+export const PLAN_SECTIONS: readonly PlanSection[] = [
+  "plan",
+  "settings",
+  "lasers",
+  "resonators",
+  "detectors",
+  "chains",
+  "channels",
+];
 const LISTS: readonly PlanSection[] = ["lasers", "resonators", "detectors", "chains", "channels"];
 
 /** One field that differs; `before` is absent for an added field, `after` for a removed one. */
@@ -93,7 +101,10 @@ function entityChange(section: PlanSection, id: string, a: unknown, b: unknown):
  * compare(b, a) mirrors compare(a, b) (added ↔ removed, before ↔ after,
  * new ↔ resolved).
  */
-export function compareRevisions<F extends FindingLike>(a: ComparedRevision<F>, b: ComparedRevision<F>): RevisionComparison<F> {
+export function compareRevisions<F extends FindingLike>(
+  a: ComparedRevision<F>,
+  b: ComparedRevision<F>,
+): RevisionComparison<F> {
   const pa = asRecord(a.plan);
   const pb = asRecord(b.plan);
   const entities: EntityChange[] = [];

@@ -21,16 +21,23 @@ describe("findMentions", () => {
   });
   it("no @ means no mention (property: text without @ never mentions)", () => {
     fc.assert(
-      fc.property(fc.string().map((s) => s.replace(/@/g, "")), (t) => {
-        expect(findMentions(t, members)).toEqual([]);
-      }),
+      fc.property(
+        fc.string().map((s) => s.replace(/@/g, "")),
+        (t) => {
+          expect(findMentions(t, members)).toEqual([]);
+        },
+      ),
     );
   });
   it("property: every member is found by @email anywhere in arbitrary text", () => {
     fc.assert(
-      fc.property(fc.string().map((s) => s.replace(/[@A-Za-z0-9._%+-]/g, " ")), fc.constantFrom(...members), (pad, m) => {
-        expect(findMentions(`${pad} @${m.email} ${pad}`, members).map((x) => x.userId)).toContain(m.userId);
-      }),
+      fc.property(
+        fc.string().map((s) => s.replace(/[@A-Za-z0-9._%+-]/g, " ")),
+        fc.constantFrom(...members),
+        (pad, m) => {
+          expect(findMentions(`${pad} @${m.email} ${pad}`, members).map((x) => x.userId)).toContain(m.userId);
+        },
+      ),
     );
   });
 });

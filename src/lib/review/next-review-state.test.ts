@@ -5,8 +5,13 @@ import { nextReviewState } from "./next-review-state";
 import { REVIEW_ACTIONS, REVIEW_STATES, type ReviewAction, type ReviewState } from "./types";
 
 const DECIDERS: RoleName[] = ["owner", "lead"];
-const step = (state: ReviewState, action: ReviewAction, role: RoleName, openErrorKeys: string[] = [], waivedKeys: string[] = []) =>
-  nextReviewState({ state, action, role, openErrorKeys, waivedKeys });
+const step = (
+  state: ReviewState,
+  action: ReviewAction,
+  role: RoleName,
+  openErrorKeys: string[] = [],
+  waivedKeys: string[] = [],
+) => nextReviewState({ state, action, role, openErrorKeys, waivedKeys });
 
 describe("nextReviewState: the transition table", () => {
   // The whole table, written out by hand: [state, action, next state or refusal code] for a lead.
@@ -43,7 +48,8 @@ describe("nextReviewState: the transition table", () => {
     expect(step("draft", "edit", "engineer")).toEqual({ ok: true, next: "draft" });
     expect(step("in-review", "baseline", "engineer")).toMatchObject({ ok: false, code: "forbidden" });
     expect(step("in-review", "request-changes", "engineer")).toMatchObject({ ok: false, code: "forbidden" });
-    for (const a of REVIEW_ACTIONS) expect(step("in-review", a, "viewer")).toMatchObject({ ok: false, code: "forbidden" });
+    for (const a of REVIEW_ACTIONS)
+      expect(step("in-review", a, "viewer")).toMatchObject({ ok: false, code: "forbidden" });
     for (const r of DECIDERS) expect(step("in-review", "baseline", r)).toEqual({ ok: true, next: "baselined" });
   });
 
@@ -52,7 +58,13 @@ describe("nextReviewState: the transition table", () => {
   });
 
   it("a baseline needs a waiver for every open error", () => {
-    const r = step("in-review", "baseline", "owner", ["image-in-mode|A|wv1", "lo-in-band|B|o2"], ["image-in-mode|A|wv1"]);
+    const r = step(
+      "in-review",
+      "baseline",
+      "owner",
+      ["image-in-mode|A|wv1", "lo-in-band|B|o2"],
+      ["image-in-mode|A|wv1"],
+    );
     expect(r).toMatchObject({ ok: false, code: "unwaived-errors", unwaived: ["lo-in-band|B|o2"] });
     expect(r.ok ? "" : r.reason).toMatch(/1 open error finding has no waiver/);
     expect(step("in-review", "baseline", "owner", ["lo-in-band|B|o2"], ["lo-in-band|B|o2", "x|y|"])).toEqual({
@@ -90,7 +102,8 @@ function modelNext(m: Model, action: ReviewAction, role: RoleName, unwaived: num
   const decider = role === "owner" || role === "lead";
   const editor = role !== "viewer";
   if (action === "edit") return editor ? "draft" : m.state;
-  if (action === "submit") return editor && (m.state === "draft" || m.state === "changes-requested") ? "in-review" : m.state;
+  if (action === "submit")
+    return editor && (m.state === "draft" || m.state === "changes-requested") ? "in-review" : m.state;
   if (action === "request-changes") return decider && m.state === "in-review" ? "changes-requested" : m.state;
   return decider && m.state === "in-review" && unwaived === 0 ? "baselined" : m.state;
 }
@@ -106,7 +119,13 @@ class ActCommand implements fc.Command<Model, Sys> {
   }
   run(m: Model, s: Sys) {
     const unwaived = s.errors.filter((k) => !s.waived.has(k)).length;
-    const r = nextReviewState({ state: s.state, action: this.action, role: this.role, openErrorKeys: s.errors, waivedKeys: [...s.waived] });
+    const r = nextReviewState({
+      state: s.state,
+      action: this.action,
+      role: this.role,
+      openErrorKeys: s.errors,
+      waivedKeys: [...s.waived],
+    });
     const expected = modelNext(m, this.action, this.role, unwaived);
     const from = s.state;
     if (r.ok) {
@@ -165,7 +184,8 @@ describe("nextReviewState: model-based sequences", () => {
             expect(h.unwaivedAtStep).toBe(0);
           }
         if (sys.history.some((h) => h.to === "baselined")) baselinedRuns++;
-        if (sys.history.some((h) => h.action === "baseline" && h.from === "in-review" && h.to === "in-review")) refusedBaselines++;
+        if (sys.history.some((h) => h.action === "baseline" && h.from === "in-review" && h.to === "in-review"))
+          refusedBaselines++;
       }),
       { numRuns: 500 },
     );
@@ -177,7 +197,9 @@ describe("nextReviewState: model-based sequences", () => {
   it("engineers and viewers alone never reach baselined", () => {
     fc.assert(
       fc.property(
-        fc.array(fc.tuple(fc.constantFrom(...REVIEW_ACTIONS), fc.constantFrom<RoleName>("engineer", "viewer")), { maxLength: 40 }),
+        fc.array(fc.tuple(fc.constantFrom(...REVIEW_ACTIONS), fc.constantFrom<RoleName>("engineer", "viewer")), {
+          maxLength: 40,
+        }),
         (steps) => {
           let state: ReviewState = "draft";
           for (const [action, r] of steps) {
@@ -192,7 +214,10 @@ describe("nextReviewState: model-based sequences", () => {
 
   it("the model does reach baselined (the sequences are not vacuous)", () => {
     let state: ReviewState = "draft";
-    for (const [a, r] of [["submit", "engineer"], ["baseline", "lead"]] as [ReviewAction, RoleName][]) {
+    for (const [a, r] of [
+      ["submit", "engineer"],
+      ["baseline", "lead"],
+    ] as [ReviewAction, RoleName][]) {
       const out = nextReviewState({ state, action: a, role: r, openErrorKeys: [], waivedKeys: [] });
       if (out.ok) state = out.next;
     }

@@ -40,7 +40,12 @@ export const auth = betterAuth({
     onExistingUserSignUp: async ({ user }) => {
       const base = env.BETTER_AUTH_URL;
       await sendMail(
-        existingAccountMail(user.email, user.name, new URL("/sign-in", base).toString(), new URL("/forgot-password", base).toString()),
+        existingAccountMail(
+          user.email,
+          user.name,
+          new URL("/sign-in", base).toString(),
+          new URL("/forgot-password", base).toString(),
+        ),
       );
     },
   },

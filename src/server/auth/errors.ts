@@ -11,7 +11,9 @@ export function authError(err: unknown): { code: string; status: number; message
 /** Next's redirect()/notFound() throw special errors that must pass through catch blocks. */
 export function isNextControlFlow(err: unknown): boolean {
   const digest = (err as { digest?: unknown } | null)?.digest;
-  return typeof digest === "string" && (digest.startsWith("NEXT_REDIRECT") || digest.startsWith("NEXT_HTTP_ERROR_FALLBACK"));
+  return (
+    typeof digest === "string" && (digest.startsWith("NEXT_REDIRECT") || digest.startsWith("NEXT_HTTP_ERROR_FALLBACK"))
+  );
 }
 
 /** A same-site path to continue to after sign-in, or the fallback (no open redirects). */

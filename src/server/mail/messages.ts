@@ -27,7 +27,8 @@ export function verificationMail(to: string, name: string, url: string): Outgoin
 
 export function resetPasswordMail(to: string, name: string, url: string): OutgoingMail {
   const lines = [`Hello ${name},`, "Someone asked to reset the password of your Heterolane account."];
-  const footer = "The link is valid for one hour and works once. If it was not you, ignore this message; your password stays as it is.";
+  const footer =
+    "The link is valid for one hour and works once. If it was not you, ignore this message; your password stays as it is.";
   return {
     to,
     subject: "Reset your Heterolane password",

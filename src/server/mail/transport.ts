@@ -14,7 +14,9 @@ function transporter(): Transporter {
     secure: url.protocol === "smtps:",
     // The local mail catcher speaks plain SMTP only.
     ignoreTLS: local,
-    ...(url.username ? { auth: { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } } : {}),
+    ...(url.username
+      ? { auth: { user: decodeURIComponent(url.username), pass: decodeURIComponent(url.password) } }
+      : {}),
   });
   globalForMail.heterolaneMail = t;
   return t;

@@ -15,7 +15,10 @@ const nextDay = (d: string) => new Date(Date.parse(`${d}T00:00:00Z`) + 86_400_00
 export async function listAudit(actor: Actor, q: AuditQuery, limit = 5000) {
   const conds: SQL[] = [eq(activity.teamId, actor.teamId)];
   if (q.mission) conds.push(eq(activity.missionId, q.mission));
-  if (q.person) conds.push(or(eq(activity.actorId, q.person), ilike(activity.actorName, `%${q.person.replace(/[\\%_]/g, "\\$&")}%`))!);
+  if (q.person)
+    conds.push(
+      or(eq(activity.actorId, q.person), ilike(activity.actorName, `%${q.person.replace(/[\\%_]/g, "\\$&")}%`))!,
+    );
   if (q.action) conds.push(eq(activity.action, q.action));
   if (q.from) conds.push(gte(activity.at, new Date(`${q.from}T00:00:00Z`)));
   if (q.to) conds.push(lt(activity.at, nextDay(q.to)));
@@ -48,7 +51,12 @@ export async function auditFacets(actor: Actor) {
     .from(activity)
     .where(eq(activity.teamId, actor.teamId));
   const actions = [...new Set(rows.map((r) => r.action))].sort();
-  const people = [...new Map(rows.map((r) => [r.actorId, r.actorName])).entries()].map(([id, name]) => ({ id, name })).sort((x, y) => x.name.localeCompare(y.name));
-  const ms = await db.select({ id: missions.id, name: missions.name }).from(missions).where(eq(missions.teamId, actor.teamId));
+  const people = [...new Map(rows.map((r) => [r.actorId, r.actorName])).entries()]
+    .map(([id, name]) => ({ id, name }))
+    .sort((x, y) => x.name.localeCompare(y.name));
+  const ms = await db
+    .select({ id: missions.id, name: missions.name })
+    .from(missions)
+    .where(eq(missions.teamId, actor.teamId));
   return { actions, people, missions: ms };
 }

@@ -6,13 +6,29 @@ import { compareRevisions } from "@/lib/review";
 import { notFound } from "@/server/http";
 
 async function loadRevision(missionId: string, number: number) {
-  const [r] = await db.select().from(planRevisions).where(and(eq(planRevisions.missionId, missionId), eq(planRevisions.number, number)));
+  const [r] = await db
+    .select()
+    .from(planRevisions)
+    .where(and(eq(planRevisions.missionId, missionId), eq(planRevisions.number, number)));
   if (!r) throw notFound(`revision ${number}`);
   const rows = await db.select().from(findings).where(eq(findings.revisionId, r.id)).orderBy(asc(findings.position));
   return {
-    meta: { number: r.number, status: r.status, authorName: r.authorName, createdAt: r.createdAt.toISOString(), summary: r.summary },
+    meta: {
+      number: r.number,
+      status: r.status,
+      authorName: r.authorName,
+      createdAt: r.createdAt.toISOString(),
+      summary: r.summary,
+    },
     plan: r.plan,
-    findings: rows.map((f) => ({ id: f.id, code: f.code, severity: f.severity, chain: f.chainKey, channel: f.channelKey, message: f.message })),
+    findings: rows.map((f) => ({
+      id: f.id,
+      code: f.code,
+      severity: f.severity,
+      chain: f.chainKey,
+      channel: f.channelKey,
+      message: f.message,
+    })),
   };
 }
 

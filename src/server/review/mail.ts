@@ -15,11 +15,16 @@ function message(to: string, subject: string, lines: string[], path: string, lab
     text: `${lines.join("\n\n")}\n\n${label}: ${url}\n\n${footer}\n`,
     html: `<!doctype html><html><body style="font-family:system-ui,sans-serif;color:#12343b;max-width:560px">${lines
       .map((l) => `<p style="margin:0 0 12px;white-space:pre-wrap">${esc(l)}</p>`)
-      .join("")}<p><a href="${esc(url)}">${esc(label)}</a></p><p style="font-size:13px;color:#2d545e">${esc(footer)}</p></body></html>`,
+      .join(
+        "",
+      )}<p><a href="${esc(url)}">${esc(label)}</a></p><p style="font-size:13px;color:#2d545e">${esc(footer)}</p></body></html>`,
   };
 }
 
-export function reviewRequestedMail(to: string, p: { mission: string; missionId: string; revision: number; by: string; note: string; openErrors: number }) {
+export function reviewRequestedMail(
+  to: string,
+  p: { mission: string; missionId: string; revision: number; by: string; note: string; openErrors: number },
+) {
   return message(
     to,
     `Review requested: ${p.mission}, revision ${p.revision}`,
@@ -33,7 +38,17 @@ export function reviewRequestedMail(to: string, p: { mission: string; missionId:
   );
 }
 
-export function reviewDecidedMail(to: string, p: { mission: string; missionId: string; revision: number; by: string; decision: "baseline" | "request-changes"; note: string }) {
+export function reviewDecidedMail(
+  to: string,
+  p: {
+    mission: string;
+    missionId: string;
+    revision: number;
+    by: string;
+    decision: "baseline" | "request-changes";
+    note: string;
+  },
+) {
   const what = p.decision === "baseline" ? "baselined" : "sent back with changes requested";
   return message(
     to,
@@ -44,7 +59,10 @@ export function reviewDecidedMail(to: string, p: { mission: string; missionId: s
   );
 }
 
-export function mentionMail(to: string, p: { mission: string; missionId: string; revision: number; by: string; body: string; target: string }) {
+export function mentionMail(
+  to: string,
+  p: { mission: string; missionId: string; revision: number; by: string; body: string; target: string },
+) {
   return message(
     to,
     `${p.by} mentioned you on ${p.mission}`,

@@ -25,10 +25,17 @@ export type PreferenceKind = "reviewRequested" | "reviewDecided" | "mentioned";
 /** Everyone wants every review e-mail until they say otherwise. */
 export async function getPreferences(userId: string) {
   const [p] = await db.select().from(notificationPreferences).where(eq(notificationPreferences.userId, userId));
-  return { reviewRequested: p?.reviewRequested ?? true, reviewDecided: p?.reviewDecided ?? true, mentioned: p?.mentioned ?? true };
+  return {
+    reviewRequested: p?.reviewRequested ?? true,
+    reviewDecided: p?.reviewDecided ?? true,
+    mentioned: p?.mentioned ?? true,
+  };
 }
 
-export async function setPreferences(userId: string, prefs: { reviewRequested: boolean; reviewDecided: boolean; mentioned: boolean }) {
+export async function setPreferences(
+  userId: string,
+  prefs: { reviewRequested: boolean; reviewDecided: boolean; mentioned: boolean },
+) {
   await db
     .insert(notificationPreferences)
     .values({ userId, ...prefs, updatedAt: new Date() })
@@ -38,7 +45,10 @@ export async function setPreferences(userId: string, prefs: { reviewRequested: b
 /** The subset of `userIds` who accept mail of `kind`. */
 export async function acceptingMail(userIds: string[], kind: PreferenceKind): Promise<Set<string>> {
   if (userIds.length === 0) return new Set();
-  const rows = await db.select().from(notificationPreferences).where(and(inArray(notificationPreferences.userId, userIds)));
+  const rows = await db
+    .select()
+    .from(notificationPreferences)
+    .where(and(inArray(notificationPreferences.userId, userIds)));
   const off = new Set(rows.filter((r) => !r[kind]).map((r) => r.userId));
   return new Set(userIds.filter((id) => !off.has(id)));
 }

@@ -21,7 +21,13 @@ export async function onPlanEdited(tx: Tx, missionId: string, actor: Actor): Pro
   if (pending.length === 0) return;
   await tx
     .update(reviews)
-    .set({ outcome: "withdrawn", decidedBy: actor.userId, decidedByName: actor.name, decidedAt: new Date(), decisionNote: "The plan was edited during the review." })
+    .set({
+      outcome: "withdrawn",
+      decidedBy: actor.userId,
+      decidedByName: actor.name,
+      decidedAt: new Date(),
+      decisionNote: "The plan was edited during the review.",
+    })
     .where(and(eq(reviews.missionId, missionId), eq(reviews.outcome, "open")));
   for (const p of pending)
     await tx.insert(activity).values({

@@ -14,7 +14,12 @@ export async function approvalForReport(missionId: string) {
   if (!actor || !roleCan(actor.role, { review: ["read"] })) return null;
   try {
     const m = await getMissionRow(actor, missionId);
-    const [latest] = await db.select({ number: planRevisions.number }).from(planRevisions).where(eq(planRevisions.missionId, m.id)).orderBy(desc(planRevisions.number)).limit(1);
+    const [latest] = await db
+      .select({ number: planRevisions.number })
+      .from(planRevisions)
+      .where(eq(planRevisions.missionId, m.id))
+      .orderBy(desc(planRevisions.number))
+      .limit(1);
     return latest ? await getApproval(m.id, latest.number) : null;
   } catch (e) {
     if (e instanceof HttpError) return null;

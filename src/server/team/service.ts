@@ -24,12 +24,18 @@ function parse<T>(schema: z.ZodType<T>, input: unknown): T {
 const FRIENDLY: Record<string, [number, string]> = {
   USER_IS_ALREADY_A_MEMBER_OF_THIS_ORGANIZATION: [409, "This person is already a member of the team."],
   YOU_ARE_NOT_ALLOWED_TO_INVITE_USER_WITH_THIS_ROLE: [403, "Only an owner may invite someone as owner."],
-  YOU_ARE_NOT_ALLOWED_TO_INVITE_USERS_TO_THIS_ORGANIZATION: [403, "Your role in this team does not allow you to invite people."],
+  YOU_ARE_NOT_ALLOWED_TO_INVITE_USERS_TO_THIS_ORGANIZATION: [
+    403,
+    "Your role in this team does not allow you to invite people.",
+  ],
   YOU_CANNOT_LEAVE_THE_ORGANIZATION_AS_THE_ONLY_OWNER: [
     409,
     "The team needs at least one owner. Make someone else owner first.",
   ],
-  YOU_CANNOT_LEAVE_THE_ORGANIZATION_WITHOUT_AN_OWNER: [409, "The team needs at least one owner. Make someone else owner first."],
+  YOU_CANNOT_LEAVE_THE_ORGANIZATION_WITHOUT_AN_OWNER: [
+    409,
+    "The team needs at least one owner. Make someone else owner first.",
+  ],
   YOU_ARE_NOT_ALLOWED_TO_DELETE_THIS_MEMBER: [403, "Your role in this team does not allow you to remove members."],
   YOU_ARE_NOT_ALLOWED_TO_UPDATE_THIS_MEMBER: [403, "Your role in this team does not allow you to change roles."],
   MEMBER_NOT_FOUND: [404, "No such member in this team."],
@@ -68,9 +74,13 @@ export async function getTeam(h: Headers) {
 export async function inviteMember(h: Headers, input: unknown) {
   const value = parse(InviteSchema, input);
   const actor = await requireActor(h, { invitation: ["create"] }, "invite people");
-  if (value.role === "owner" && actor.role !== "owner") throw new HttpError(403, "forbidden", "Only an owner may invite someone as owner.");
+  if (value.role === "owner" && actor.role !== "owner")
+    throw new HttpError(403, "forbidden", "Only an owner may invite someone as owner.");
   const inv = await call(() =>
-    auth.api.createInvitation({ body: { email: value.email, role: value.role, organizationId: actor.teamId }, headers: h }),
+    auth.api.createInvitation({
+      body: { email: value.email, role: value.role, organizationId: actor.teamId },
+      headers: h,
+    }),
   );
   return { id: inv.id, email: inv.email, role: inv.role, expiresAt: inv.expiresAt };
 }
@@ -79,7 +89,10 @@ export async function changeMemberRole(h: Headers, input: unknown) {
   const value = parse(ChangeRoleSchema, input);
   const actor = await requireActor(h, { member: ["update"] }, "change roles");
   await call(() =>
-    auth.api.updateMemberRole({ body: { memberId: value.memberId, role: value.role, organizationId: actor.teamId }, headers: h }),
+    auth.api.updateMemberRole({
+      body: { memberId: value.memberId, role: value.role, organizationId: actor.teamId },
+      headers: h,
+    }),
   );
   return { memberId: value.memberId, role: value.role };
 }

@@ -20,11 +20,31 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
   if (!settings) throw notFound("plan settings");
   const byPos = (t: { position: AnyPgColumn; createdAt: AnyPgColumn }) => [asc(t.position), asc(t.createdAt)];
   // One query after the other: inside a transaction they share one connection.
-  const ls = await q.select().from(lasers).where(eq(lasers.missionId, missionId)).orderBy(...byPos(lasers));
-  const rs = await q.select().from(resonators).where(eq(resonators.missionId, missionId)).orderBy(...byPos(resonators));
-  const ds = await q.select().from(detectors).where(eq(detectors.missionId, missionId)).orderBy(...byPos(detectors));
-  const cs = await q.select().from(chains).where(eq(chains.missionId, missionId)).orderBy(...byPos(chains));
-  const chs = await q.select().from(channels).where(eq(channels.missionId, missionId)).orderBy(...byPos(channels));
+  const ls = await q
+    .select()
+    .from(lasers)
+    .where(eq(lasers.missionId, missionId))
+    .orderBy(...byPos(lasers));
+  const rs = await q
+    .select()
+    .from(resonators)
+    .where(eq(resonators.missionId, missionId))
+    .orderBy(...byPos(resonators));
+  const ds = await q
+    .select()
+    .from(detectors)
+    .where(eq(detectors.missionId, missionId))
+    .orderBy(...byPos(detectors));
+  const cs = await q
+    .select()
+    .from(chains)
+    .where(eq(chains.missionId, missionId))
+    .orderBy(...byPos(chains));
+  const chs = await q
+    .select()
+    .from(channels)
+    .where(eq(channels.missionId, missionId))
+    .orderBy(...byPos(channels));
   const keyOf = (rows: { id: string; key: string }[]) => new Map(rows.map((r) => [r.id, r.key]));
   const laserKey = keyOf(ls);
   const resonatorKey = keyOf(rs);

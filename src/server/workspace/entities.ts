@@ -3,11 +3,7 @@ import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@db/client";
 import type { AnyPgColumn, PgTable } from "drizzle-orm/pg-core";
 import { chains, channels, detectors, lasers, resonators } from "@db/schema";
-import {
-  entityCreateSchemas,
-  entityUpdateSchemas,
-  type EntityKind,
-} from "@/schemas/workspace";
+import { entityCreateSchemas, entityUpdateSchemas, type EntityKind } from "@/schemas/workspace";
 import { HttpError, notFound } from "@/server/http";
 import type { Actor } from "@/server/auth/actor";
 import { invalidInput, isUuid, mapDbError, parseOr400, staleVersion, zodIssues } from "./errors";
@@ -45,8 +41,20 @@ interface Kind {
 
 const KINDS: Record<EntityKind, Kind> = {
   lasers: { singular: "laser", table: lasers, dto: laserDto, inputOf: laserInputOf, values: laserValues },
-  resonators: { singular: "resonator", table: resonators, dto: resonatorDto, inputOf: resonatorInputOf, values: resonatorValues },
-  detectors: { singular: "detector", table: detectors, dto: detectorDto, inputOf: detectorInputOf, values: detectorValues },
+  resonators: {
+    singular: "resonator",
+    table: resonators,
+    dto: resonatorDto,
+    inputOf: resonatorInputOf,
+    values: resonatorValues,
+  },
+  detectors: {
+    singular: "detector",
+    table: detectors,
+    dto: detectorDto,
+    inputOf: detectorInputOf,
+    values: detectorValues,
+  },
   chains: { singular: "chain", table: chains, dto: chainDto, inputOf: chainInputOf, values: chainValues },
   channels: { singular: "channel", table: channels, dto: channelDto, inputOf: channelInputOf, values: channelValues },
 };
@@ -95,7 +103,9 @@ async function checkReferences(tx: Tx, kind: EntityKind, missionId: string, inpu
 async function dependents(tx: Tx, kind: EntityKind, id: string): Promise<string[]> {
   if (kind === "channels") return [];
   if (kind === "chains")
-    return (await tx.select({ key: channels.key }).from(channels).where(eq(channels.chainId, id))).map((r) => `channel ${r.key}`);
+    return (await tx.select({ key: channels.key }).from(channels).where(eq(channels.chainId, id))).map(
+      (r) => `channel ${r.key}`,
+    );
   const col = kind === "lasers" ? chains.laserId : kind === "resonators" ? chains.resonatorId : chains.detectorId;
   return (await tx.select({ key: chains.key }).from(chains).where(eq(col, id))).map((r) => `chain ${r.key}`);
 }
@@ -117,7 +127,13 @@ export async function getEntity(actor: Actor, missionId: string, kind: EntityKin
 }
 
 /** Plan-document field names that differ from the entity form's. */
-const FORM_FIELD: Record<string, string> = { id: "key", laser: "laserId", resonator: "resonatorId", detector: "detectorId", chain: "chainId" };
+const FORM_FIELD: Record<string, string> = {
+  id: "key",
+  laser: "laserId",
+  resonator: "resonatorId",
+  detector: "detectorId",
+  chain: "chainId",
+};
 
 /**
  * Re-checks after a row change; when the assembled plan is invalid, issues
@@ -125,7 +141,14 @@ const FORM_FIELD: Record<string, string> = { id: "key", laser: "laserId", resona
  * → `laserId`) so a form can show them beside the field; issues about other
  * rows keep their plan-document path.
  */
-async function checkAfter(tx: Tx, missionId: string, actor: Actor, kind: EntityKind, key: string, note: Parameters<typeof saveAndCheck>[3]) {
+async function checkAfter(
+  tx: Tx,
+  missionId: string,
+  actor: Actor,
+  kind: EntityKind,
+  key: string,
+  note: Parameters<typeof saveAndCheck>[3],
+) {
   try {
     return await saveAndCheck(tx, missionId, actor, note);
   } catch (e) {
@@ -145,7 +168,12 @@ async function checkAfter(tx: Tx, missionId: string, actor: Actor, kind: EntityK
 
 export type MutationResult = { entity: Record<string, unknown>; revision: RevisionInfo };
 
-export async function createEntity(actor: Actor, missionId: string, kind: EntityKind, body: unknown): Promise<MutationResult> {
+export async function createEntity(
+  actor: Actor,
+  missionId: string,
+  kind: EntityKind,
+  body: unknown,
+): Promise<MutationResult> {
   const k = KINDS[kind];
   const input = parseOr400(entityCreateSchemas[kind], body, k.singular) as Record<string, unknown>;
   return inTransaction(async (tx) => {

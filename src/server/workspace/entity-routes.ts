@@ -25,7 +25,13 @@ export function itemRoutes(kind: EntityKind) {
       json(await getEntity(actor, params.missionId, kind, params.id)),
     ),
     PATCH: guarded<P>(CAN.edit, `change ${kind}`, async ({ request, actor, params }) => {
-      const { entity, revision } = await updateEntity(actor, params.missionId, kind, params.id, await readJsonBody(request));
+      const { entity, revision } = await updateEntity(
+        actor,
+        params.missionId,
+        kind,
+        params.id,
+        await readJsonBody(request),
+      );
       return json({ ...entity, revision });
     }),
     DELETE: guarded<P>(CAN.edit, `remove ${kind}`, async ({ actor, params, query }) => {

@@ -15,8 +15,7 @@ export function formatIssuePath(path: readonly PropertyKey[]): string {
 export function zodIssues(error: z.ZodError): Issue[] {
   return error.issues.map((i) => ({
     path: formatIssuePath(i.path),
-    message:
-      i.code === "unrecognized_keys" ? `unknown field ${(i as { keys: string[] }).keys.join(", ")}` : i.message,
+    message: i.code === "unrecognized_keys" ? `unknown field ${(i as { keys: string[] }).keys.join(", ")}` : i.message,
   }));
 }
 
@@ -49,7 +48,11 @@ export function mapDbError(err: unknown, what: string): unknown {
   if (e && e.code === "23505" && typeof e.constraint === "string" && e.constraint.endsWith("_key_uq"))
     return invalidInput([{ path: "key", message: `another ${what} of this mission already uses this key` }]);
   if (e && e.code === "23503")
-    return new HttpError(409, "in-use", `This ${what} is still referenced by another row; remove that reference first.`);
+    return new HttpError(
+      409,
+      "in-use",
+      `This ${what} is still referenced by another row; remove that reference first.`,
+    );
   return err;
 }
 

@@ -44,7 +44,11 @@ export const laserValues = (i: LaserInput) => ({
 });
 
 export const resonatorDto = (r: Resonator) => ({ ...stamps(r), key: r.key, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ });
-export const resonatorInputOf = (r: Resonator): ResonatorInput => ({ key: r.key, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ });
+export const resonatorInputOf = (r: Resonator): ResonatorInput => ({
+  key: r.key,
+  fsrGHz: r.fsrGHz,
+  loadedQ: r.loadedQ,
+});
 export const resonatorValues = (i: ResonatorInput) => ({ key: i.key, fsrGHz: i.fsrGHz, loadedQ: i.loadedQ });
 
 export const detectorDto = (r: Detector) => ({
@@ -100,7 +104,19 @@ export const chainValues = (i: ChainInput) => ({
 });
 
 /** The measured and required quantities of a channel, in plan-document order (shared by every row ↔ plan mapping). */
-export const channelFigures = (c: Pick<Channel, "centerGHz" | "bandwidthMHz" | "dsbOffsetGHz" | "integrationMs" | "antennaK" | "receiverK" | "gainStability" | "requiredNedtK">) => ({
+export const channelFigures = (
+  c: Pick<
+    Channel,
+    | "centerGHz"
+    | "bandwidthMHz"
+    | "dsbOffsetGHz"
+    | "integrationMs"
+    | "antennaK"
+    | "receiverK"
+    | "gainStability"
+    | "requiredNedtK"
+  >,
+) => ({
   centerGHz: c.centerGHz,
   bandwidthMHz: c.bandwidthMHz,
   dsbOffsetGHz: c.dsbOffsetGHz,

@@ -1,12 +1,7 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
 import { activity, missions, planSettings } from "@db/schema";
-import {
-  DEFAULT_SETTINGS,
-  missionCreateSchema,
-  missionUpdateSchema,
-  settingsUpdateSchema,
-} from "@/schemas/workspace";
+import { DEFAULT_SETTINGS, missionCreateSchema, missionUpdateSchema, settingsUpdateSchema } from "@/schemas/workspace";
 import type { Actor } from "@/server/auth/actor";
 import { parseOr400, staleVersion } from "./errors";
 import { missionDto, settingsDto } from "./mappers";
@@ -45,7 +40,9 @@ export async function updateMission(actor: Actor, missionId: string, body: unkno
       .set({ ...changes, version: current.version + 1, updatedAt: new Date() })
       .where(eq(missions.id, missionId))
       .returning();
-    const fields = Object.keys(changes).filter((k) => (changes as Record<string, unknown>)[k] !== (current as Record<string, unknown>)[k]);
+    const fields = Object.keys(changes).filter(
+      (k) => (changes as Record<string, unknown>)[k] !== (current as Record<string, unknown>)[k],
+    );
     const revision = await saveAndCheck(tx, missionId, actor, {
       action: "update",
       entity: `mission ${m!.name}`,

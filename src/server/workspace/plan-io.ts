@@ -32,7 +32,11 @@ export async function exportPlanDocument(actor: Actor, missionId: string) {
  * changes nothing) and stores the result as a new revision. The plan's
  * name becomes the mission's name, so exporting gives the same document.
  */
-export async function importPlanDocument(actor: Actor, missionId: string, body: unknown): Promise<{ revision: RevisionInfo }> {
+export async function importPlanDocument(
+  actor: Actor,
+  missionId: string,
+  body: unknown,
+): Promise<{ revision: RevisionInfo }> {
   const parsed = parsePlan(body);
   if (!parsed.ok)
     throw new HttpError(400, "invalid-plan", "The plan document is not valid; nothing was imported.", parsed.issues);
@@ -96,7 +100,15 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
     plan.resonators.length
       ? await tx
           .insert(resonators)
-          .values(plan.resonators.map((r, position) => ({ missionId, position, key: r.id, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ })))
+          .values(
+            plan.resonators.map((r, position) => ({
+              missionId,
+              position,
+              key: r.id,
+              fsrGHz: r.fsrGHz,
+              loadedQ: r.loadedQ,
+            })),
+          )
           .returning({ id: resonators.id, key: resonators.key })
       : [],
   );

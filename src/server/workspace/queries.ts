@@ -93,24 +93,48 @@ export async function listMissions(actor: Actor) {
 const order = (t: { position: AnyPgColumn; createdAt: AnyPgColumn }) => [asc(t.position), asc(t.createdAt)];
 
 export async function listLasers(missionId: string, q: Queryable = db) {
-  return (await q.select().from(lasers).where(eq(lasers.missionId, missionId)).orderBy(...order(lasers))).map(laserDto);
+  return (
+    await q
+      .select()
+      .from(lasers)
+      .where(eq(lasers.missionId, missionId))
+      .orderBy(...order(lasers))
+  ).map(laserDto);
 }
 export async function listResonators(missionId: string, q: Queryable = db) {
   return (
-    await q.select().from(resonators).where(eq(resonators.missionId, missionId)).orderBy(...order(resonators))
+    await q
+      .select()
+      .from(resonators)
+      .where(eq(resonators.missionId, missionId))
+      .orderBy(...order(resonators))
   ).map(resonatorDto);
 }
 export async function listDetectors(missionId: string, q: Queryable = db) {
   return (
-    await q.select().from(detectors).where(eq(detectors.missionId, missionId)).orderBy(...order(detectors))
+    await q
+      .select()
+      .from(detectors)
+      .where(eq(detectors.missionId, missionId))
+      .orderBy(...order(detectors))
   ).map(detectorDto);
 }
 export async function listChains(missionId: string, q: Queryable = db) {
-  return (await q.select().from(chains).where(eq(chains.missionId, missionId)).orderBy(...order(chains))).map(chainDto);
+  return (
+    await q
+      .select()
+      .from(chains)
+      .where(eq(chains.missionId, missionId))
+      .orderBy(...order(chains))
+  ).map(chainDto);
 }
 export async function listChannels(missionId: string, q: Queryable = db) {
   return (
-    await q.select().from(channels).where(eq(channels.missionId, missionId)).orderBy(...order(channels))
+    await q
+      .select()
+      .from(channels)
+      .where(eq(channels.missionId, missionId))
+      .orderBy(...order(channels))
   ).map(channelDto);
 }
 

@@ -26,7 +26,12 @@ export type Params<K extends string> = { params: Promise<Record<K, string>> };
 export function guarded<K extends string>(
   permission: Permission,
   what: string,
-  fn: (ctx: { request: Request; actor: Actor; params: Record<K, string>; query: Record<string, string> }) => Promise<Response>,
+  fn: (ctx: {
+    request: Request;
+    actor: Actor;
+    params: Record<K, string>;
+    query: Record<string, string>;
+  }) => Promise<Response>,
 ) {
   return async (request: Request, context: Params<K>): Promise<Response> => {
     try {

@@ -3,18 +3,8 @@ import { createHash } from "node:crypto";
 import { and, eq, sql } from "drizzle-orm";
 import { db } from "@db/client";
 import { chains, channels, detectors, lasers, uploads } from "@db/schema";
-import {
-  decodeUtf8,
-  parseChannelCsv,
-  parseDetectorResponse,
-  parseTuningMap,
-  type FileIssue,
-} from "@/lib/imports";
-import {
-  UPLOAD_MAX_BYTES,
-  type DetectorResponseQuery,
-  type TuningMapQuery,
-} from "@/schemas/workspace";
+import { decodeUtf8, parseChannelCsv, parseDetectorResponse, parseTuningMap, type FileIssue } from "@/lib/imports";
+import { UPLOAD_MAX_BYTES, type DetectorResponseQuery, type TuningMapQuery } from "@/schemas/workspace";
 import { HttpError, notFound, type Issue } from "@/server/http";
 import type { Actor } from "@/server/auth/actor";
 import { detectorDto, laserDto } from "./mappers";
@@ -42,7 +32,7 @@ const MULTIPART_SLACK = 64 * 1024;
 export async function readUploadedFile(request: Request): Promise<UploadedFile> {
   const type = request.headers.get("content-type") ?? "";
   if (!type.toLowerCase().startsWith("multipart/form-data"))
-    throw new HttpError(400, "invalid-input", "Send the file as multipart/form-data in the field \"file\".", [
+    throw new HttpError(400, "invalid-input", 'Send the file as multipart/form-data in the field "file".', [
       { path: "file", message: "missing (the request is not multipart/form-data)" },
     ]);
   const limit = UPLOAD_MAX_BYTES + MULTIPART_SLACK;
@@ -78,17 +68,25 @@ export async function readUploadedFile(request: Request): Promise<UploadedFile> 
   const name = file.name || "upload.csv";
   const mime = (file.type || "").toLowerCase();
   const csvByName = /\.(csv|txt)$/i.test(name);
-  const csvByType = mime === "" || /^(text\/csv|text\/plain|application\/csv|application\/vnd\.ms-excel|application\/octet-stream)/.test(mime);
+  const csvByType =
+    mime === "" ||
+    /^(text\/csv|text\/plain|application\/csv|application\/vnd\.ms-excel|application\/octet-stream)/.test(mime);
   if (!csvByName || !csvByType)
-    throw new HttpError(400, "invalid-input", `"${name}" is not a CSV file (type ${mime || "unknown"}); nothing was saved.`, [
-      { path: "file", message: "must be a .csv text file" },
-    ]);
+    throw new HttpError(
+      400,
+      "invalid-input",
+      `"${name}" is not a CSV file (type ${mime || "unknown"}); nothing was saved.`,
+      [{ path: "file", message: "must be a .csv text file" }],
+    );
   return { filename: name, bytes: Buffer.from(await file.arrayBuffer()) };
 }
 
 function fileIssues(issues: FileIssue[]): Issue[] {
   return issues.map((i) => ({
-    path: [i.row !== null ? `row ${i.row}` : null, i.column !== null ? `column ${i.column}` : null].filter(Boolean).join(", ") || "file",
+    path:
+      [i.row !== null ? `row ${i.row}` : null, i.column !== null ? `column ${i.column}` : null]
+        .filter(Boolean)
+        .join(", ") || "file",
     message: i.message,
     ...(i.row !== null ? { row: i.row } : {}),
     ...(i.column !== null ? { column: i.column } : {}),
@@ -97,7 +95,11 @@ function fileIssues(issues: FileIssue[]): Issue[] {
 
 function badFile(issues: FileIssue[], filename: string): HttpError {
   const first = issues[0];
-  const where = first ? [first.row !== null ? `row ${first.row}` : "", first.column ? `column ${first.column}` : ""].filter(Boolean).join(", ") : "";
+  const where = first
+    ? [first.row !== null ? `row ${first.row}` : "", first.column ? `column ${first.column}` : ""]
+        .filter(Boolean)
+        .join(", ")
+    : "";
   return new HttpError(
     400,
     "invalid-file",
@@ -112,7 +114,13 @@ function textOf(file: UploadedFile): string {
   return decoded.text;
 }
 
-async function storeUpload(tx: Tx, actor: Actor, missionId: string, kind: "tuning-map" | "channels" | "detector-response", file: UploadedFile) {
+async function storeUpload(
+  tx: Tx,
+  actor: Actor,
+  missionId: string,
+  kind: "tuning-map" | "channels" | "detector-response",
+  file: UploadedFile,
+) {
   await tx.insert(uploads).values({
     missionId,
     kind,
@@ -144,9 +152,12 @@ export async function uploadTuningMap(actor: Actor, missionId: string, q: Tuning
     return preview;
   }
   if (parsed.intervals.length === 0)
-    throw new HttpError(400, "invalid-file", `"${file.filename}" gives no interval (every offset is isolated at gap ${q.gapMHz} MHz); nothing was saved.`, [
-      { path: "gapMHz", message: "no two offsets lie closer than this gap" },
-    ]);
+    throw new HttpError(
+      400,
+      "invalid-file",
+      `"${file.filename}" gives no interval (every offset is isolated at gap ${q.gapMHz} MHz); nothing was saved.`,
+      [{ path: "gapMHz", message: "no two offsets lie closer than this gap" }],
+    );
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
     const [laser] = await tx
@@ -171,11 +182,22 @@ export async function uploadTuningMap(actor: Actor, missionId: string, q: Tuning
 }
 
 /** Detector response: preview the usable band, or apply it to the detector's minGHz/maxGHz. */
-export async function uploadDetectorResponse(actor: Actor, missionId: string, q: DetectorResponseQuery, file: UploadedFile) {
+export async function uploadDetectorResponse(
+  actor: Actor,
+  missionId: string,
+  q: DetectorResponseQuery,
+  file: UploadedFile,
+) {
   await getMissionRow(actor, missionId);
   const parsed = parseDetectorResponse(textOf(file), q.dropDB);
   if (!parsed.ok) throw badFile(parsed.issues, file.filename);
-  const preview = { minGHz: parsed.minGHz, maxGHz: parsed.maxGHz, peakDB: parsed.peakDB, peakGHz: parsed.peakGHz, points: parsed.points };
+  const preview = {
+    minGHz: parsed.minGHz,
+    maxGHz: parsed.maxGHz,
+    peakDB: parsed.peakDB,
+    peakGHz: parsed.peakGHz,
+    points: parsed.points,
+  };
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
     const [det] = await tx
@@ -208,13 +230,18 @@ export async function uploadChannels(actor: Actor, missionId: string, apply: boo
   const text = textOf(file);
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
-    const chainRows = await tx.select({ id: chains.id, key: chains.key }).from(chains).where(eq(chains.missionId, missionId));
+    const chainRows = await tx
+      .select({ id: chains.id, key: chains.key })
+      .from(chains)
+      .where(eq(chains.missionId, missionId));
     const parsed = parseChannelCsv(text, chainRows);
     if (!parsed.ok) throw badFile(parsed.issues, file.filename);
     const preview = { rows: parsed.rows, valid: parsed.valid };
     if (!apply) return preview;
     if (!parsed.valid) {
-      const issues: FileIssue[] = parsed.rows.flatMap((r) => r.errors.map((e) => ({ row: r.row, column: e.column, message: e.message })));
+      const issues: FileIssue[] = parsed.rows.flatMap((r) =>
+        r.errors.map((e) => ({ row: r.row, column: e.column, message: e.message })),
+      );
       throw badFile(issues, file.filename);
     }
     const existing = await tx.select().from(channels).where(eq(channels.missionId, missionId)).for("update");

@@ -6,7 +6,10 @@ import { authError } from "@/server/auth/errors";
 
 export type InvitationActionState = { error?: string } | undefined;
 
-export async function acceptInvitationAction(_prev: InvitationActionState, formData: FormData): Promise<InvitationActionState> {
+export async function acceptInvitationAction(
+  _prev: InvitationActionState,
+  formData: FormData,
+): Promise<InvitationActionState> {
   const id = String(formData.get("invitationId") ?? "");
   const h = await headers();
   let teamId: string;
@@ -26,7 +29,10 @@ export async function acceptInvitationAction(_prev: InvitationActionState, formD
   redirect("/missions");
 }
 
-export async function declineInvitationAction(_prev: InvitationActionState, formData: FormData): Promise<InvitationActionState> {
+export async function declineInvitationAction(
+  _prev: InvitationActionState,
+  formData: FormData,
+): Promise<InvitationActionState> {
   const id = String(formData.get("invitationId") ?? "");
   try {
     await auth.api.rejectInvitation({ body: { invitationId: id }, headers: await headers() });

@@ -29,7 +29,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ id:
     );
   }
   if (inv.status !== "pending") {
-    const what = inv.status === "accepted" ? "was already accepted" : inv.status === "canceled" ? "was cancelled" : "was declined";
+    const what =
+      inv.status === "accepted" ? "was already accepted" : inv.status === "canceled" ? "was cancelled" : "was declined";
     return (
       <Notice title={`This invitation ${what}`} state={inv.status}>
         {inv.status === "accepted" ? (
@@ -38,7 +39,9 @@ export default async function InvitationPage({ params }: { params: Promise<{ id:
             team switcher.
           </>
         ) : (
-          <>Ask {inv.inviterName} for a new invitation to {inv.teamName} if you still need access.</>
+          <>
+            Ask {inv.inviterName} for a new invitation to {inv.teamName} if you still need access.
+          </>
         )}
         <div className="mt-5">
           <Link href="/sign-in" className={button}>
@@ -111,7 +114,12 @@ export default async function InvitationPage({ params }: { params: Promise<{ id:
       </h1>
       {intro}
       <div className="flex flex-wrap items-start gap-3">
-        <ActionButton action={acceptInvitationAction} fields={{ invitationId: inv.id }} label="Accept and join the team" large />
+        <ActionButton
+          action={acceptInvitationAction}
+          fields={{ invitationId: inv.id }}
+          label="Accept and join the team"
+          large
+        />
         <ActionButton action={declineInvitationAction} fields={{ invitationId: inv.id }} label="Decline" danger large />
       </div>
     </>

@@ -13,7 +13,11 @@ export const metadata: Metadata = { title: "E-mail confirmation" };
  * `?error=` when the token is expired or invalid). A reused link lands here
  * with no error and no new session.
  */
-export default async function VerifyResultPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function VerifyResultPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const { error, next } = await searchParams;
   const session = await auth.api.getSession({ headers: await headers() });
   const link = "inline-block rounded bg-ink px-4 py-2 text-sm font-medium text-white";

@@ -8,7 +8,11 @@ import { createTeamAction } from "./actions";
 
 export const metadata: Metadata = { title: "Create a team" };
 
-export default async function NewTeamPage({ searchParams }: { searchParams: Promise<Record<string, string | undefined>> }) {
+export default async function NewTeamPage({
+  searchParams,
+}: {
+  searchParams: Promise<Record<string, string | undefined>>;
+}) {
   const session = await auth.api.getSession({ headers: await headers() });
   const teams = session ? await listTeamsOf(session.user.id) : [];
   const { error } = await searchParams;
@@ -25,7 +29,10 @@ export default async function NewTeamPage({ searchParams }: { searchParams: Prom
           <ul className="flex flex-col gap-2">
             {teams.map((t) => (
               <li key={t.id}>
-                <form action={switchTeamAction} className="flex items-center justify-between rounded border border-ink/15 px-3 py-2">
+                <form
+                  action={switchTeamAction}
+                  className="flex items-center justify-between rounded border border-ink/15 px-3 py-2"
+                >
                   <input type="hidden" name="teamId" value={t.id} />
                   <span className="text-sm">
                     <strong>{t.name}</strong> <span className="text-ink-soft">({t.role})</span>
@@ -40,7 +47,9 @@ export default async function NewTeamPage({ searchParams }: { searchParams: Prom
         </section>
       ) : null}
       <section className="rounded-md border border-ink/15 bg-white p-6">
-        <h2 className="mb-1 text-xl font-semibold tracking-tight">{teams.length ? "Or create a new team" : "Create your first team"}</h2>
+        <h2 className="mb-1 text-xl font-semibold tracking-tight">
+          {teams.length ? "Or create a new team" : "Create your first team"}
+        </h2>
         <p className="mb-5 text-sm leading-relaxed text-ink-soft">
           Missions, plans and reviews belong to a team. You become its owner and can invite others by e-mail as lead,
           engineer or viewer. If someone invited you, open the link in their e-mail instead.

@@ -56,7 +56,11 @@ export function readCsv(
     const allowed = new Set(options.allowed);
     for (const h of header)
       if (h !== "" && !allowed.has(h))
-        issues.push({ row: 1, column: h, message: `unknown column ${h} (the columns are ${options.allowed.join(", ")})` });
+        issues.push({
+          row: 1,
+          column: h,
+          message: `unknown column ${h} (the columns are ${options.allowed.join(", ")})`,
+        });
   }
   if (issues.length > 0) return { ok: false, issues };
   const records: CsvRecord[] = [];

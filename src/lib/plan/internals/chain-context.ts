@@ -128,7 +128,11 @@ export function chainContext(plan: Plan, chainId: string): ChainContext {
 }
 
 /** The L-independent context of one channel of the chain. */
-export function channelContext(ctx: Pick<ChainContext, "s" | "modeCentre" | "delta" | "fm" | "beta" | "lockOrders">, channel: PlanChannel, index: number): ChannelContext {
+export function channelContext(
+  ctx: Pick<ChainContext, "s" | "modeCentre" | "delta" | "fm" | "beta" | "lockOrders">,
+  channel: PlanChannel,
+  index: number,
+): ChannelContext {
   const B = channel.bandwidthMHz / 1000;
   const c = channel.centerGHz;
   const dsb = channel.dsbOffsetGHz !== null;

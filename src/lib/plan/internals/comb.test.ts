@@ -65,7 +65,8 @@ describe("comb C(x) = Σₙ Mₙ(x)", () => {
           let summed = 0;
           const n0 = Math.round(x1 / fsr);
           const N = 3000;
-          for (let n = n0 - N; n <= n0 + N + Math.ceil(width / fsr); n++) summed += lorentzianIntegral(x1, x2, n * fsr, delta);
+          for (let n = n0 - N; n <= n0 + N + Math.ceil(width / fsr); n++)
+            summed += lorentzianIntegral(x1, x2, n * fsr, delta);
           // modes beyond ±N: each adds ≈ width·(δ/2)²/(n·fsr)², summed over both tails ≈ 2·width·(δ/2)²/(fsr²·N)
           summed += (2 * width * (delta / 2) ** 2) / (fsr * fsr * N);
           expect(rel(closed, summed)).toBeLessThan(1e-6);
@@ -85,11 +86,16 @@ describe("comb C(x) = Σₙ Mₙ(x)", () => {
 
   it("combDistanceAtLevel inverts the comb", () => {
     fc.assert(
-      fc.property(fc.double({ min: 10, max: 400, noNaN: true }), fc.double({ min: 1e-3, max: 5, noNaN: true }), fc.double({ min: 0.001, max: 0.49, noNaN: true }), (fsr, delta, frac) => {
-        const comb = { fsr, delta };
-        const level = combResponse(frac * fsr, comb);
-        expect(Math.abs(combDistanceAtLevel(level, comb) - frac * fsr)).toBeLessThan(1e-6 * fsr);
-      }),
+      fc.property(
+        fc.double({ min: 10, max: 400, noNaN: true }),
+        fc.double({ min: 1e-3, max: 5, noNaN: true }),
+        fc.double({ min: 0.001, max: 0.49, noNaN: true }),
+        (fsr, delta, frac) => {
+          const comb = { fsr, delta };
+          const level = combResponse(frac * fsr, comb);
+          expect(Math.abs(combDistanceAtLevel(level, comb) - frac * fsr)).toBeLessThan(1e-6 * fsr);
+        },
+      ),
     );
     const comb = { fsr: 10, delta: 1 };
     expect(combDistanceAtLevel(combPeak(comb) * 2, comb)).toBe(0);

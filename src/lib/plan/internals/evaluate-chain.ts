@@ -5,7 +5,15 @@ import type { ChainContext, ChannelContext } from "./chain-context";
 import { fBand, fDB, fGHz, fK, fMHz, fMW, pair } from "./format";
 import { type Interval, absInterval, gap, insideOf, withinGuard } from "./intervals";
 import { foldInterval, interiorNyquistEdge, nyquistZone } from "./nyquist";
-import { type ImageFigures, type Sensitivity, type SlotGeometry, bandHoldingLo, imageAt, sensitivityAt, slotAt } from "./slot";
+import {
+  type ImageFigures,
+  type Sensitivity,
+  type SlotGeometry,
+  bandHoldingLo,
+  imageAt,
+  sensitivityAt,
+  slotAt,
+} from "./slot";
 import { type SpurBand, errorSpursAt, infoSpurs } from "./spurs";
 import { TOL, exceeds, fallsShort } from "./tolerance";
 
@@ -48,7 +56,6 @@ interface Hit {
   foldedGapGHz: number | null;
 }
 
-
 /**
  * Make freshly built finding data JSON-safe in place: −0 becomes 0 and
  * non-finite numbers (only reachable with absurd inputs) become null.
@@ -89,7 +96,13 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
   const fs = ctx.sampleRate;
   const chainFindings: Finding[] = [];
   const perChannel: Finding[][] = ctx.channels.map(() => []);
-  const add = (code: FindingCode, channelIndex: number | null, message: string, data: { [k: string]: JsonValue }, severity: Severity = RULE_SEVERITY[code]) => {
+  const add = (
+    code: FindingCode,
+    channelIndex: number | null,
+    message: string,
+    data: { [k: string]: JsonValue },
+    severity: Severity = RULE_SEVERITY[code],
+  ) => {
     const f: Finding = {
       code,
       severity,
@@ -126,7 +139,13 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
       ctx.reach.length
         ? `The LO at ${fGHz(L)} GHz with its ±${fMHz(ctx.D)} MHz drift spans ${fBand(window)}, which is not inside one reach interval of laser ${ctx.laser.id} (${reachText}); it reaches ${fMHz(short)} MHz beyond the nearest one.`
         : `Laser ${ctx.laser.id} has no reach interval, so the LO at ${fGHz(L)} GHz cannot be set.`,
-      { loGHz: L, driftGHz: ctx.D, windowGHz: pair(window), reachGHz: ctx.reach.map(pair), shortGHz: Number.isFinite(short) ? short : null },
+      {
+        loGHz: L,
+        driftGHz: ctx.D,
+        windowGHz: pair(window),
+        reachGHz: ctx.reach.map(pair),
+        shortGHz: Number.isFinite(short) ? short : null,
+      },
     );
   }
   if (!mapOnly && ctx.step > 0) {
@@ -251,7 +270,11 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
         "if-outside-detector",
         i,
         `Occupied IF band ${fBand(geo.occupied)} of ${id} is not inside the ${fBand(ctx.detectorBand)} band of detector ${ctx.detector.id}; it reaches ${fMHz(outsideBy(geo.occupied, ctx.detectorBand))} MHz beyond it.`,
-        { occupiedGHz: pair(geo.occupied), detectorGHz: pair(ctx.detectorBand), outsideMHz: outsideBy(geo.occupied, ctx.detectorBand) * 1000 },
+        {
+          occupiedGHz: pair(geo.occupied),
+          detectorGHz: pair(ctx.detectorBand),
+          outsideMHz: outsideBy(geo.occupied, ctx.detectorBand) * 1000,
+        },
       );
     }
   });
@@ -272,7 +295,13 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
           "slot-overlap",
           i,
           `Occupied IF bands of ${a} (${fBand(gi.occupied)}) and ${b} (${fBand(gj.occupied)}) ${g >= 0 ? `are ${fMHz(g)} MHz apart` : `overlap by ${fMHz(-g)} MHz`}; the guard is ${fMHz(guard)} MHz (${fMHz(guard - g)} MHz short)${sharedIf ? "; the chain cuts its channels from one shared IF, so this is a warning" : ""}.`,
-          { other: b, occupiedGHz: pair(gi.occupied), otherOccupiedGHz: pair(gj.occupied), gapMHz: g * 1000, guardMHz: guard * 1000 },
+          {
+            other: b,
+            occupiedGHz: pair(gi.occupied),
+            otherOccupiedGHz: pair(gj.occupied),
+            gapMHz: g * 1000,
+            guardMHz: guard * 1000,
+          },
           sharedIf ? "warning" : "error",
         );
       }
@@ -326,19 +355,26 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
     for (const hit of hits) {
       if (band.family === "harmonic" || band.family === "intermod") {
         if (band.order > 3) continue;
-        (infoHits[hit.victim] as { band: SpurBand; hit: Hit }[][])[band.family === "harmonic" ? 0 : 1]!.push({ band, hit });
+        (infoHits[hit.victim] as { band: SpurBand; hit: Hit }[][])[band.family === "harmonic" ? 0 : 1]!.push({
+          band,
+          hit,
+        });
       } else {
         errorHits.push({ band, hit });
       }
     }
   }
   const spurText = (b: SpurBand) =>
-    b.band[0] === b.band[1] ? `${b.family} spur ${b.source} at ${fGHz(b.band[0])} GHz` : `${b.family} spur ${b.source} at ${fBand(b.band)}`;
+    b.band[0] === b.band[1]
+      ? `${b.family} spur ${b.source} at ${fGHz(b.band[0])} GHz`
+      : `${b.family} spur ${b.source} at ${fBand(b.band)}`;
   for (const { band, hit } of errorHits) {
     const c = channels[hit.victim] as ChannelAtOffset;
     const occ = (c.geo as SlotGeometry).occupied;
     const effGap = hit.folded ? (hit.foldedGapGHz as number) : hit.gapGHz;
-    const where = hit.folded ? ` after folding at the ${fGHz(fs as number)} GHz sample rate (folded spur ${fBand(foldInterval(band.band, fs as number))}, folded band ${fBand(foldedOcc[hit.victim] as Interval)})` : "";
+    const where = hit.folded
+      ? ` after folding at the ${fGHz(fs as number)} GHz sample rate (folded spur ${fBand(foldInterval(band.band, fs as number))}, folded band ${fBand(foldedOcc[hit.victim] as Interval)})`
+      : "";
     const relation =
       effGap > 0
         ? `comes within ${fMHz(effGap)} MHz of the ${spurText(band)}${where}`
@@ -361,7 +397,12 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
       const list = infoHits[v]?.[family === "harmonic" ? 0 : 1];
       if (!list || list.length === 0 || !c.geo) return;
       const occ = c.geo.occupied;
-      const shown = list.slice(0, 4).map(({ band, hit }) => `${band.source} (${fBand(band.band)}, ${closeness(hit.folded ? (hit.foldedGapGHz as number) : hit.gapGHz)}${hit.folded ? " after folding" : ""})`);
+      const shown = list
+        .slice(0, 4)
+        .map(
+          ({ band, hit }) =>
+            `${band.source} (${fBand(band.band)}, ${closeness(hit.folded ? (hit.foldedGapGHz as number) : hit.gapGHz)}${hit.folded ? " after folding" : ""})`,
+        );
       add(
         "spur-in-slot",
         v,
@@ -418,7 +459,15 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
           "alias-overlap",
           i,
           `After sampling at ${fGHz(fs)} GHz, ${ci.ch.channel.id} (Nyquist zone ${zi + 1}, folded to ${fBand(fi)}) and ${cj.ch.channel.id} (zone ${zj + 1}, folded to ${fBand(fj)}) ${g >= 0 ? `are ${fMHz(g)} MHz apart` : `overlap by ${fMHz(-g)} MHz`}; the guard is ${fMHz(guard)} MHz (${fMHz(guard - g)} MHz short).`,
-          { other: cj.ch.channel.id, foldedGHz: pair(fi), otherFoldedGHz: pair(fj), zone: zi + 1, otherZone: zj + 1, gapMHz: g * 1000, guardMHz: guard * 1000 },
+          {
+            other: cj.ch.channel.id,
+            foldedGHz: pair(fi),
+            otherFoldedGHz: pair(fj),
+            zone: zi + 1,
+            otherZone: zj + 1,
+            gapMHz: g * 1000,
+            guardMHz: guard * 1000,
+          },
         );
       }
     }
@@ -452,7 +501,12 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
           "in-protected-band",
           i,
           `Passband ${fBand(prot.p)} of ${id} lies inside ${fBand(prot.band.bandGHz)}, where the Radio Regulations (No. 5.340) prohibit all emissions${prot.band.fromMemory ? " (band edges from memory, to be checked against the current edition)" : ""}; the receiver itself does not transmit, but keep LO light out of the resonator so nothing is re-radiated there.`,
-          { passbandGHz: pair(prot.p), protectedGHz: pair(prot.band.bandGHz), source: prot.band.source, fromMemory: prot.band.fromMemory },
+          {
+            passbandGHz: pair(prot.p),
+            protectedGHz: pair(prot.band.bandGHz),
+            source: prot.band.source,
+            fromMemory: prot.band.fromMemory,
+          },
         );
       }
     });

@@ -1,9 +1,20 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { absInterval, gap, insideOf, mergeIntervals, subScaled, addScaled, withinGuard, type Interval } from "./intervals";
+import {
+  absInterval,
+  gap,
+  insideOf,
+  mergeIntervals,
+  subScaled,
+  addScaled,
+  withinGuard,
+  type Interval,
+} from "./intervals";
 import { foldFrequency, foldInterval, interiorNyquistEdge, nyquistZone } from "./nyquist";
 
-const iv = fc.tuple(fc.double({ min: -50, max: 50, noNaN: true }), fc.double({ min: 0, max: 20, noNaN: true })).map(([a, w]): Interval => [a, a + w]);
+const iv = fc
+  .tuple(fc.double({ min: -50, max: 50, noNaN: true }), fc.double({ min: 0, max: 20, noNaN: true }))
+  .map(([a, w]): Interval => [a, a + w]);
 
 describe("interval arithmetic (plan-format.md)", () => {
   it("gap is negative for overlapping intervals and the distance otherwise", () => {
@@ -29,12 +40,20 @@ describe("interval arithmetic (plan-format.md)", () => {
 
   it("a·X ± b·Y holds a·x ± b·y for every x ∈ X, y ∈ Y (property)", () => {
     fc.assert(
-      fc.property(iv, iv, fc.integer({ min: 1, max: 5 }), fc.integer({ min: 1, max: 5 }), fc.double({ min: 0, max: 1, noNaN: true }), fc.double({ min: 0, max: 1, noNaN: true }), (X, Y, a, b, s, t) => {
-        const x = X[0] + s * (X[1] - X[0]);
-        const y = Y[0] + t * (Y[1] - Y[0]);
-        expect(insideOf([a * x + b * y, a * x + b * y], addScaled(a, X, b, Y))).toBe(true);
-        expect(insideOf([a * x - b * y, a * x - b * y], subScaled(a, X, b, Y))).toBe(true);
-      }),
+      fc.property(
+        iv,
+        iv,
+        fc.integer({ min: 1, max: 5 }),
+        fc.integer({ min: 1, max: 5 }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        fc.double({ min: 0, max: 1, noNaN: true }),
+        (X, Y, a, b, s, t) => {
+          const x = X[0] + s * (X[1] - X[0]);
+          const y = Y[0] + t * (Y[1] - Y[0]);
+          expect(insideOf([a * x + b * y, a * x + b * y], addScaled(a, X, b, Y))).toBe(true);
+          expect(insideOf([a * x - b * y, a * x - b * y], subScaled(a, X, b, Y))).toBe(true);
+        },
+      ),
     );
   });
 
@@ -46,7 +65,17 @@ describe("interval arithmetic (plan-format.md)", () => {
   });
 
   it("merging joins overlapping and touching intervals and keeps the union (property)", () => {
-    expect(mergeIntervals([[5, 6], [1, 2], [2, 3], [2.5, 4]])).toEqual([[1, 4], [5, 6]]);
+    expect(
+      mergeIntervals([
+        [5, 6],
+        [1, 2],
+        [2, 3],
+        [2.5, 4],
+      ]),
+    ).toEqual([
+      [1, 4],
+      [5, 6],
+    ]);
     fc.assert(
       fc.property(fc.array(iv, { maxLength: 8 }), fc.double({ min: -60, max: 80, noNaN: true }), (list, x) => {
         const merged = mergeIntervals(list);
@@ -71,24 +100,29 @@ describe("Nyquist folding", () => {
 
   it("the folded interval is exactly the set of folded points (property)", () => {
     fc.assert(
-      fc.property(fc.double({ min: 0, max: 30, noNaN: true }), fc.double({ min: 0, max: 5, noNaN: true }), fc.double({ min: 0.5, max: 8, noNaN: true }), (lo, w, fs) => {
-        const band: Interval = [lo, lo + w];
-        const f = foldInterval(band, fs);
-        let min = Infinity;
-        let max = -Infinity;
-        let outside = 0;
-        for (let i = 0; i <= 500; i++) {
-          const g = foldFrequency(lo + (w * i) / 500, fs);
-          min = Math.min(min, g);
-          max = Math.max(max, g);
-          if (g < f[0] - 1e-9 || g > f[1] + 1e-9) outside++;
-        }
-        expect(outside).toBe(0);
-        // sampled extremes approach the interval ends (within one sample step)
-        const step = (w / 500) * 1.0001 + 1e-12;
-        expect(min - f[0]).toBeLessThan(step);
-        expect(f[1] - max).toBeLessThan(step);
-      }),
+      fc.property(
+        fc.double({ min: 0, max: 30, noNaN: true }),
+        fc.double({ min: 0, max: 5, noNaN: true }),
+        fc.double({ min: 0.5, max: 8, noNaN: true }),
+        (lo, w, fs) => {
+          const band: Interval = [lo, lo + w];
+          const f = foldInterval(band, fs);
+          let min = Infinity;
+          let max = -Infinity;
+          let outside = 0;
+          for (let i = 0; i <= 500; i++) {
+            const g = foldFrequency(lo + (w * i) / 500, fs);
+            min = Math.min(min, g);
+            max = Math.max(max, g);
+            if (g < f[0] - 1e-9 || g > f[1] + 1e-9) outside++;
+          }
+          expect(outside).toBe(0);
+          // sampled extremes approach the interval ends (within one sample step)
+          const step = (w / 500) * 1.0001 + 1e-12;
+          expect(min - f[0]).toBeLessThan(step);
+          expect(f[1] - max).toBeLessThan(step);
+        },
+      ),
       { numRuns: 200 },
     );
   });

@@ -12,7 +12,8 @@ describe("lock replica share (plan-format.md, Lock replica)", () => {
     let num = 0;
     let den = 1;
     for (let m = 1; m <= 2; m++) {
-      const w = 20 * Math.log10(Math.abs(besselJ(m, 0.5) / besselJ(0, 0.5))) - 10 * Math.log10(1 + ((2 * m * fm) / delta) ** 2);
+      const w =
+        20 * Math.log10(Math.abs(besselJ(m, 0.5) / besselJ(0, 0.5))) - 10 * Math.log10(1 + ((2 * m * fm) / delta) ** 2);
       num += 2 * 10 ** (w / 10) * Math.min(1, (m * fm) / B);
       den += 2 * 10 ** (w / 10);
     }
@@ -30,7 +31,9 @@ describe("lock replica share (plan-format.md, Lock replica)", () => {
         fc.double({ min: 1e-4, max: 2, noNaN: true }),
         fc.integer({ min: 1, max: 4 }),
         (beta, dBeta, fm, delta, B, orders) => {
-          expect(lockReplicaDB(fm, beta + dBeta, orders, delta, B)).toBeGreaterThan(lockReplicaDB(fm, beta, orders, delta, B));
+          expect(lockReplicaDB(fm, beta + dBeta, orders, delta, B)).toBeGreaterThan(
+            lockReplicaDB(fm, beta, orders, delta, B),
+          );
         },
       ),
     );

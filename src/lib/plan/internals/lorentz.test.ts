@@ -1,6 +1,12 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { atanDiff, lorentzian, lorentzianIntegral, lorentzianProductIntegral, lorentzianSquaredIntegral } from "./lorentz";
+import {
+  atanDiff,
+  lorentzian,
+  lorentzianIntegral,
+  lorentzianProductIntegral,
+  lorentzianSquaredIntegral,
+} from "./lorentz";
 import { integratePiecewise } from "./numeric-reference.test-util";
 
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.max(Math.abs(b), 1e-300);

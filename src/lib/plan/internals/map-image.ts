@@ -196,13 +196,7 @@ export const IMAGE_EDGE_BRACKET = 1e-6;
  * the grid for the change. The changes found are exactly those a point-by-
  * point scan of the same grid finds.
  */
-export function imageFiringIntervals(
-  c: Comb,
-  m: MapModel,
-  ch: MapChannel,
-  lo: number,
-  hi: number,
-): [number, number][] {
+export function imageFiringIntervals(c: Comb, m: MapModel, ch: MapChannel, lo: number, hi: number): [number, number][] {
   const band = ch.bands[0];
   if (!band || !ch.ssb || !(hi > lo)) return [];
   const [xl, xh] = band;
@@ -251,13 +245,14 @@ export function imageFiringIntervals(
       if (!(kLast - kFirst < n)) {
         // more monotone runs than grid points (fsr far below the grid step): every grid point is its own run
         for (let j = 0; j < n; j++) splits.push(j);
-      } else for (let k = kFirst; k <= kLast; k++) {
-        const Lk = k * quarter + centreSum;
-        if (Lk > p && Lk < q) {
-          const j = Math.min(n - 1, Math.floor(((Lk - p) / (q - p)) * n));
-          if (splits[splits.length - 1] !== j) splits.push(j);
+      } else
+        for (let k = kFirst; k <= kLast; k++) {
+          const Lk = k * quarter + centreSum;
+          if (Lk > p && Lk < q) {
+            const j = Math.min(n - 1, Math.floor(((Lk - p) / (q - p)) * n));
+            if (splits[splits.length - 1] !== j) splits.push(j);
+          }
         }
-      }
       const changes: number[] = []; // t: state(t) ≠ state(t + 1)
       let ja = 0;
       for (const jb of [...splits, n]) {

@@ -30,7 +30,14 @@ const slope = fc.constantFrom(-2, -1, 0, 1, 2);
 
 /** A random single-piece interval function on [from, to] with lo ≤ hi everywhere. */
 const arbitraryPiece = fc
-  .record({ from: dbl(-30, 30), len: dbl(0.1, 40), a: dbl(-40, 40), b: slope, w0: dbl(0, 5), wb: fc.constantFrom(0, 1, 2) })
+  .record({
+    from: dbl(-30, 30),
+    len: dbl(0.1, 40),
+    a: dbl(-40, 40),
+    b: slope,
+    w0: dbl(0, 5),
+    wb: fc.constantFrom(0, 1, 2),
+  })
   .map(({ from, len, a, b, w0, wb }) => {
     const to = from + len;
     // hi = lo + width, width = w0 + wb·(L − from) ≥ 0 on the piece
@@ -42,10 +49,12 @@ const arbitraryPiece = fc
 const rawAt = (fn: IFn, L: number): [number, number] => [at(fn[0]!.lo, L), at(fn[0]!.hi, L)];
 
 /** The piece of fn holding L, at least `margin` from its ends, or undefined. */
-const pieceHolding = <P extends Piece>(fn: readonly P[], L: number, margin: number) => fn.find((p) => L > p.from + margin && L < p.to - margin);
+const pieceHolding = <P extends Piece>(fn: readonly P[], L: number, margin: number) =>
+  fn.find((p) => L > p.from + margin && L < p.to - margin);
 
 const inSet = (set: LSet, L: number) => set.some(([lo, hi]) => L > lo && L < hi);
-const nearEdge = (set: LSet, L: number, m: number) => set.some(([lo, hi]) => Math.abs(L - lo) < m || Math.abs(L - hi) < m);
+const nearEdge = (set: LSet, L: number, m: number) =>
+  set.some(([lo, hi]) => Math.abs(L - lo) < m || Math.abs(L - hi) < m);
 
 describe("piecewise-linear interval functions of L", () => {
   it("absFn matches |[lo, hi]| at every L", () => {
@@ -71,7 +80,11 @@ describe("piecewise-linear interval functions of L", () => {
         const raw = absInterval(rawAt(fn0, L));
         const want = intersect(raw, [lo, lo + w]);
         const p = pieceHolding(out, L, 1e-9);
-        if (want && want[1] - want[0] > 1e-6 && !out.some((q) => Math.abs(L - q.from) < 1e-6 || Math.abs(L - q.to) < 1e-6)) {
+        if (
+          want &&
+          want[1] - want[0] > 1e-6 &&
+          !out.some((q) => Math.abs(L - q.from) < 1e-6 || Math.abs(L - q.to) < 1e-6)
+        ) {
           expect(p).toBeDefined();
           expect(at(p!.lo, L)).toBeCloseTo(want[0], 9);
           expect(at(p!.hi, L)).toBeCloseTo(want[1], 9);

@@ -298,7 +298,10 @@ export function outsideSet(fn: IFn, min: number, max: number, out: LSet): void {
 /** Where the interior of `[lo, hi]` holds a multiple `k·h`, k ≥ 1. */
 export function straddleSet(fn: IFn, h: number, out: LSet): void {
   for (const p of fn) {
-    if ((widerThan(p, h) && at(p.hi, p.from) > h && at(p.hi, p.to) > h) || !(zoneCrossings(p, h) <= MAX_ZONE_CROSSINGS)) {
+    if (
+      (widerThan(p, h) && at(p.hi, p.from) > h && at(p.hi, p.to) > h) ||
+      !(zoneCrossings(p, h) <= MAX_ZONE_CROSSINGS)
+    ) {
       // wider than a zone and reaching past h: some k·h (k ≥ 1) is always inside;
       // or too many zone edges to enumerate: marked as firing (conservative, see MAX_ZONE_CROSSINGS)
       out.push([p.from, p.to]);

@@ -108,7 +108,8 @@ export function buildMapModel(plan: Plan, chainId: string): MapModel {
   const laser = plan.lasers.find((l) => l.id === chain.laser);
   const resonator = plan.resonators.find((r) => r.id === chain.resonator);
   const detector = plan.detectors.find((d) => d.id === chain.detector);
-  if (!laser || !resonator || !detector) throw new Error(`chain "${chainId}" names a missing laser, resonator or detector`);
+  if (!laser || !resonator || !detector)
+    throw new Error(`chain "${chainId}" names a missing laser, resonator or detector`);
   const s = chain.sideband === "upper" ? 1 : -1;
   const linewidth = (laser.carrierTHz * 1000) / resonator.loadedQ;
   const wantedCentre = s * chain.mode * resonator.fsrGHz;
@@ -116,7 +117,8 @@ export function buildMapModel(plan: Plan, chainId: string): MapModel {
   for (const ch of plan.channels) {
     if (ch.chain !== chainId) continue;
     const B = ch.bandwidthMHz / 1000;
-    const centres = ch.dsbOffsetGHz === null ? [ch.centerGHz] : [ch.centerGHz - ch.dsbOffsetGHz, ch.centerGHz + ch.dsbOffsetGHz];
+    const centres =
+      ch.dsbOffsetGHz === null ? [ch.centerGHz] : [ch.centerGHz - ch.dsbOffsetGHz, ch.centerGHz + ch.dsbOffsetGHz];
     const bands = centres
       .map((f) => {
         const lo = s * (f - B / 2);

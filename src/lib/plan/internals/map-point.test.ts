@@ -12,7 +12,8 @@ const dbl = (min: number, max: number) => fc.double({ min, max, noNaN: true, noD
 /** The L-dependent error codes of the full per-offset check, in rules-table order. */
 function fullCodes(plan: Parameters<typeof checkChainAtOffset>[0], chain: string, L: number): string[] {
   const seen = new Set<string>();
-  for (const f of checkChainAtOffset(plan, chain, L)) if (f.severity === "error" && L_DEPENDENT_ERROR_CODES.includes(f.code)) seen.add(f.code);
+  for (const f of checkChainAtOffset(plan, chain, L))
+    if (f.severity === "error" && L_DEPENDENT_ERROR_CODES.includes(f.code)) seen.add(f.code);
   return L_DEPENDENT_ERROR_CODES.filter((c) => seen.has(c));
 }
 
@@ -34,16 +35,20 @@ describe("lean per-offset evaluation (the benchmark's grid reference)", () => {
 
   it("agrees with the full per-offset check at random offsets of random small plans", () => {
     fc.assert(
-      fc.property(arbitrarySmallPlan({ maxChannels: 5 }), fc.array(dbl(0, 1), { minLength: 5, maxLength: 5 }), (plan, fs) => {
-        const m = buildMapModel(plan, "A");
-        const at = makePointEvaluator(m);
-        const lo = m.reach[0]![0] - 0.5;
-        const hi = m.reach[m.reach.length - 1]![1] + 0.5;
-        for (const f of fs) {
-          const L = lo + f * (hi - lo);
-          expect({ L, codes: codesOfMask(at(L)) }).toEqual({ L, codes: fullCodes(plan, "A", L) });
-        }
-      }),
+      fc.property(
+        arbitrarySmallPlan({ maxChannels: 5 }),
+        fc.array(dbl(0, 1), { minLength: 5, maxLength: 5 }),
+        (plan, fs) => {
+          const m = buildMapModel(plan, "A");
+          const at = makePointEvaluator(m);
+          const lo = m.reach[0]![0] - 0.5;
+          const hi = m.reach[m.reach.length - 1]![1] + 0.5;
+          for (const f of fs) {
+            const L = lo + f * (hi - lo);
+            expect({ L, codes: codesOfMask(at(L)) }).toEqual({ L, codes: fullCodes(plan, "A", L) });
+          }
+        },
+      ),
       { numRuns: 120 },
     );
   }, 60_000);

@@ -26,7 +26,13 @@ export function adaptiveSimpson(f: (x: number) => number, a: number, b: number, 
 }
 
 /** Simpson on a sub-divided interval: split [a, b] at the given points first (e.g. at peaks). */
-export function integratePiecewise(f: (x: number) => number, a: number, b: number, cuts: number[], relTol = 1e-10): number {
+export function integratePiecewise(
+  f: (x: number) => number,
+  a: number,
+  b: number,
+  cuts: number[],
+  relTol = 1e-10,
+): number {
   const pts = [a, ...cuts.filter((c) => c > a && c < b).sort((p, q) => p - q), b];
   let sum = 0;
   for (let i = 0; i + 1 < pts.length; i++) sum += adaptiveSimpson(f, pts[i] as number, pts[i + 1] as number, relTol);

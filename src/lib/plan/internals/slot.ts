@@ -112,7 +112,10 @@ export function imageAt(ctx: ChainContext, ch: ChannelContext, L: number): Image
   const opticalImage: Interval = [2 * L - x[1], 2 * L - x[0]];
   let intWi = 0;
   const [rlo, rhi] = ctx.rfInput;
-  for (const window of [[rlo, rhi], [-rhi, -rlo]] as Interval[]) {
+  for (const window of [
+    [rlo, rhi],
+    [-rhi, -rlo],
+  ] as Interval[]) {
     const part = intersect(opticalImage, window);
     if (part && part[1] > part[0]) intWi += combIntegral(part[0], part[1], ctx.comb);
   }

@@ -9,7 +9,10 @@ import { slotAt } from "./slot";
 describe("spur families (plan-format.md, Spur families)", () => {
   it("carrier-beat |L| and lock-lo |L ± m·fm| are widened by D and dropped outside the detector band", () => {
     // example 1 with a wide detector so the carrier beat near 184.81 GHz is kept
-    const ctx = chainContext(example1((p) => (p.detectors[0]!.maxGHz = 400)), "A");
+    const ctx = chainContext(
+      example1((p) => (p.detectors[0]!.maxGHz = 400)),
+      "A",
+    );
     const bands = errorSpursAt(ctx, 184.81);
     const carrier = bands.filter((b) => b.family === "carrier-beat");
     expect(carrier).toHaveLength(1);
@@ -28,7 +31,10 @@ describe("spur families (plan-format.md, Spur families)", () => {
   });
 
   it("an LO near 0 folds the carrier beat to [0, |L| + D] (absolute value of a straddling interval)", () => {
-    const dc = chainContext(example1((p) => (p.detectors[0]!.minGHz = 0)), "A");
+    const dc = chainContext(
+      example1((p) => (p.detectors[0]!.minGHz = 0)),
+      "A",
+    );
     const carrier = errorSpursAt(dc, 0.01).find((b) => b.family === "carrier-beat")!;
     expect(carrier.band[0]).toBe(0);
     expect(carrier.band[1]).toBeCloseTo(0.03, 12);
@@ -60,7 +66,8 @@ describe("spur families (plan-format.md, Spur families)", () => {
     expect(diff.band[1]).toBeCloseTo(1.205 + 0.06, 9);
     expect(diff.order).toBe(3);
     // sorted by band within each family
-    for (const fam of [h, im]) for (let i = 1; i < fam.length; i++) expect(fam[i]!.band[0]).toBeGreaterThanOrEqual(fam[i - 1]!.band[0]);
+    for (const fam of [h, im])
+      for (let i = 1; i < fam.length; i++) expect(fam[i]!.band[0]).toBeGreaterThanOrEqual(fam[i - 1]!.band[0]);
   });
 
   it("a spur that only comes within guard after Nyquist folding still hits and makes an error (example 2 with fs = 0.1 GHz: 2·fm = 0.09 GHz mirrors to 0.01 GHz)", () => {

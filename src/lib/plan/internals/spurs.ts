@@ -22,7 +22,14 @@ export interface SpurBand {
  */
 export const MAX_LOCK_ORDER_ENUMERATED = 10_000;
 
-function keep(family: SpurFamily, order: number, raw: Interval, detector: Interval, source: string, out: SpurBand[]): void {
+function keep(
+  family: SpurFamily,
+  order: number,
+  raw: Interval,
+  detector: Interval,
+  source: string,
+  out: SpurBand[],
+): void {
   const band = intersect(absInterval(raw), detector);
   if (band) out.push({ family, order, band, source });
 }
@@ -32,7 +39,14 @@ function keep(family: SpurFamily, order: number, raw: Interval, detector: Interv
  * with an empty source and returns it (the caller names it), so the source
  * text is only built for kept bands; null when nothing is kept.
  */
-function keepRaw(family: SpurFamily, order: number, lo: number, hi: number, det: Interval, out: SpurBand[]): SpurBand | null {
+function keepRaw(
+  family: SpurFamily,
+  order: number,
+  lo: number,
+  hi: number,
+  det: Interval,
+  out: SpurBand[],
+): SpurBand | null {
   // |[lo, hi]|
   let alo: number;
   let ahi: number;

@@ -28,7 +28,11 @@ export default async function ComparePage({
           {(["from", "to"] as const).map((k) => (
             <label key={k} className="flex flex-col">
               <span className="font-medium">{k === "from" ? "Earlier revision" : "Later revision"}</span>
-              <select name={k} defaultValue={String(data.result ? data.result[k].number : "")} className="rounded border border-slate-400 px-2 py-1">
+              <select
+                name={k}
+                defaultValue={String(data.result ? data.result[k].number : "")}
+                className="rounded border border-slate-400 px-2 py-1"
+              >
                 {data.revisions.map((r) => (
                   <option key={r.number} value={r.number}>
                     {r.number} · {r.status} · {r.summary.slice(0, 60)}

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { MissionLanes } from "@/components/lane-view/MissionLanes";
+import { MissionLanes } from "@/components/lane-view/mission-lanes";
 import { workspaceAbilities } from "../../_components/can";
 
 export const metadata: Metadata = { title: "Lane view" };

@@ -12,7 +12,9 @@ export default async function MissionUploadsPage({ params }: { params: Promise<{
       {canEdit ? (
         <UploadsPage missionId={missionId} />
       ) : (
-        <p className="rounded bg-ink-faint px-3 py-2 text-sm">Your role in this team may read this mission but not upload data to it.</p>
+        <p className="rounded bg-ink-faint px-3 py-2 text-sm">
+          Your role in this team may read this mission but not upload data to it.
+        </p>
       )}
     </main>
   );

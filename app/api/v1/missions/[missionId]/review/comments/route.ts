@@ -6,8 +6,10 @@ import { createCommentSchema } from "@/schemas/review";
 export const GET = guarded<"missionId">({ review: ["read"] }, "read comments", async ({ actor, params, query }) => {
   const m = await getMissionRow(actor, params.missionId);
   const issues = [];
-  if (query.revision !== undefined && !/^[1-9]\d{0,8}$/.test(query.revision)) issues.push({ path: "revision", message: "must be a revision number (1 or more)" });
-  if (query.finding !== undefined && !isUuid(query.finding)) issues.push({ path: "finding", message: "must be the id of a finding" });
+  if (query.revision !== undefined && !/^[1-9]\d{0,8}$/.test(query.revision))
+    issues.push({ path: "revision", message: "must be a revision number (1 or more)" });
+  if (query.finding !== undefined && !isUuid(query.finding))
+    issues.push({ path: "finding", message: "must be the id of a finding" });
   if (issues.length) throw invalidInput(issues, "The comment filter is not valid.");
   return json({
     comments: await listComments(m.id, {

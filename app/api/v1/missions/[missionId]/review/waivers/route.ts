@@ -8,7 +8,11 @@ export const GET = guarded<"missionId">({ review: ["read"] }, "read waivers", as
   return json({ waivers: await listWaivers(m.id) });
 });
 
-export const POST = guarded<"missionId">({ review: ["waive"] }, "record a waiver", async ({ request, actor, params }) => {
-  const body = parseOr400(createWaiverSchema, await readJsonBody(request, 20_000), "waiver");
-  return json(await createWaiver(actor, params.missionId, body), 201);
-});
+export const POST = guarded<"missionId">(
+  { review: ["waive"] },
+  "record a waiver",
+  async ({ request, actor, params }) => {
+    const body = parseOr400(createWaiverSchema, await readJsonBody(request, 20_000), "waiver");
+    return json(await createWaiver(actor, params.missionId, body), 201);
+  },
+);

@@ -1,0 +1,228 @@
+"use client";
+
+import { useId, useState } from "react";
+import { type DriftCombination, driftBudget, modeShiftPerKelvin } from "@/lib/optics";
+import { ceilToStep, formatFixed, LN_FIT_CARRIER_THZ, parseNumberField } from "./format";
+import { attempt } from "./internals/attempt";
+import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { NumberField } from "./internals/number-field";
+
+export interface DriftBudgetProps {
+  initialLaser2MHz?: number;
+  initialResonatorMilliK?: number;
+  initialLockOffsetMHz?: number;
+  initialStepMHz?: number;
+  /** Carrier and resonator temperature used to compute the mode shift (defaults 193.4 THz, 25 °C). */
+  initialCarrierTHz?: number;
+  initialTemperatureC?: number;
+  /** A measured mode shift (GHz/K) to use instead of the LiNbO3 estimate. */
+  initialModeShiftGHzPerK?: number;
+  initialCombine?: DriftCombination;
+  /** Receives driftMHz, rounded up to 0.1 MHz. */
+  onApply?: (driftMHz: number) => void;
+  applyLabel?: string;
+}
+
+/** Drift budget of the laser-pair offset → the plan's driftMHz. */
+export function DriftBudget({
+  initialLaser2MHz = 10,
+  initialResonatorMilliK = 1,
+  initialLockOffsetMHz = 0.5,
+  initialStepMHz = 10,
+  initialCarrierTHz = 193.4,
+  initialTemperatureC = 25,
+  initialModeShiftGHzPerK,
+  initialCombine = "worst-case",
+  onApply,
+  applyLabel = "Apply drift",
+}: DriftBudgetProps) {
+  const id = useId();
+  const [laser2, setLaser2] = useState(String(initialLaser2MHz));
+  const [milliK, setMilliK] = useState(String(initialResonatorMilliK));
+  const [lock, setLock] = useState(String(initialLockOffsetMHz));
+  const [step, setStep] = useState(String(initialStepMHz));
+  const [carrierText, setCarrierText] = useState(String(initialCarrierTHz));
+  const [tempText, setTempText] = useState(String(initialTemperatureC));
+  const [useMeasured, setUseMeasured] = useState(initialModeShiftGHzPerK !== undefined);
+  const [shiftText, setShiftText] = useState(
+    initialModeShiftGHzPerK !== undefined ? String(initialModeShiftGHzPerK) : "-6.2",
+  );
+  const [combine, setCombine] = useState<DriftCombination>(initialCombine);
+
+  const f = {
+    laser2: parseNumberField(laser2, "Laser 2 stability", { min: 0 }),
+    milliK: parseNumberField(milliK, "Resonator temperature stability", { min: 0 }),
+    lock: parseNumberField(lock, "Lock offset", { min: 0 }),
+    step: parseNumberField(step, "Tuning step", { min: 0 }),
+    carrier: parseNumberField(carrierText, "Carrier", LN_FIT_CARRIER_THZ),
+    temp: parseNumberField(tempText, "Resonator temperature", { min: -50, max: 300 }),
+    shift: parseNumberField(shiftText, "Mode shift"),
+  };
+
+  const shiftCalc = useMeasured
+    ? f.shift.ok
+      ? { ok: true as const, value: f.shift.value }
+      : null
+    : f.carrier.ok && f.temp.ok
+      ? attempt(
+          () =>
+            modeShiftPerKelvin(f.carrier.ok ? f.carrier.value : Number.NaN, f.temp.ok ? f.temp.value : Number.NaN)
+              .ghzPerK,
+        )
+      : null;
+
+  const budget =
+    f.laser2.ok && f.milliK.ok && f.lock.ok && f.step.ok && shiftCalc?.ok
+      ? attempt(() =>
+          driftBudget({
+            laser2MHz: f.laser2.ok ? f.laser2.value : 0,
+            resonatorMilliK: f.milliK.ok ? f.milliK.value : 0,
+            modeShiftGHzPerK: shiftCalc.value,
+            lockOffsetMHz: f.lock.ok ? f.lock.value : 0,
+            stepMHz: f.step.ok ? f.step.value : 0,
+            combine,
+          }),
+        )
+      : null;
+  const result = budget?.ok ? budget.value : null;
+  const applied = result ? ceilToStep(result.driftMHz, 0.1) : null;
+  const calcError = [shiftCalc, budget].find((a) => a && !a.ok);
+
+  return (
+    <HelperCard
+      id="drift-budget"
+      title="Drift budget"
+      summary="How far the laser-pair offset can wander from the carrier while observing: the plan's drift (± MHz)."
+    >
+      <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
+        <NumberField
+          id={`${id}-l2`}
+          label="Laser 2 stability (±)"
+          unit="MHz"
+          value={laser2}
+          onChange={setLaser2}
+          error={f.laser2.ok ? null : f.laser2.message}
+        />
+        <NumberField
+          id={`${id}-mk`}
+          label="Resonator temperature stability (±)"
+          unit="mK"
+          value={milliK}
+          onChange={setMilliK}
+          error={f.milliK.ok ? null : f.milliK.message}
+        />
+        <NumberField
+          id={`${id}-lock`}
+          label="Lock offset from mode centre (±)"
+          unit="MHz"
+          value={lock}
+          onChange={setLock}
+          error={f.lock.ok ? null : f.lock.message}
+        />
+        <NumberField
+          id={`${id}-step`}
+          label="Tuning step"
+          unit="MHz"
+          value={step}
+          onChange={setStep}
+          error={f.step.ok ? null : f.step.message}
+        />
+      </div>
+      <label className="mb-2 flex items-center gap-2 text-sm">
+        <input type="checkbox" checked={useMeasured} onChange={(e) => setUseMeasured(e.target.checked)} />
+        Use a measured mode shift instead of the LiNbO3 estimate
+      </label>
+      {useMeasured ? (
+        <NumberField
+          id={`${id}-shift`}
+          label="Mode shift dν/dT"
+          unit="GHz/K"
+          value={shiftText}
+          onChange={setShiftText}
+          error={f.shift.ok ? null : f.shift.message}
+        />
+      ) : (
+        <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
+          <NumberField
+            id={`${id}-carrier`}
+            label="Carrier"
+            unit="THz"
+            value={carrierText}
+            onChange={setCarrierText}
+            error={f.carrier.ok ? null : f.carrier.message}
+          />
+          <NumberField
+            id={`${id}-temp`}
+            label="Resonator temperature"
+            unit="°C"
+            value={tempText}
+            onChange={setTempText}
+            error={f.temp.ok ? null : f.temp.message}
+          />
+        </div>
+      )}
+      <fieldset className="mb-2 flex gap-4 text-sm">
+        <legend className="mb-1 text-sm font-medium text-ink">Combine the terms as</legend>
+        <label className="flex items-center gap-1">
+          <input
+            type="radio"
+            name={`${id}-combine`}
+            checked={combine === "worst-case"}
+            onChange={() => setCombine("worst-case")}
+          />
+          Worst case (sum)
+        </label>
+        <label className="flex items-center gap-1">
+          <input type="radio" name={`${id}-combine`} checked={combine === "rss"} onChange={() => setCombine("rss")} />
+          Root-sum-square
+        </label>
+      </fieldset>
+      <ErrorLine message={calcError && !calcError.ok ? calcError.message : null} />
+      <div className="mt-2">
+        {result?.terms.map((t) => (
+          <ResultRow key={t.key} label={t.label} value={formatFixed(t.mhz, 3)} unit="MHz" />
+        ))}
+        <ResultRow
+          label={combine === "rss" ? "Drift (root-sum-square)" : "Drift (worst case)"}
+          value={result ? `± ${formatFixed(result.driftMHz, 3)}` : "—"}
+          unit="MHz"
+          emphasis
+          testId="db-drift"
+        />
+        <ResultRow
+          label="Value applied (rounded up to 0.1 MHz)"
+          value={applied !== null ? formatFixed(applied, 1) : "—"}
+          unit="MHz"
+        />
+      </div>
+      {onApply ? (
+        <ApplyButton
+          label={applyLabel}
+          disabled={applied === null}
+          onClick={() => applied !== null && onApply(applied)}
+        />
+      ) : null}
+      <Working
+        formulas={[
+          "resonator term = |dν/dT| [GHz/K] × δT [mK]  (MHz)",
+          "worst case: D = laser 2 + resonator + lock + step/2",
+          "root-sum-square: D = √(laser 2² + resonator² + lock² + (step/2)²)",
+        ]}
+        inputs={[
+          [
+            "dν/dT",
+            shiftCalc?.ok
+              ? `${formatFixed(shiftCalc.value, 3)} GHz/K${useMeasured ? " (measured)" : " (LiNbO3 e-ray estimate)"}`
+              : "—",
+          ],
+          ["combination", combine === "rss" ? "root-sum-square" : "worst case"],
+        ]}
+        sources={[
+          "Bookkeeping of laser-2, resonator, lock and step terms: project domain reference §3.3 (common practice: guard ≥ full peak-to-peak drift or 3× RMS, plus half the step)",
+          "Mode shift: Jundt, Opt. Lett. 22, 1553 (1997) and Kim & Smith, J. Appl. Phys. 40, 4637 (1969), formula derived in docs/helpers.md",
+          "Root-sum-square assumes independent random terms; the half-step is a bound, so rss is optimistic about it",
+        ]}
+      />
+    </HelperCard>
+  );
+}

@@ -1,0 +1,356 @@
+"use client";
+
+import { useId, useState } from "react";
+import {
+  freeSpectralRange,
+  fsrShiftPerKelvin,
+  groupIndex,
+  type IndexModel,
+  linewidthFromQ,
+  loadedQFromLinewidth,
+  modeShiftPerKelvin,
+  radiusForFsr,
+  wavelengthNmFromTHz,
+} from "@/lib/optics";
+import { formatFixed, formatSignificant, LN_FIT_CARRIER_THZ, parseNumberField } from "./format";
+import { attempt } from "./internals/attempt";
+import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { NumberField } from "./internals/number-field";
+
+type IndexSource = "jundt" | "zelmon-e" | "zelmon-o" | "measured";
+
+const INDEX_SOURCES: Record<IndexSource, string> = {
+  jundt: "LiNbO3 e-ray at temperature (Jundt 1997)",
+  "zelmon-e": "LiNbO3 e-ray, 21 °C (Zelmon et al. 1997)",
+  "zelmon-o": "LiNbO3 o-ray, 21 °C (Zelmon et al. 1997)",
+  measured: "Measured group index",
+};
+
+export interface ResonatorApplyValue {
+  fsrGHz: number;
+  loadedQ: number;
+}
+
+export interface ResonatorSizingProps {
+  /** Start from a radius (µm) instead of an FSR. */
+  initialRadiusUm?: number;
+  /** Start from an FSR (GHz); default 183.31 when no radius is given. */
+  initialFsrGHz?: number;
+  initialCarrierTHz?: number;
+  initialTemperatureC?: number;
+  initialLoadedQ?: number;
+  /** A measured group index; when given it is used instead of the fit. */
+  initialMeasuredGroupIndex?: number;
+  /** Receives the FSR and loaded Q, the two numbers a resonator entry holds. */
+  onApply?: (value: ResonatorApplyValue) => void;
+  applyLabel?: string;
+}
+
+/**
+ * Whispering-gallery resonator sizing: radius ↔ FSR with the group index from
+ * a LiNbO3 fit (or a measured value), thermal shifts of a mode and of the
+ * FSR, and loaded Q ↔ linewidth.
+ */
+export function ResonatorSizing({
+  initialRadiusUm,
+  initialFsrGHz = 183.31,
+  initialCarrierTHz = 193.4,
+  initialTemperatureC = 25,
+  initialLoadedQ = 1e7,
+  initialMeasuredGroupIndex,
+  onApply,
+  applyLabel = "Apply FSR and Q",
+}: ResonatorSizingProps) {
+  const id = useId();
+  const [direction, setDirection] = useState<"fromRadius" | "fromFsr">(
+    initialRadiusUm !== undefined ? "fromRadius" : "fromFsr",
+  );
+  const [radiusText, setRadiusText] = useState(initialRadiusUm !== undefined ? String(initialRadiusUm) : "1000");
+  const [fsrText, setFsrText] = useState(String(initialFsrGHz));
+  const [carrierText, setCarrierText] = useState(String(initialCarrierTHz));
+  const [tempText, setTempText] = useState(String(initialTemperatureC));
+  const [source, setSource] = useState<IndexSource>(initialMeasuredGroupIndex !== undefined ? "measured" : "jundt");
+  const [ngText, setNgText] = useState(
+    initialMeasuredGroupIndex !== undefined ? String(initialMeasuredGroupIndex) : "2.18",
+  );
+  const [qDirection, setQDirection] = useState<"fromQ" | "fromLinewidth">("fromQ");
+  const [qText, setQText] = useState(String(initialLoadedQ));
+  const [lwText, setLwText] = useState(() =>
+    String(Number(linewidthFromQ(initialCarrierTHz, initialLoadedQ).toPrecision(6))),
+  );
+
+  const carrier = parseNumberField(carrierText, "Carrier", LN_FIT_CARRIER_THZ);
+  const temp = parseNumberField(tempText, "Temperature", { min: -50, max: 300 });
+  const radius = parseNumberField(radiusText, "Radius", { min: 0, exclusiveMin: true });
+  const fsrIn = parseNumberField(fsrText, "FSR", { min: 0, exclusiveMin: true });
+  const ngIn = parseNumberField(ngText, "Group index", { min: 1 });
+  const qIn = parseNumberField(qText, "Loaded Q", { min: 0, exclusiveMin: true });
+  const lwIn = parseNumberField(lwText, "Linewidth", { min: 0, exclusiveMin: true });
+
+  const index =
+    carrier.ok && temp.ok
+      ? attempt(() => {
+          const lambdaUm = wavelengthNmFromTHz(carrier.value) / 1000;
+          if (source === "measured")
+            return { n: null as number | null, ng: ngIn.ok ? ngIn.value : Number.NaN, lambdaUm };
+          const model: IndexModel =
+            source === "jundt"
+              ? { fit: "jundt", temperatureC: temp.value }
+              : { fit: "zelmon", axis: source === "zelmon-e" ? "e" : "o" };
+          const g = groupIndex(lambdaUm, model);
+          return { n: g.n as number | null, ng: g.ng, lambdaUm };
+        })
+      : null;
+  const ng = index?.ok && Number.isFinite(index.value.ng) ? index.value.ng : null;
+
+  const sizing =
+    ng !== null
+      ? direction === "fromRadius"
+        ? radius.ok
+          ? attempt(() => ({ radiusUm: radius.value, fsrGHz: freeSpectralRange(radius.value, ng) }))
+          : null
+        : fsrIn.ok
+          ? attempt(() => ({ radiusUm: radiusForFsr(fsrIn.value, ng), fsrGHz: fsrIn.value }))
+          : null
+      : null;
+  const size = sizing?.ok ? sizing.value : null;
+
+  const thermal =
+    carrier.ok && temp.ok && size
+      ? attempt(() => ({
+          mode: modeShiftPerKelvin(carrier.value, temp.value),
+          fsr: fsrShiftPerKelvin(size.fsrGHz, carrier.value, temp.value),
+        }))
+      : null;
+
+  const qCalc = carrier.ok
+    ? qDirection === "fromQ"
+      ? qIn.ok
+        ? attempt(() => ({ loadedQ: qIn.value, linewidthMHz: linewidthFromQ(carrier.value, qIn.value) }))
+        : null
+      : lwIn.ok
+        ? attempt(() => ({ loadedQ: loadedQFromLinewidth(carrier.value, lwIn.value), linewidthMHz: lwIn.value }))
+        : null
+    : null;
+  const q = qCalc?.ok ? qCalc.value : null;
+
+  const firstError = [index, sizing, thermal, qCalc].find((a) => a && !a.ok);
+  const canApply = size !== null && q !== null;
+
+  return (
+    <HelperCard
+      id="resonator-sizing"
+      title="Resonator sizing"
+      summary="Radius ↔ free spectral range, thermal shifts, and loaded Q ↔ linewidth for a LiNbO3 whispering-gallery disc."
+    >
+      <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
+        <NumberField
+          id={`${id}-carrier`}
+          label="Carrier (laser 1)"
+          unit="THz"
+          value={carrierText}
+          onChange={setCarrierText}
+          error={carrier.ok ? null : carrier.message}
+        />
+        <NumberField
+          id={`${id}-temp`}
+          label="Resonator temperature"
+          unit="°C"
+          value={tempText}
+          onChange={setTempText}
+          error={temp.ok ? null : temp.message}
+        />
+      </div>
+
+      <label htmlFor={`${id}-source`} className="text-sm font-medium text-ink">
+        Group index from
+      </label>
+      <select
+        id={`${id}-source`}
+        value={source}
+        onChange={(e) => setSource(e.target.value as IndexSource)}
+        className="mb-2 mt-1 w-full rounded border border-ink-faint px-2 py-1 text-sm"
+      >
+        {(Object.keys(INDEX_SOURCES) as IndexSource[]).map((k) => (
+          <option key={k} value={k}>
+            {INDEX_SOURCES[k]}
+          </option>
+        ))}
+      </select>
+      {source === "measured" ? (
+        <NumberField
+          id={`${id}-ng`}
+          label="Measured group index n_g"
+          value={ngText}
+          onChange={setNgText}
+          error={ngIn.ok ? null : ngIn.message}
+          hint="Overrides the material fit (a measured FSR includes the mode's geometric dispersion)."
+        />
+      ) : null}
+
+      <fieldset className="mb-2 mt-2 flex gap-4 text-sm">
+        <legend className="sr-only">Size from</legend>
+        <label className="flex items-center gap-1">
+          <input
+            type="radio"
+            name={`${id}-dir`}
+            checked={direction === "fromFsr"}
+            onChange={() => setDirection("fromFsr")}
+          />
+          Radius for an FSR
+        </label>
+        <label className="flex items-center gap-1">
+          <input
+            type="radio"
+            name={`${id}-dir`}
+            checked={direction === "fromRadius"}
+            onChange={() => setDirection("fromRadius")}
+          />
+          FSR of a radius
+        </label>
+      </fieldset>
+      {direction === "fromFsr" ? (
+        <NumberField
+          id={`${id}-fsr`}
+          label="Free spectral range"
+          unit="GHz"
+          value={fsrText}
+          onChange={setFsrText}
+          error={fsrIn.ok ? null : fsrIn.message}
+        />
+      ) : (
+        <NumberField
+          id={`${id}-radius`}
+          label="Major radius R"
+          unit="µm"
+          value={radiusText}
+          onChange={setRadiusText}
+          error={radius.ok ? null : radius.message}
+        />
+      )}
+
+      <fieldset className="mb-2 flex gap-4 text-sm">
+        <legend className="sr-only">Linewidth from</legend>
+        <label className="flex items-center gap-1">
+          <input
+            type="radio"
+            name={`${id}-q`}
+            checked={qDirection === "fromQ"}
+            onChange={() => setQDirection("fromQ")}
+          />
+          Linewidth from Q
+        </label>
+        <label className="flex items-center gap-1">
+          <input
+            type="radio"
+            name={`${id}-q`}
+            checked={qDirection === "fromLinewidth"}
+            onChange={() => setQDirection("fromLinewidth")}
+          />
+          Q from linewidth
+        </label>
+      </fieldset>
+      {qDirection === "fromQ" ? (
+        <NumberField
+          id={`${id}-qval`}
+          label="Loaded Q"
+          value={qText}
+          onChange={setQText}
+          error={qIn.ok ? null : qIn.message}
+        />
+      ) : (
+        <NumberField
+          id={`${id}-lw`}
+          label="Loaded linewidth (FWHM)"
+          unit="MHz"
+          value={lwText}
+          onChange={setLwText}
+          error={lwIn.ok ? null : lwIn.message}
+        />
+      )}
+
+      <ErrorLine message={firstError && !firstError.ok ? firstError.message : null} />
+
+      <div className="mt-2">
+        {index?.ok && index.value.n !== null ? (
+          <ResultRow label="Phase index n" value={formatFixed(index.value.n, 5)} />
+        ) : null}
+        <ResultRow label="Group index n_g" value={ng !== null ? formatFixed(ng, 5) : "—"} />
+        <ResultRow
+          label="Free spectral range"
+          value={size ? formatFixed(size.fsrGHz, 4) : "—"}
+          unit="GHz"
+          emphasis={direction === "fromRadius"}
+          testId="rs-fsr"
+        />
+        <ResultRow
+          label="Major radius"
+          value={size ? formatFixed(size.radiusUm, 3) : "—"}
+          unit="µm"
+          emphasis={direction === "fromFsr"}
+          testId="rs-radius"
+        />
+        <ResultRow
+          label="Loaded linewidth"
+          value={q ? formatSignificant(q.linewidthMHz, 4) : "—"}
+          unit="MHz"
+          testId="rs-linewidth"
+        />
+        <ResultRow label="Loaded Q" value={q ? formatSignificant(q.loadedQ, 4) : "—"} />
+        <ResultRow
+          label="Finesse FSR/δν"
+          value={q && size ? formatSignificant((size.fsrGHz * 1000) / q.linewidthMHz, 3) : "—"}
+        />
+        <ResultRow
+          label="Mode shift dν/dT"
+          value={thermal?.ok ? formatFixed(thermal.value.mode.ghzPerK, 3) : "—"}
+          unit="GHz/K"
+          testId="rs-mode-shift"
+        />
+        <ResultRow
+          label="FSR shift dFSR/dT (fixed λ, §2.4 form)"
+          value={thermal?.ok ? formatFixed(thermal.value.fsr.mhzPerK, 3) : "—"}
+          unit="MHz/K"
+          testId="rs-fsr-shift"
+        />
+        <ResultRow
+          label="FSR shift, following the modes"
+          value={thermal?.ok ? formatFixed(thermal.value.fsr.mhzPerKFollowingMode, 3) : "—"}
+          unit="MHz/K"
+        />
+      </div>
+      {onApply ? (
+        <ApplyButton
+          label={applyLabel}
+          disabled={!canApply}
+          onClick={() => size && q && onApply({ fsrGHz: size.fsrGHz, loadedQ: q.loadedQ })}
+        />
+      ) : null}
+
+      <Working
+        formulas={[
+          "n_g = n − λ·dn/dλ   (analytic derivative of the Sellmeier form)",
+          "FSR = c / (2π·R·n_g)     R = c / (2π·FSR·n_g)",
+          "δν = ν / Q_L     finesse = FSR / δν",
+          "dν/dT = −ν·[(n/n_g)·α_a + (∂n/∂T)/n_g]",
+          "dFSR/dT = −FSR·[α_a + (dn_g/dT)/n_g]",
+        ]}
+        inputs={[
+          ["ν (carrier)", carrier.ok ? `${carrier.value} THz` : "—"],
+          ["λ (vacuum)", index?.ok ? `${formatFixed(index.value.lambdaUm * 1000, 3)} nm` : "—"],
+          ["T", temp.ok ? `${temp.value} °C` : "—"],
+          ["n_g source", INDEX_SOURCES[source]],
+          ["α_a", thermal?.ok ? `${formatSignificant(thermal.value.mode.alphaA, 4)} /K` : "—"],
+          ["∂n_e/∂T", thermal?.ok ? `${formatSignificant(thermal.value.mode.dnDT, 4)} /K` : "—"],
+          ["∂n_g/∂T", thermal?.ok ? `${formatSignificant(thermal.value.fsr.dngDT, 4)} /K` : "—"],
+        ]}
+        sources={[
+          "Zelmon, Small & Jundt, JOSA B 14, 3319 (1997): LiNbO3 Sellmeier, 21 °C",
+          "Jundt, Opt. Lett. 22, 1553 (1997): temperature-dependent n_e (used for the thermal shifts in every case)",
+          "Kim & Smith, J. Appl. Phys. 40, 4637 (1969): thermal expansion ⊥ c, α_a",
+          "FSR and thermal-shift formulas: derived (docs/helpers.md); material dispersion only, a measured FSR is better",
+        ]}
+      />
+    </HelperCard>
+  );
+}
