@@ -17,7 +17,8 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "unit",
-          include: ["src/**/*.test.ts", "src/**/*.test.tsx", "tests/reference/**/*.test.ts"],
+          setupFiles: ["tests/setup/fast-check-seed.ts"],
+          include: ["src/**/*.test.ts", "src/**/*.test.tsx", "tests/reference/**/*.test.ts", "tests/lint/**/*.test.ts"],
           environment: "node",
         },
       },
@@ -25,6 +26,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "integration",
+          setupFiles: ["tests/setup/fast-check-seed.ts"],
           include: ["tests/integration/**/*.test.ts"],
           environment: "node",
           fileParallelism: false,
@@ -36,6 +38,7 @@ export default defineConfig({
         resolve: { alias },
         test: {
           name: "e2e",
+          setupFiles: ["tests/setup/fast-check-seed.ts"],
           include: ["tests/e2e/**/*.test.ts"],
           environment: "node",
           fileParallelism: false,
