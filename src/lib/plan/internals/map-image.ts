@@ -1,5 +1,6 @@
 import { combDistanceAtLevel, combIntegralK, combK, combResponse } from "./comb";
 import type { MapChannel, MapModel } from "./map-model";
+import { type WorkCounter, countSteps } from "./work-counter";
 
 /**
  * The image rule for the feasibility map (plan-format.md, "Derived
@@ -131,9 +132,17 @@ const MAX_WINDOWS = 10_000;
  * The L windows inside [lo, hi] where the image rule can fire for an SSB
  * channel: `X'` must meet `±rfInput` (elsewhere `∫Wᵢ = 0`) and come within
  * `r` of a mode centre, where `C(r) = 10^(−threshold/10)·∫W/B`
- * (since `∫Wᵢ ≤ B·max C` over `X'`). Sorted and merged.
+ * (since `∫Wᵢ ≤ B·max C` over `X'`). Sorted and merged. Each mode window
+ * enumerated is one work step (`work`).
  */
-export function imageWindows(c: Comb, m: MapModel, ch: MapChannel, lo: number, hi: number): [number, number][] {
+export function imageWindows(
+  c: Comb,
+  m: MapModel,
+  ch: MapChannel,
+  lo: number,
+  hi: number,
+  work?: WorkCounter,
+): [number, number][] {
   const band = ch.bands[0];
   if (!band) return [];
   const [xl, xh] = band;
@@ -155,6 +164,7 @@ export function imageWindows(c: Comb, m: MapModel, ch: MapChannel, lo: number, h
       out.push([a, b]);
       continue;
     }
+    countSteps(work, nLast - nFirst + 1);
     for (let n = nFirst; n <= nLast; n++) {
       // X' within r of n·fsr: 2L − xh ≤ n·fsr + r and 2L − xl ≥ n·fsr − r
       const wlo = Math.max(a, (n * c.fsr - r + xl) / 2);
@@ -195,18 +205,33 @@ export const IMAGE_EDGE_BRACKET = 1e-6;
  * the state changes at most once: compare the run's ends and binary-search
  * the grid for the change. The changes found are exactly those a point-by-
  * point scan of the same grid finds.
+ *
+ * Work steps (`work`): the mode windows, every evaluation of the rule
+ * (grid points and bisection steps) and every monotone split point.
  */
-export function imageFiringIntervals(c: Comb, m: MapModel, ch: MapChannel, lo: number, hi: number): [number, number][] {
+export function imageFiringIntervals(
+  c: Comb,
+  m: MapModel,
+  ch: MapChannel,
+  lo: number,
+  hi: number,
+  work?: WorkCounter,
+): [number, number][] {
   const band = ch.bands[0];
   if (!band || !ch.ssb || !(hi > lo)) return [];
   const [xl, xh] = band;
   const B = ch.widthGHz;
-  const windows = imageWindows(c, m, ch, lo, hi);
+  const windows = imageWindows(c, m, ch, lo, hi, work);
   const kinks: number[] = [];
   for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) kinks.push((e + xh) / 2, (e + xl) / 2);
   const step = Math.min(m.linewidth, B) / 16;
   const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
-  const fires = makeImageFires(c, m, ch);
+  const firesAt = makeImageFires(c, m, ch);
+  let steps = 0;
+  const fires = (L: number): boolean => {
+    steps++;
+    return firesAt(L);
+  };
   const out: [number, number][] = [];
   const push = (a: number, b: number) => {
     if (!(b > a)) return;
@@ -244,8 +269,10 @@ export function imageFiringIntervals(c: Comb, m: MapModel, ch: MapChannel, lo: n
       const kLast = Math.floor((q - centreSum) / quarter);
       if (!(kLast - kFirst < n)) {
         // more monotone runs than grid points (fsr far below the grid step): every grid point is its own run
+        steps += n;
         for (let j = 0; j < n; j++) splits.push(j);
-      } else
+      } else {
+        if (kLast >= kFirst) steps += kLast - kFirst + 1;
         for (let k = kFirst; k <= kLast; k++) {
           const Lk = k * quarter + centreSum;
           if (Lk > p && Lk < q) {
@@ -253,6 +280,7 @@ export function imageFiringIntervals(c: Comb, m: MapModel, ch: MapChannel, lo: n
             if (splits[splits.length - 1] !== j) splits.push(j);
           }
         }
+      }
       const changes: number[] = []; // t: state(t) ≠ state(t + 1)
       let ja = 0;
       for (const jb of [...splits, n]) {
@@ -289,6 +317,7 @@ export function imageFiringIntervals(c: Comb, m: MapModel, ch: MapChannel, lo: n
       if (openAt !== null) push(openAt, q);
     }
   }
+  countSteps(work, steps);
   return out;
 }
 

@@ -10,6 +10,7 @@
  * operation splits pieces exactly where a linear edge meets a limit (the
  * solution of `a + b·L = c`), so all results are exact up to rounding.
  */
+import { type WorkCounter, countSteps } from "./work-counter";
 
 export interface Lin {
   a: number;
@@ -105,8 +106,8 @@ export function clipFn(fn: IFn, min: number, max: number): IFn {
   return out;
 }
 
-/** Multiples `k·h` (k ≥ 0) met by the edge `f` on (from, to), as L values. */
-function multipleCrossings(f: Lin, h: number, from: number, to: number, out: number[]): void {
+/** Multiples `k·h` (k ≥ 0) met by the edge `f` on (from, to), as L values; each multiple tried is one work step. */
+function multipleCrossings(f: Lin, h: number, from: number, to: number, out: number[], work?: WorkCounter): void {
   if (f.b === 0) return;
   const v0 = at(f, from);
   const v1 = at(f, to);
@@ -115,6 +116,7 @@ function multipleCrossings(f: Lin, h: number, from: number, to: number, out: num
   // Past 2^53 consecutive integers are no longer distinct doubles (k + 1 === k),
   // and more than MAX_ZONE_CROSSINGS edges are marked unresolved by the callers.
   if (!(kHi - kLo <= MAX_ZONE_CROSSINGS) || !(kHi < Number.MAX_SAFE_INTEGER)) return;
+  countSteps(work, kHi - kLo + 1);
   for (let k = kLo; k <= kHi; k++) {
     const L = crossing(f, k * h, from, to);
     if (L === L) out.push(L);
@@ -161,9 +163,10 @@ function widerThan(p: Piece, w: number): boolean {
  * Nyquist folding into `[0, h]`, h = fs/2 (plan-format.md, "Spur families"):
  * zone `z = floor(f/h)`, even zones shift down, odd zones mirror; a band
  * crossing one zone edge `K·h` reaches 0 (K even) or h (K odd), one holding a
- * whole zone becomes `[0, h]`. Input edges must be ≥ 0.
+ * whole zone becomes `[0, h]`. Input edges must be ≥ 0. Each zone edge
+ * tried is one work step (`work`).
  */
-export function foldFn(fn: IFn, h: number): FoldedPiece[] {
+export function foldFn(fn: IFn, h: number, work?: WorkCounter): FoldedPiece[] {
   const out: FoldedPiece[] = [];
   for (const p of fn) {
     if (widerThan(p, 2 * h)) {
@@ -176,8 +179,8 @@ export function foldFn(fn: IFn, h: number): FoldedPiece[] {
       continue;
     }
     const pts: number[] = [];
-    multipleCrossings(p.lo, h, p.from, p.to, pts);
-    multipleCrossings(p.hi, h, p.from, p.to, pts);
+    multipleCrossings(p.lo, h, p.from, p.to, pts, work);
+    multipleCrossings(p.hi, h, p.from, p.to, pts, work);
     const cuts = cutsOf(p.from, p.to, pts);
     for (let i = 0; i + 1 < cuts.length; i++) {
       const from = cuts[i] as number;
@@ -295,8 +298,8 @@ export function outsideSet(fn: IFn, min: number, max: number, out: LSet): void {
   }
 }
 
-/** Where the interior of `[lo, hi]` holds a multiple `k·h`, k ≥ 1. */
-export function straddleSet(fn: IFn, h: number, out: LSet): void {
+/** Where the interior of `[lo, hi]` holds a multiple `k·h`, k ≥ 1; each multiple tried is one work step (`work`). */
+export function straddleSet(fn: IFn, h: number, out: LSet, work?: WorkCounter): void {
   for (const p of fn) {
     if (
       (widerThan(p, h) && at(p.hi, p.from) > h && at(p.hi, p.to) > h) ||
@@ -319,6 +322,7 @@ export function straddleSet(fn: IFn, h: number, out: LSet): void {
       out.push([p.from, p.to]);
       continue;
     }
+    countSteps(work, kHi - kLo + 1);
     for (let k = kLo; k <= kHi; k++) {
       const s1 = below(p.lo, k * h, p.from, p.to);
       const s2 = above(p.hi, k * h, p.from, p.to);
