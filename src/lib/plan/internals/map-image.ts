@@ -182,7 +182,11 @@ export function imageWindows(
   return merged;
 }
 
-/** Bisection bracket width for an image-rule map edge (GHz). */
+/**
+ * Bisection bracket width for an image-rule map edge (GHz). Where doubles
+ * near L are spaced wider than this, the bisection ends when the midpoint
+ * rounds to an end (ADR 005).
+ */
 export const IMAGE_EDGE_BRACKET = 1e-6;
 
 /**
@@ -305,6 +309,9 @@ export function imageFiringIntervals(
         const before = state(t);
         while (b - a > IMAGE_EDGE_BRACKET) {
           const mid = (a + b) / 2;
+          // far from 0 (|L| above about 1e10 GHz) neighbouring doubles are more than the bracket
+          // apart: the midpoint is an end, and the edge (the bracket's midpoint) is that end
+          if (mid === a || mid === b) break;
           if (fires(mid) === before) a = mid;
           else b = mid;
         }
@@ -366,6 +373,9 @@ export function imageFiringIntervalsByScan(
           let b = L;
           while (b - a > IMAGE_EDGE_BRACKET) {
             const mid = (a + b) / 2;
+            // far from 0 (|L| above about 1e10 GHz) neighbouring doubles are more than the bracket
+            // apart: the midpoint is an end, and the edge (the bracket's midpoint) is that end
+            if (mid === a || mid === b) break;
             if (fires(mid) === prev) a = mid;
             else b = mid;
           }
