@@ -8,6 +8,6 @@ export { mapDiagnostics, type MapDiagnostics } from "./map-diagnostics";
 export type { WorkCounter } from "./internals/work-counter";
 // The engine's enumeration limits (docs/decisions/004 and 005), for the tests that bound its work.
 export { MAX_LOCK_ORDER_ENUMERATED } from "./internals/spurs";
-export { MAX_ZONE_CROSSINGS } from "./internals/map-linear";
-export { MAX_GRID_POINTS } from "./internals/map-image";
+export { MAX_ZONE_CROSSINGS } from "./internals/map-fold";
+export { MAX_GRID_POINTS } from "./internals/map-image-edges";
 export * from "./types";

@@ -1,18 +1,15 @@
 import type { MapChannel, MapCode, MapModel } from "./map-model";
-import { imageFiringIntervals, makeComb } from "./map-image";
+import { makeComb } from "./map-image";
+import { imageFiringIntervals } from "./map-image-edges";
 import { MAX_LOCK_ORDER_ENUMERATED } from "./spurs";
+import { foldFn, straddleSet, STRADDLES, UNRESOLVED, type FoldedPiece } from "./map-fold";
 import {
   absFn,
   clipFn,
-  foldFn,
   lin,
   outsideSet,
-  straddleSet,
   widen,
   withinGuardSet,
-  STRADDLES,
-  UNRESOLVED,
-  type FoldedPiece,
   type IFn,
   type Lin,
   type LSet,
