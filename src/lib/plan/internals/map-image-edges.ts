@@ -66,10 +66,14 @@ export function imageFiringIntervals(
   const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
   const firesAt = makeImageFires(c, m, ch);
   let steps = 0;
-  const fires = (L: number): boolean => {
-    steps++;
-    return firesAt(L);
-  };
+  // evaluations are counted only when a counter is passed (the map's hot path stays a direct call)
+  const fires =
+    work === undefined
+      ? firesAt
+      : (L: number): boolean => {
+          steps++;
+          return firesAt(L);
+        };
   const out: [number, number][] = [];
   const push = (a: number, b: number) => {
     if (!(b > a)) return;
