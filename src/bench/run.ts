@@ -22,12 +22,7 @@ import { cpus, loadavg } from "node:os";
 import { fileURLToPath } from "node:url";
 import { demoPlan } from "@db/seed/mission-demo-plan";
 import { type Plan, parsePlan } from "@/schemas/plan";
-import { checkPlan } from "@/lib/plan/check-plan";
-import { feasibilityMap } from "@/lib/plan/feasibility-map";
-import { placeLo } from "@/lib/plan/place-lo";
-import { buildMapModel, codesOfMask } from "@/lib/plan/internals/map-model";
-import { makePointEvaluator } from "@/lib/plan/internals/map-point";
-import { mapPieces } from "@/lib/plan/internals/map-sweep";
+import { checkPlan, feasibilityMap, mapDiagnostics, placeLo } from "@/lib/plan";
 import { generatedChainPlan } from "./generated-chain";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
@@ -155,16 +150,16 @@ function fourChainSection(): void {
 
 function mapSection(): void {
   const plan = mustParse(generatedChainPlan(), "generated chain");
-  const model = buildMapModel(plan, "G");
+  const diag = mapDiagnostics(plan, "G");
   const exact = timeMedians(() => feasibilityMap(plan, "G"), 15, 3);
   const exactMs = exact.wall;
   const map = feasibilityMap(plan, "G");
-  const pieces = mapPieces(model);
+  const { pieces, codesOf } = diag;
 
   // 1 MHz grid over the reach, lean per-offset evaluation at every point
-  const [r0, r1] = model.reach[0] as [number, number];
+  const [r0, r1] = diag.reachGHz[0] as [number, number];
   const n = Math.round((r1 - r0) * 1000);
-  const evalAt = makePointEvaluator(model);
+  const evalAt = diag.maskAt;
   const gridMask = new Uint8Array(n + 1);
   const c0 = process.cpuUsage();
   const t0 = performance.now();
@@ -197,21 +192,18 @@ function mapSection(): void {
       if ((g & inter) !== inter || (g & ~union) !== 0) {
         onEdgeOutside++;
         if (examples.length < 5)
-          examples.push(
-            `L=${L.toFixed(6)} grid ${codesOfMask(g)} vs ${codesOfMask(piece.mask)} | ${codesOfMask(other.mask)}`,
-          );
+          examples.push(`L=${L.toFixed(6)} grid ${codesOf(g)} vs ${codesOf(piece.mask)} | ${codesOf(other.mask)}`);
       }
     } else if (g === piece.mask) agreeInterior++;
     else {
       disagreeInterior++;
-      if (examples.length < 5)
-        examples.push(`L=${L.toFixed(6)} grid ${codesOfMask(g)} vs map ${codesOfMask(piece.mask)}`);
+      if (examples.length < 5) examples.push(`L=${L.toFixed(6)} grid ${codesOf(g)} vs map ${codesOf(piece.mask)}`);
     }
   }
 
   const feasibleGHz = map.feasibleGHz.reduce((s, iv) => s + iv[1] - iv[0], 0);
   console.log(
-    `generated chain: ${model.channels.length} channels, spurMaxOrder ${plan.settings.spurMaxOrder}, reach [${r0}, ${r1}] GHz, fs ${model.halfFs === null ? "none" : model.halfFs * 2} GHz`,
+    `generated chain: ${diag.channelCount} channels, spurMaxOrder ${plan.settings.spurMaxOrder}, reach [${r0}, ${r1}] GHz, fs ${diag.sampleRateGHz ?? "none"} GHz`,
   );
   const place = placeLo(plan, "G", map.feasibleGHz);
   console.log(

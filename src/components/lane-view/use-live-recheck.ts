@@ -5,7 +5,7 @@ import { flushSync } from "react-dom";
 import type { Plan } from "@/schemas/plan";
 import { checkPlan, type ResultDocument } from "@/lib/plan";
 import { recheckAtOffset } from "@/lib/lanes";
-import { type ChainContext, chainContext } from "@/lib/plan/internals/chain-context";
+import { type PreparedChain as ChainContext, prepareChain as chainContext } from "@/lib/plan";
 
 export interface LiveState {
   plan: Plan;

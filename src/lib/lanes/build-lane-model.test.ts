@@ -2,7 +2,9 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import ex1 from "../../../tests/fixtures/plans/ex1-single-channel.plan.json";
 import ex2 from "../../../tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json";
-import { buildLaneModel, IF_ROWS, SPUR_FAMILIES } from "./build-lane-model";
+import { SPUR_FAMILIES } from "@/lib/plan";
+import { buildLaneModel } from "./build-lane-model";
+import { IF_ROWS } from "./internals/rows";
 import { laneTableRows } from "./lane-table-rows";
 import type { LanePlanInput, LaneResultInput } from "./types";
 

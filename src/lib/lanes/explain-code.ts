@@ -1,8 +1,10 @@
+import type { FindingCode } from "@/lib/plan";
+
 /**
  * A plain sentence for each rule code (plan-format.md, Rules), for the
  * details panel and the tooltips of blocked LO intervals.
  */
-const TEXT: Record<string, string> = {
+const TEXT: Readonly<Record<FindingCode, string>> = {
   "lo-uncovered": "The LO with its drift is not inside one reach interval of the laser pair.",
   "lo-in-band": "The LO sits inside one of the channel's optical bands, so the channel has no IF slot.",
   "dsb-lo-off-centre":
@@ -27,6 +29,8 @@ const TEXT: Record<string, string> = {
   "in-protected-band": "A passband lies wholly inside a band where all emissions are prohibited (passive use).",
 };
 
+const byCode: Readonly<Record<string, string | undefined>> = TEXT;
+
 export function explainCode(code: string): string {
-  return TEXT[code] ?? `Rule ${code}.`;
+  return byCode[code] ?? `Rule ${code}.`;
 }

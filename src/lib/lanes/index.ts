@@ -1,4 +1,7 @@
-export { buildLaneModel, RF_ROWS, OPTICAL_ROWS, IF_ROWS, SPUR_FAMILIES } from "./build-lane-model";
+export { buildLaneModel } from "./build-lane-model";
+export { RF_ROWS, OPTICAL_ROWS, IF_ROWS } from "./internals/rows";
+/** The engine's spur families (one definition, in `@/lib/plan`), re-exported for the lane view. */
+export { SPUR_FAMILIES } from "@/lib/plan";
 export { laneTableRows } from "./lane-table-rows";
 export { zoomAbout } from "./zoom-about";
 export { clampDomain } from "./clamp-domain";

@@ -1,4 +1,5 @@
 import { buildLaneModel } from "./build-lane-model";
+import { rfLane } from "./internals/rf-lane";
 import type { Lane, LaneItem, LaneModel, LanePlanInput, LaneReferenceInput, LaneResultInput } from "./types";
 
 /** What one chain's part of the model was built from, compared by identity. */
@@ -92,8 +93,7 @@ export function laneModelByChain(
     for (const l of part.model.lanes) if (!lanes.some((x) => x.id === l.id)) lanes.push(l);
     items.push(...part.model.items);
   }
-  if (lanes.length === 0 || lanes[0]?.id !== "rf")
-    lanes.unshift({ id: "rf", kind: "rf", chain: null, title: "RF", rows: 5, axis: "ghz", mirror: 1 });
+  if (lanes.length === 0 || lanes[0]?.id !== "rf") lanes.unshift(rfLane());
   let lo = Infinity;
   let hi = -Infinity;
   let flo = Infinity;

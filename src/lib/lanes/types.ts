@@ -7,6 +7,11 @@
  * written structurally so that the engine's own types are assignable to them.
  */
 
+import type { Severity, SpurFamily } from "@/lib/plan";
+
+/** The engine's severities and spur families (one definition each, in `@/lib/plan`). */
+export type { Severity, SpurFamily };
+
 export type GHzPair = readonly [number, number];
 
 export interface LanePlanInput {
@@ -46,8 +51,6 @@ export interface LanePlanInput {
     readonly requiredNedtK?: number | null;
   }[];
 }
-
-export type Severity = "error" | "warning" | "info";
 
 export interface LaneFindingInput {
   readonly code: string;
@@ -118,8 +121,6 @@ export type ItemKind =
   | "occupied"
   | "if-slot"
   | "spur";
-
-export type SpurFamily = "carrier-beat" | "lock-lo" | "lock-self" | "harmonic" | "intermod";
 
 export interface LaneItem {
   /** Unique, stable across re-checks while the plan's ids stay the same. */

@@ -11,8 +11,8 @@ import type { Finding } from "./types";
  * `options.mapOnly` restricts the work to the error rules that depend on
  * L (the ones that shape the feasibility map); the harmonic and
  * intermodulation families, which only ever make info findings, are then
- * skipped. For many offsets of one chain, build the context once with
- * `chainContext` and call `evaluateChain` from `internals/`.
+ * skipped. For many offsets of one chain, prepare it once with
+ * `prepareChain` and call `evaluateAtOffset`.
  */
 export function checkChainAtOffset(
   plan: Plan,

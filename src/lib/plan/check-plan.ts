@@ -1,7 +1,8 @@
 import type { Plan } from "@/schemas/plan";
 import { chainContext } from "./internals/chain-context";
+import { channelResult } from "./internals/channel-result";
 import { evaluateChain } from "./internals/evaluate-chain";
-import { pair } from "./internals/format";
+import type { WorkCounter } from "./internals/work-counter";
 import { feasibilityMap } from "./feasibility-map";
 import { placeLo } from "./place-lo";
 import {
@@ -13,9 +14,13 @@ import {
   type Spur,
 } from "./types";
 
-/** A JSON-safe number: non-finite values (only reachable with absurd inputs) become null. */
-function finite(v: number | null): number | null {
-  return v !== null && Number.isFinite(v) ? v : null;
+export interface CheckOptions {
+  /**
+   * A counter the check adds its work steps to (see `WorkCounter`): how
+   * much enumeration the plan's magnitudes caused, for tests that bound the
+   * engine's work without timing it.
+   */
+  work?: WorkCounter;
 }
 
 /**
@@ -24,15 +29,16 @@ function finite(v: number | null): number | null {
  * photodiode power, feasibility map and place; per channel the IF figures;
  * every kept spur; every finding in contract order.
  */
-export function checkPlan(plan: Plan): ResultDocument {
+export function checkPlan(plan: Plan, options: CheckOptions = {}): ResultDocument {
+  const { work } = options;
   const chains: ChainResult[] = [];
   const byChannelId = new Map<string, ChannelResult>();
   const spurs: Spur[] = [];
   const findings: Finding[] = [];
   for (const chain of plan.chains) {
     const ctx = chainContext(plan, chain.id);
-    const evaluation = evaluateChain(ctx, chain.loOffsetGHz);
-    const map = feasibilityMap(plan, chain.id);
+    const evaluation = evaluateChain(ctx, chain.loOffsetGHz, { work });
+    const map = feasibilityMap(plan, chain.id, { work });
     const place = placeLo(plan, chain.id, map.feasibleGHz);
     chains.push({
       id: chain.id,
@@ -44,18 +50,7 @@ export function checkPlan(plan: Plan): ResultDocument {
       placeGHz: place.placeGHz,
       placeReason: place.placeReason,
     });
-    for (const c of evaluation.channels) {
-      byChannelId.set(c.ch.channel.id, {
-        id: c.ch.channel.id,
-        ifSlotGHz: c.geo ? pair(c.geo.slot) : null,
-        occupiedGHz: c.geo ? pair(c.geo.occupied) : null,
-        imageGHz: c.image ? pair(c.image.imageGHz) : null,
-        imageRejectionDB: c.image ? finite(c.image.rejectionDB) : null,
-        radiometricBandwidthMHz: c.sensitivity ? finite(c.sensitivity.radiometricBandwidthMHz) : null,
-        nedtK: c.sensitivity ? finite(c.sensitivity.nedtK) : null,
-        lockReplicaDB: c.ch.lockReplicaDB,
-      });
-    }
+    for (const c of evaluation.channels) byChannelId.set(c.ch.channel.id, channelResult(c));
     spurs.push(...evaluation.spurs);
     findings.push(...evaluation.findings);
   }

@@ -1,7 +1,8 @@
 import type { Plan } from "@/schemas/plan";
 import { buildMapModel, codesOfMask } from "./internals/map-model";
-import type { FindingCode } from "./types";
 import { mapPieces } from "./internals/map-sweep";
+import type { WorkCounter } from "./internals/work-counter";
+import type { FindingCode } from "./types";
 
 /** Feasible intervals shorter than this (GHz, 1 kHz) are not listed. */
 const MIN_FEASIBLE_GHZ = 1e-6;
@@ -18,10 +19,11 @@ export interface FeasibilityMap {
  * place"): every LO offset L within the merged reach for which no error
  * rule that depends on L fires for the chain or any of its channels,
  * computed exactly from the breakpoints of the rules (image-response edges
- * bisected to 1e-6 GHz), never by sampling.
+ * bisected to 1e-6 GHz), never by sampling. `options.work` counts the
+ * work steps taken (see `WorkCounter`).
  */
-export function feasibilityMap(plan: Plan, chainId: string): FeasibilityMap {
-  const pieces = mapPieces(buildMapModel(plan, chainId));
+export function feasibilityMap(plan: Plan, chainId: string, options: { work?: WorkCounter } = {}): FeasibilityMap {
+  const pieces = mapPieces(buildMapModel(plan, chainId), options.work);
   const feasibleGHz: [number, number][] = [];
   const excludedGHz: FeasibilityMap["excludedGHz"] = [];
   for (const p of pieces) {

@@ -5,7 +5,9 @@
 
 export const RESULT_FORMAT = "heterolane.result/1" as const;
 
-export type Severity = "error" | "warning" | "info";
+/** The severities of findings, worst first. */
+export const SEVERITIES = ["error", "warning", "info"] as const;
+export type Severity = (typeof SEVERITIES)[number];
 
 /** Every finding code, in rules-table order (the order findings are listed in). */
 export const RULE_ORDER = [
@@ -76,8 +78,7 @@ export const CHAIN_LEVEL_CODES: readonly FindingCode[] = [
   "pd-overload",
 ];
 
-/** Error rules whose outcome depends on the LO offset L: these, and only these, shape the feasibility map. */
-export const L_DEPENDENT_ERROR_CODES: readonly FindingCode[] = [
+const L_DEPENDENT = [
   "lo-uncovered",
   "lo-in-band",
   "if-outside-detector",
@@ -86,7 +87,18 @@ export const L_DEPENDENT_ERROR_CODES: readonly FindingCode[] = [
   "spur-in-slot",
   "nyquist-straddle",
   "alias-overlap",
-];
+] as const satisfies readonly FindingCode[];
+
+/** A code of `L_DEPENDENT_ERROR_CODES`. */
+export type LDependentErrorCode = (typeof L_DEPENDENT)[number];
+
+/**
+ * Error rules whose outcome depends on the LO offset L, in rules-table
+ * order (plan-format.md, "Rules", column "depends on L"; `slot-overlap`
+ * only while it is an error, i.e. the chain is not `sharedIf`): these, and
+ * only these, shape the feasibility map.
+ */
+export const L_DEPENDENT_ERROR_CODES: readonly FindingCode[] = L_DEPENDENT;
 
 /** Spur families, in table order. */
 export const SPUR_FAMILIES = ["carrier-beat", "lock-lo", "lock-self", "harmonic", "intermod"] as const;

@@ -1,7 +1,8 @@
 /**
  * A child process for tests that must survive an engine that never returns:
  * reads one plan document (JSON) per stdin line, answers one JSON line
- * `{ ms }`, `{ threw }` or `{ invalid }` per document. Prints `ready` first.
+ * `{ steps }` (the work steps `checkPlan` reported), `{ threw }` or
+ * `{ invalid }` per document. Prints `ready` first.
  */
 import { createInterface } from "node:readline";
 import { checkPlan } from "@/lib/plan";
@@ -14,10 +15,10 @@ createInterface({ input: process.stdin }).on("line", (line) => {
     process.stdout.write(`${JSON.stringify({ invalid: r.issues })}\n`);
     return;
   }
-  const t = performance.now();
   try {
-    checkPlan(r.plan);
-    process.stdout.write(`${JSON.stringify({ ms: performance.now() - t })}\n`);
+    const work = { steps: 0 };
+    checkPlan(r.plan, { work });
+    process.stdout.write(`${JSON.stringify({ steps: work.steps })}\n`);
   } catch (e) {
     process.stdout.write(`${JSON.stringify({ threw: e instanceof Error ? e.message : String(e) })}\n`);
   }

@@ -1,6 +1,10 @@
+import { SEVERITIES } from "@/lib/plan";
 import type { LaneFindingInput, Severity } from "../types";
 
-const rank: Record<Severity, number> = { info: 1, warning: 2, error: 3 };
+/** Higher is worse: the engine's `SEVERITIES` are listed worst first. */
+const rank = Object.fromEntries(SEVERITIES.map((s, i) => [s, SEVERITIES.length - i])) as Readonly<
+  Record<Severity, number>
+>;
 
 /** The worst severity of a list of findings, null for none. */
 export function worstSeverity(findings: readonly Pick<LaneFindingInput, "severity">[]): Severity | null {

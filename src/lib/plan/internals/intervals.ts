@@ -101,3 +101,8 @@ export function unionLength(list: readonly Interval[]): number {
 export function compareIntervals(a: Interval, b: Interval): number {
   return a[0] - b[0] || a[1] - b[1];
 }
+
+/** How far outside `outer` the interval `inner` reaches (≥ 0). */
+export function outsideBy(inner: Interval, outer: Interval): number {
+  return Math.max(0, outer[0] - inner[0], inner[1] - outer[1]);
+}

@@ -3,15 +3,8 @@ import { describe, expect, it } from "vitest";
 import { example1 } from "../../../../tests/fixtures/plans/builders";
 import { arbitrarySmallPlan } from "../map-plans.test-util";
 import { imageRejectionAt } from "./image-rejection-at";
-import {
-  combIntegral,
-  combRadius,
-  combValue,
-  imageFiringIntervals,
-  imageFiringIntervalsByScan,
-  imageRejectionDB,
-  makeComb,
-} from "./map-image";
+import { combIntegral, combRadius, combValue, imageRejectionDB, makeComb } from "./map-image";
+import { imageFiringIntervals, imageFiringIntervalsByScan } from "./map-image-edges";
 import { buildMapModel } from "./map-model";
 import { slotFn } from "./map-rules";
 

@@ -1,22 +1,8 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { absInterval, intersect } from "./intervals";
-import {
-  absFn,
-  at,
-  clipFn,
-  foldFn,
-  lin,
-  MAX_ZONE_CROSSINGS,
-  outsideSet,
-  straddleSet,
-  STRADDLES,
-  UNRESOLVED,
-  withinGuardSet,
-  type IFn,
-  type LSet,
-  type Piece,
-} from "./map-linear";
+import { foldFn, MAX_ZONE_CROSSINGS, straddleSet, STRADDLES, UNRESOLVED } from "./map-fold";
+import { absFn, at, clipFn, lin, outsideSet, withinGuardSet, type IFn, type LSet, type Piece } from "./map-linear";
 import { foldInterval, interiorNyquistEdge } from "./nyquist";
 
 /**

@@ -1,35 +1,23 @@
 import type { Plan } from "@/schemas/plan";
+import { type LDependentErrorCode, L_DEPENDENT_ERROR_CODES, RULE_ORDER } from "../types";
 import { lorentzianIntegral } from "./lorentz";
 
+/** A code the feasibility map can list. */
+export type MapCode = LDependentErrorCode;
+
 /**
- * The error codes whose rule depends on the LO offset `L`, in rules-table
- * order (plan-format.md, "Rules", column "depends on L"; `slot-overlap` only
- * when it is an error, i.e. the chain is not `sharedIf`). These, and only
- * these, shape the feasibility map.
+ * The codes that shape the feasibility map: the engine's
+ * `L_DEPENDENT_ERROR_CODES`, taken in rules-table order (`RULE_ORDER`) so
+ * that a mask's codes come out in the order the contract lists them.
  */
-export const MAP_CODES = [
-  "lo-uncovered",
-  "lo-in-band",
-  "if-outside-detector",
-  "slot-overlap",
-  "image-response",
-  "spur-in-slot",
-  "nyquist-straddle",
-  "alias-overlap",
-] as const;
-export type MapCode = (typeof MAP_CODES)[number];
+export const MAP_CODES: readonly MapCode[] = RULE_ORDER.filter((c): c is MapCode =>
+  L_DEPENDENT_ERROR_CODES.includes(c),
+);
 
 /** Bit of each code in a code-set mask (bit i = `MAP_CODES[i]`). */
-export const CODE_BIT: Readonly<Record<MapCode, number>> = {
-  "lo-uncovered": 1,
-  "lo-in-band": 2,
-  "if-outside-detector": 4,
-  "slot-overlap": 8,
-  "image-response": 16,
-  "spur-in-slot": 32,
-  "nyquist-straddle": 64,
-  "alias-overlap": 128,
-};
+export const CODE_BIT: Readonly<Record<MapCode, number>> = Object.fromEntries(
+  MAP_CODES.map((code, i) => [code, 1 << i]),
+) as Record<MapCode, number>;
 
 /** The codes of a mask, in rules-table order. */
 export function codesOfMask(mask: number): MapCode[] {

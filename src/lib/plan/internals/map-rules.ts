@@ -1,23 +1,21 @@
 import type { MapChannel, MapCode, MapModel } from "./map-model";
-import { imageFiringIntervals, makeComb } from "./map-image";
+import { makeComb } from "./map-image";
+import { imageFiringIntervals } from "./map-image-edges";
 import { MAX_LOCK_ORDER_ENUMERATED } from "./spurs";
+import { foldFn, straddleSet, STRADDLES, UNRESOLVED, type FoldedPiece } from "./map-fold";
 import {
   absFn,
   clipFn,
-  foldFn,
   lin,
   outsideSet,
-  straddleSet,
   widen,
   withinGuardSet,
-  STRADDLES,
-  UNRESOLVED,
-  type FoldedPiece,
   type IFn,
   type Lin,
   type LSet,
   type Piece,
 } from "./map-linear";
+import { type WorkCounter, countSteps } from "./work-counter";
 
 /**
  * The exact firing sets of every L-dependent error rule of one chain over
@@ -92,8 +90,9 @@ export function slotFn(ch: MapChannel, r0: number, r1: number): IFn {
  * [r0, r1], detector-clipped. Lock orders are enumerated up to the engine's
  * limit `MAX_LOCK_ORDER_ENUMERATED` (as the per-offset check does), and only
  * those whose band can reach the detector band for some L in [r0, r1].
+ * Each lock order enumerated is one work step.
  */
-export function errorSpurFns(m: MapModel, r0: number, r1: number): IFn[] {
+export function errorSpurFns(m: MapModel, r0: number, r1: number, work?: WorkCounter): IFn[] {
   const D = m.drift;
   const out: IFn[] = [];
   const moving = (c: number): IFn =>
@@ -109,9 +108,11 @@ export function errorSpurFns(m: MapModel, r0: number, r1: number): IFn[] {
   ] as const) {
     const kLo = Math.max(1, Math.ceil(lo / m.fm));
     const kHi = Math.min(M, Math.floor(hi / m.fm));
+    countSteps(work, kHi - kLo + 1);
     for (let k = kLo; k <= kHi; k++) out.push(moving(sign * k * m.fm));
   }
   const kSelf = Math.min(2 * M, Math.floor(m.detMax / m.fm));
+  countSteps(work, kSelf);
   for (let k = 1; k <= kSelf; k++) {
     const f = k * m.fm; // lock-self, fixed tone
     if (f >= m.detMin && f <= m.detMax) out.push([{ from: r0, to: r1, lo: lin(f, 0), hi: lin(f, 0) }]);
@@ -119,8 +120,8 @@ export function errorSpurFns(m: MapModel, r0: number, r1: number): IFn[] {
   return out.filter((f) => f.length > 0);
 }
 
-/** Compute the firing sets of every L-dependent error rule on the reach interval [r0, r1]. */
-export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
+/** Compute the firing sets of every L-dependent error rule on the reach interval [r0, r1]; `work` counts the work steps. */
+export function firingSets(m: MapModel, r0: number, r1: number, work?: WorkCounter): FiringSets {
   const sets: FiringSets = {
     "lo-uncovered": [],
     "lo-in-band": [],
@@ -156,11 +157,11 @@ export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
     outsideSet(O, m.detMin, m.detMax, sets["if-outside-detector"]);
     if (ch.ssb) {
       const image = sets["image-response"];
-      for (const p of slot) for (const iv of imageFiringIntervals(comb, m, ch, p.from, p.to)) image.push(iv);
+      for (const p of slot) for (const iv of imageFiringIntervals(comb, m, ch, p.from, p.to, work)) image.push(iv);
     }
     if (h !== null) {
-      straddleSet(O, h, sets["nyquist-straddle"]);
-      const f = foldFn(O, h);
+      straddleSet(O, h, sets["nyquist-straddle"], work);
+      const f = foldFn(O, h, work);
       folded.push(f);
       // alias-overlap leaves straddling bands out; unresolved pieces stay in (and fire, conservatively)
       foldedClear.push(f.filter((p) => p.zone !== STRADDLES));
@@ -174,8 +175,8 @@ export function firingSets(m: MapModel, r0: number, r1: number): FiringSets {
     }
   }
 
-  const spurs = errorSpurFns(m, r0, r1);
-  const spursFolded = h === null ? [] : spurs.map((s) => foldFn(s, h));
+  const spurs = errorSpurFns(m, r0, r1, work);
+  const spursFolded = h === null ? [] : spurs.map((s) => foldFn(s, h, work));
   for (let i = 0; i < n; i++) {
     for (const s of spurs) withinGuardSet<Piece>(s, occ[i]!, g, sets["spur-in-slot"]);
     if (h !== null) {

@@ -1,6 +1,7 @@
 import type { MapModel } from "./map-model";
 import { MAP_CODES } from "./map-model";
 import { firingSets } from "./map-rules";
+import type { WorkCounter } from "./work-counter";
 
 /** Breakpoints closer than this (GHz) are merged (plan-format.md). */
 export const MERGE_GHZ = 1e-9;
@@ -17,12 +18,13 @@ export interface MapPiece {
  * reach interval: sort all interval edges (merging those closer than 1e-9
  * GHz), and keep, between consecutive breakpoints, the set of codes whose
  * firing sets cover that piece. Consecutive pieces with the same set are
- * joined. Pieces come in increasing L and tile the reach union.
+ * joined. Pieces come in increasing L and tile the reach union. `work`
+ * counts the work steps of the firing sets.
  */
-export function mapPieces(m: MapModel): MapPiece[] {
+export function mapPieces(m: MapModel, work?: WorkCounter): MapPiece[] {
   const out: MapPiece[] = [];
   for (const [r0, r1] of m.reach) {
-    const sets = firingSets(m, r0, r1);
+    const sets = firingSets(m, r0, r1, work);
     // per code, the union's edges in increasing order: from, to, from, to, …
     const runs: number[][] = [];
     let total = 0;

@@ -2,6 +2,7 @@ import type { SpurFamily } from "../types";
 import type { ChainContext } from "./chain-context";
 import { type Interval, absInterval, compareIntervals, intersect, widen } from "./intervals";
 import type { SlotGeometry } from "./slot";
+import { type WorkCounter, countSteps } from "./work-counter";
 
 /**
  * One spur band of a chain at a given L (plan-format.md, "Spur families"):
@@ -75,9 +76,10 @@ function byBand(a: SpurBand, b: SpurBand): number {
 /**
  * The spur families that can make errors: `carrier-beat`, `lock-lo`,
  * `lock-self`, each sorted by band. Lock orders whose band cannot reach the
- * detector band are skipped without changing the result.
+ * detector band are skipped without changing the result. Each lock order
+ * enumerated is one work step.
  */
-export function errorSpursAt(ctx: ChainContext, L: number): SpurBand[] {
+export function errorSpursAt(ctx: ChainContext, L: number, work?: WorkCounter): SpurBand[] {
   const { D, fm, detectorBand: det } = ctx;
   const M = Math.min(ctx.lockOrders, MAX_LOCK_ORDER_ENUMERATED);
   const carrier: SpurBand[] = [];
@@ -90,6 +92,7 @@ export function errorSpursAt(ctx: ChainContext, L: number): SpurBand[] {
     const centre = -sign * L;
     const mLo = Math.max(1, Math.ceil((centre - reachIF) / fm));
     const mHi = Math.min(M, Math.floor((centre + reachIF) / fm));
+    countSteps(work, mHi - mLo + 1);
     for (let m = mLo; m <= mHi; m++) {
       const f = L + sign * m * fm;
       keep("lock-lo", m + 1, widen([f, f], D), det, `L${sign < 0 ? "−" : "+"}${m}·fm`, lockLo);
@@ -99,6 +102,7 @@ export function errorSpursAt(ctx: ChainContext, L: number): SpurBand[] {
 
   const lockSelf: SpurBand[] = [];
   const mSelf = Math.min(2 * M, Math.floor(det[1] / fm));
+  countSteps(work, mSelf);
   for (let m = 1; m <= mSelf; m++) keep("lock-self", m, [m * fm, m * fm], det, `${m}·fm`, lockSelf);
   lockSelf.sort(byBand);
   return [...carrier, ...lockLo, ...lockSelf];
