@@ -150,11 +150,7 @@ function TuningMapUpload({ missionId }: { missionId: string }) {
   const laser = lasers.data?.find((l) => l.id === (laserId || lasers.data?.[0]?.id));
   const url = (apply: boolean) =>
     `${api.collection(missionId, "uploads/tuning-map")}?laserId=${encodeURIComponent(laser?.id ?? "")}&gapMHz=${encodeURIComponent(gapMHz)}&apply=${apply ? 1 : 0}`;
-  const rejected = preview
-    ? typeof preview.rejectedRows === "number"
-      ? preview.rejectedRows
-      : preview.rejectedRows.length
-    : 0;
+  const rejected = preview ? preview.rejectedRows.length : 0;
   return (
     <Card title="Tuning map (measured LO offsets)">
       <p className="mb-2 text-sm text-ink-soft">
@@ -243,12 +239,11 @@ function TuningMapUpload({ missionId }: { missionId: string }) {
               <li key={n}>{formatInterval([i.minGHz, i.maxGHz])}</li>
             ))}
           </ul>
-          {Array.isArray(preview.rejectedRows) && preview.rejectedRows.length > 0 ? (
+          {preview.rejectedRows.length > 0 ? (
             <ul className="text-xs text-sev-warning">
               {preview.rejectedRows.slice(0, 20).map((r) => (
                 <li key={r.row}>
-                  row {r.row}
-                  {r.column ? `, column ${r.column}` : ""}: {r.message}
+                  row {r.row}: {r.message}
                 </li>
               ))}
             </ul>
