@@ -1,7 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import { OpticalFrequency } from "@/components/helpers";
+import { OpticalFrequency } from "@/components/tools";
 import { LASER_HEADERS, loTHz } from "./hardware";
 import { LINE_CENTRES, PROTECTED_BANDS } from "@/lib/reference";
 import {
