@@ -27,15 +27,15 @@ import type { listActivity, listMissions, listRevisions, RevisionInfo } from "@/
 
 export type { Severity, Finding, ChainResult, ChannelResult } from "@/lib/plan";
 
+type Stamp = "createdAt" | "updatedAt";
 /**
  * A mapped row as the client holds it. The timestamps are optional because
  * the client never reads them and builds rows without them (optimistic
  * edits, tests).
  */
-type ClientRow<T> = T extends { createdAt?: string; updatedAt?: string }
-  ? Omit<T, "createdAt" | "updatedAt"> & { createdAt?: string; updatedAt?: string }
-  : T;
+type ClientRow<T> = Omit<T, Stamp> & Partial<Pick<T, Extract<keyof T, Stamp>>>;
 
+/** One element of the list a server read query resolves to. */
 type Item<F extends (...args: never[]) => unknown> = Awaited<ReturnType<F>> extends readonly (infer E)[] ? E : never;
 
 export type Mission = ClientRow<ReturnType<typeof missionDto>>;
