@@ -1,16 +1,17 @@
+import type { z } from "zod";
+import type { EntityKind, findingsQuerySchema } from "@/schemas/workspace";
+
 /**
  * React Query key factories. Every key of one mission starts with
  * `missionKeys.detail(id)`, so a mutation that re-runs the engine can
  * invalidate the whole mission (entities, result, findings, revisions) at once.
  */
-export type Collection = "lasers" | "resonators" | "detectors" | "chains" | "channels";
 
-export interface FindingFilter {
-  severity?: string;
-  chain?: string;
-  channel?: string;
-  code?: string;
-}
+/** The entity collections of a mission (the workspace schemas' entity kinds). */
+export type Collection = EntityKind;
+
+/** The filters of the findings endpoint, as its query schema reads them. */
+export type FindingFilter = z.input<typeof findingsQuerySchema>;
 
 export const missionKeys = {
   all: ["missions"] as const,

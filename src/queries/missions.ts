@@ -1,6 +1,7 @@
 "use client";
 
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import type { MissionCreateInput, MissionUpdateInput, SettingsUpdateInput } from "@/schemas/workspace";
 import { api, apiFetch, sendJson } from "./api";
 import { missionKeys, type Collection, type FindingFilter } from "./keys";
 import type {
@@ -30,7 +31,7 @@ export function useMissionsQuery() {
 export function useCreateMissionMutation() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async (input: { name: string; description?: string }) =>
+    mutationFn: async (input: MissionCreateInput) =>
       unwrapItem<Mission>(await sendJson(api.missions, "POST", input), "mission"),
     onSuccess: () => qc.invalidateQueries({ queryKey: missionKeys.lists() }),
   });
@@ -121,7 +122,7 @@ export function invalidateMission(qc: ReturnType<typeof useQueryClient>, mission
 export function useUpdateMissionMutation(missionId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async (input: { name?: string; description?: string | null; version: number }) =>
+    mutationFn: async (input: MissionUpdateInput) =>
       unwrapItem<Mission>(await sendJson(api.mission(missionId), "PATCH", input), "mission"),
     onSettled: () => invalidateMission(qc, missionId),
   });
@@ -143,7 +144,7 @@ export function useDeleteMissionMutation(missionId: string) {
 export function useSaveSettingsMutation(missionId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async (input: Settings) =>
+    mutationFn: async (input: SettingsUpdateInput) =>
       unwrapItem<Settings & MutationRevision>(
         await sendJson(api.collection(missionId, "settings"), "PUT", input),
         "settings",

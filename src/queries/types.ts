@@ -1,151 +1,69 @@
 /**
- * Shapes of the workspace JSON API as the client reads them (the agreed API:
- * entities mirror the `heterolane.plan/1` fields, plus id, key, version and
- * timestamps). Form input types come from the zod schemas in
- * `src/schemas/workspace.ts`; these describe what the server sends back.
+ * Shapes of the workspace JSON API as the client reads them, derived from
+ * the code that produces them so they are written once:
+ *
+ * - entities and settings from the server's row → API mappers
+ *   (`src/server/workspace/mappers.ts`), list rows from the server's read
+ *   queries (`@/server/workspace`);
+ * - the result document and its findings from the engine (`@/lib/plan`);
+ * - upload previews from the file readers (`@/lib/imports`).
+ *
+ * Every import here is `import type`: TypeScript erases it, so no server
+ * code (nor `server-only`) reaches the client bundle. Form inputs come from
+ * the zod schemas in `src/schemas/workspace.ts`.
  */
+import type { ChannelCsvParse, DetectorResponseParse, TuningMapPreview } from "@/lib/imports";
+import type { ResultDocument } from "@/lib/plan";
+import type {
+  chainDto,
+  channelDto,
+  detectorDto,
+  laserDto,
+  missionDto,
+  resonatorDto,
+  settingsDto,
+} from "@/server/workspace/mappers";
+import type { listActivity, listMissions, listRevisions, RevisionInfo } from "@/server/workspace";
 
-export type { Severity } from "@/lib/plan/types";
+export type { Severity, Finding, ChainResult, ChannelResult } from "@/lib/plan";
 
-export interface Row {
-  id: string;
-  version: number;
-  createdAt?: string;
-  updatedAt?: string;
-}
+type Stamp = "createdAt" | "updatedAt";
+/**
+ * A mapped row as the client holds it. The timestamps are optional because
+ * the client never reads them and builds rows without them (optimistic
+ * edits, tests).
+ */
+type ClientRow<T> = Omit<T, Stamp> & Partial<Pick<T, Extract<keyof T, Stamp>>>;
 
-export interface MissionSummary {
-  id: string;
-  name: string;
-  description: string | null;
-  status: string;
-  chainCount: number;
-  channelCount: number;
-  openErrors: number;
-  openWarnings: number;
-  updatedAt: string;
-  version: number;
-}
+/** One element of the list a server read query resolves to. */
+type Item<F extends (...args: never[]) => unknown> = Awaited<ReturnType<F>> extends readonly (infer E)[] ? E : never;
 
-export interface Mission extends Row {
-  name: string;
-  description: string | null;
-  status: string;
-}
+export type Mission = ClientRow<ReturnType<typeof missionDto>>;
+export type Laser = ClientRow<ReturnType<typeof laserDto>>;
+export type Resonator = ClientRow<ReturnType<typeof resonatorDto>>;
+export type Detector = ClientRow<ReturnType<typeof detectorDto>>;
+export type Chain = ClientRow<ReturnType<typeof chainDto>>;
+export type Channel = ClientRow<ReturnType<typeof channelDto>>;
+export type Settings = ClientRow<ReturnType<typeof settingsDto>>;
 
-export interface Interval {
-  minGHz: number;
-  maxGHz: number;
-}
+/** A closed GHz interval (a laser's reach, a chain's RF input). */
+export type Interval = Laser["reach"][number];
 
-export interface Laser extends Row {
-  key: string;
-  carrierTHz: number;
-  carrierPowerMW: number;
-  loPowerMW: number;
-  reach: Interval[];
-  stepMHz: number;
-  driftMHz: number;
-  lock: { modulationMHz: number; modulationIndex: number; orders: number };
-}
+/** One row of the mission list. */
+export type MissionSummary = Item<typeof listMissions>;
+export type RevisionSummary = Item<typeof listRevisions>;
+export type ActivityEntry = Item<typeof listActivity>;
 
-export interface Resonator extends Row {
-  key: string;
-  fsrGHz: number;
-  loadedQ: number;
-}
+/** The result document as the engine defines it. */
+export type PlanResult = ResultDocument;
 
-export interface Detector extends Row {
-  key: string;
-  minGHz: number;
-  maxGHz: number;
-  maxInputMW: number;
-  sampleRateGHz: number | null;
-}
-
-export interface Chain extends Row {
-  key: string;
-  laserId: string;
-  resonatorId: string;
-  detectorId: string;
-  mode: number;
-  sideband: "upper" | "lower";
-  loOffsetGHz: number;
-  rfInput: Interval;
-  tapFraction: number;
-  pathLossDB: number;
-  carrierRejectionDB: number;
-  sharedIf: boolean;
-}
-
-export interface Channel extends Row {
-  key: string;
-  name: string;
-  chainId: string;
-  centerGHz: number;
-  bandwidthMHz: number;
-  dsbOffsetGHz: number | null;
-  integrationMs: number;
-  antennaK: number;
-  receiverK: number;
-  gainStability: number;
-  requiredNedtK: number | null;
-}
-
-export interface Settings {
-  guardMHz: number;
-  imageRejectionDB: number;
-  spurMaxOrder: number;
-  replicaLimitDB: number;
-  version: number;
-}
-
-// The result document as the engine defines it (one place for its types).
-export type { Finding, ChainResult, ChannelResult } from "@/lib/plan/types";
-export type PlanResult = import("@/lib/plan/types").ResultDocument;
-
-export interface RevisionSummary {
-  number: number;
-  status: string;
-  authorName: string | null;
-  createdAt: string;
-  errorCount: number;
-  warningCount: number;
-  infoCount: number;
-  summary: string | null;
-}
-
+/** What a saving call adds to its reply: the revision the server stored and its counts. */
 export interface MutationRevision {
-  revision?: { number: number; errorCount: number; warningCount: number };
+  revision?: RevisionInfo;
 }
 
-export interface TuningPreview {
-  intervals: Interval[];
-  points: number;
-  isolatedGHz?: number[];
-  rejectedRows: { row: number; column?: string; message: string }[] | number;
-}
-
-export interface ChannelUploadPreview {
-  rows: {
-    row: number;
-    channel?: Partial<Channel> & { chain?: string };
-    errors: { column: string; message: string }[];
-  }[];
-  valid: boolean;
-}
-
-export interface DetectorResponsePreview {
-  minGHz: number;
-  maxGHz: number;
-  peakDB: number;
-}
-
-export interface ActivityEntry {
-  at: string;
-  actorName: string | null;
-  action: string;
-  entity: string;
-  summary: string | null;
-  revision: number | null;
-}
+/** The preview replies of the uploads: what the file readers return when a file is read. */
+type Read<P> = Omit<Extract<P, { ok: true }>, "ok">;
+export type TuningPreview = TuningMapPreview;
+export type ChannelUploadPreview = Read<ChannelCsvParse>;
+export type DetectorResponsePreview = Read<DetectorResponseParse>;

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { REVIEW_DECISIONS } from "@/lib/review";
 
 /** Request bodies and queries of the review API and the notification settings form. */
 
@@ -16,7 +17,7 @@ export const submitReviewSchema = z.strictObject({
 
 export const decideReviewSchema = z
   .strictObject({
-    decision: z.enum(["baseline", "request-changes"], { error: 'must be "baseline" or "request-changes"' }),
+    decision: z.enum(REVIEW_DECISIONS, { error: 'must be "baseline" or "request-changes"' }),
     revision: revisionNumber.optional(),
     note: note.optional(),
   })

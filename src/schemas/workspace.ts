@@ -14,40 +14,39 @@
  * schema, so cross-field rules (min below max) hold after every update.
  */
 import { z } from "zod";
+import {
+  chainShape,
+  channelShape,
+  detectorShape,
+  dsbOffsetClears,
+  entityKeySchema,
+  FIELD_DEFAULTS,
+  formRules as r,
+  isOrdered,
+  laserShape,
+  lockShape,
+  MAX_REACH_INTERVALS,
+  requiredTextSchema,
+  resonatorShape,
+  rowIdSchema,
+  settingsShape,
+} from "./fields";
 
-const finite = (what = "a number") =>
-  z.number({ error: (iss) => (iss.input === undefined ? "is required" : `must be ${what}`) });
-const positive = () => finite().gt(0, { error: "must be greater than 0" });
-const nonNegative = () => finite().gte(0, { error: "must be 0 or more" });
-const positiveInt = () =>
-  finite("a whole number").int({ error: "must be a whole number" }).gte(1, { error: "must be 1 or more" });
+export { entityKeySchema };
 
-/** A plan-document id: non-empty, without surrounding spaces, unique per mission and entity kind. */
-export const entityKeySchema = z
-  .string({ error: "is required" })
-  .min(1, { error: "is required" })
-  .max(64, { error: "must be at most 64 characters" })
-  .refine((s) => s.trim() === s, { error: "must not start or end with a space" });
-
-export const versionSchema = finite("a whole number")
-  .int({ error: "must be a whole number" })
-  .gte(1, { error: "must be 1 or more" });
-
-const uuidSchema = z.uuid({ error: "must be the id of an existing row" });
+export const versionSchema = r.count(1);
 
 /** A closed interval [minGHz, maxGHz] with min below max. */
 export const intervalGHzSchema = z
-  .object({ minGHz: finite(), maxGHz: finite() }, { error: "is required" })
+  .object({ minGHz: r.number(), maxGHz: r.number() }, { error: "is required" })
   .strict()
-  .refine((v) => v.minGHz < v.maxGHz, { error: "must be above minGHz", path: ["maxGHz"] });
+  .refine((v) => isOrdered(v.minGHz, v.maxGHz), { error: "must be above minGHz", path: ["maxGHz"] });
 
 // ---------------------------------------------------------------- missions
 
 export const missionCreateSchema = z
   .object({
-    name: z.string({ error: "is required" }).trim().min(1, { error: "is required" }).max(200, {
-      error: "must be at most 200 characters",
-    }),
+    name: requiredTextSchema(200),
     description: z.string().trim().max(4000, { error: "must be at most 4000 characters" }).optional(),
   })
   .strict();
@@ -58,17 +57,7 @@ export type MissionUpdateInput = z.infer<typeof missionUpdateSchema>;
 
 // ---------------------------------------------------------------- settings
 
-export const settingsFields = z
-  .object({
-    guardMHz: nonNegative(),
-    imageRejectionDB: finite(),
-    spurMaxOrder: finite("a whole number")
-      .int({ error: "must be a whole number" })
-      .gte(2, { error: "must be 2 or more" })
-      .lte(9, { error: "must be 9 or less" }),
-    replicaLimitDB: finite(),
-  })
-  .strict();
+export const settingsFields = z.object(settingsShape(r)).strict();
 export type SettingsFields = z.infer<typeof settingsFields>;
 
 /** PUT …/settings: the whole settings object plus the version last read. */
@@ -84,29 +73,17 @@ export const DEFAULT_SETTINGS: SettingsFields = {
 
 // ---------------------------------------------------------------- hardware
 
-export const lockSchema = z
-  .object(
-    {
-      modulationMHz: positive(),
-      modulationIndex: finite()
-        .gt(0, { error: "must be greater than 0" })
-        .lt(2.4, { error: "must be below 2.4 (the first zero of J0)" }),
-      orders: positiveInt(),
-    },
-    { error: "is required" },
-  )
-  .strict();
+export const lockSchema = z.object(lockShape(r), { error: "is required" }).strict();
 
 export const laserSchema = z
   .object({
     key: entityKeySchema,
-    carrierTHz: positive(),
-    carrierPowerMW: positive(),
-    loPowerMW: positive(),
-    reach: z.array(intervalGHzSchema).max(64, { error: "may hold at most 64 intervals" }),
-    stepMHz: nonNegative(),
-    driftMHz: nonNegative(),
-    lock: lockSchema,
+    ...laserShape(r, {
+      reach: z
+        .array(intervalGHzSchema)
+        .max(MAX_REACH_INTERVALS, { error: `may hold at most ${MAX_REACH_INTERVALS} intervals` }),
+      lock: lockSchema,
+    }),
   })
   .strict();
 export type LaserInput = z.infer<typeof laserSchema>;
@@ -114,8 +91,7 @@ export type LaserInput = z.infer<typeof laserSchema>;
 export const resonatorSchema = z
   .object({
     key: entityKeySchema,
-    fsrGHz: positive(),
-    loadedQ: positive(),
+    ...resonatorShape(r),
   })
   .strict();
 export type ResonatorInput = z.infer<typeof resonatorSchema>;
@@ -123,71 +99,54 @@ export type ResonatorInput = z.infer<typeof resonatorSchema>;
 const detectorFields = z
   .object({
     key: entityKeySchema,
-    minGHz: nonNegative(),
-    maxGHz: positive(),
-    maxInputMW: positive(),
-    sampleRateGHz: positive().nullable(),
+    ...detectorShape(r),
   })
   .strict();
-const minBelowMax = { error: "must be above minGHz", path: ["maxGHz"] };
 
 export const detectorSchema = detectorFields
-  .extend({ sampleRateGHz: positive().nullable().default(null) })
-  .refine((v) => v.minGHz < v.maxGHz, minBelowMax);
+  .extend({
+    sampleRateGHz: detectorFields.shape.sampleRateGHz.default(FIELD_DEFAULTS.detector.sampleRateGHz),
+  })
+  .refine((v) => isOrdered(v.minGHz, v.maxGHz), { error: "must be above minGHz", path: ["maxGHz"] });
 export type DetectorInput = z.infer<typeof detectorSchema>;
 
 // ---------------------------------------------------------------- chains and channels
 
-export const sidebandSchema = z.enum(["upper", "lower"], { error: "must be upper or lower" });
+export const sidebandSchema = r.sideband();
 
 const chainFields = z
   .object({
     key: entityKeySchema,
-    laserId: uuidSchema,
-    resonatorId: uuidSchema,
-    detectorId: uuidSchema,
-    mode: positiveInt(),
-    sideband: sidebandSchema,
-    loOffsetGHz: finite(),
-    rfInput: intervalGHzSchema,
-    tapFraction: finite().gte(0, { error: "must be 0 or more" }).lt(1, { error: "must be below 1" }),
-    pathLossDB: nonNegative(),
-    carrierRejectionDB: nonNegative(),
-    sharedIf: z.boolean({ error: "must be true or false" }),
+    laserId: rowIdSchema,
+    resonatorId: rowIdSchema,
+    detectorId: rowIdSchema,
+    ...chainShape(r, { rfInput: intervalGHzSchema }),
   })
   .strict();
 
 export const chainSchema = chainFields.extend({
-  carrierRejectionDB: nonNegative().default(0),
-  sharedIf: z.boolean({ error: "must be true or false" }).default(false),
+  carrierRejectionDB: chainFields.shape.carrierRejectionDB.default(FIELD_DEFAULTS.chain.carrierRejectionDB),
+  sharedIf: chainFields.shape.sharedIf.default(FIELD_DEFAULTS.chain.sharedIf),
 });
 export type ChainInput = z.infer<typeof chainSchema>;
 
 const channelFields = z
   .object({
     key: entityKeySchema,
-    name: z.string({ error: "is required" }).trim().min(1, { error: "is required" }).max(200, {
-      error: "must be at most 200 characters",
-    }),
-    chainId: uuidSchema,
-    centerGHz: positive(),
-    bandwidthMHz: positive(),
-    dsbOffsetGHz: positive().nullable(),
-    integrationMs: positive(),
-    antennaK: nonNegative(),
-    receiverK: nonNegative(),
-    gainStability: nonNegative(),
-    requiredNedtK: nonNegative().nullable(),
+    name: requiredTextSchema(200),
+    chainId: rowIdSchema,
+    ...channelShape(r),
   })
   .strict();
 
 export const channelSchema = channelFields
   .extend({
-    dsbOffsetGHz: positive().nullable().default(null),
-    gainStability: nonNegative().default(0),
-    requiredNedtK: nonNegative().nullable().default(null),
+    dsbOffsetGHz: channelFields.shape.dsbOffsetGHz.default(FIELD_DEFAULTS.channel.dsbOffsetGHz),
+    // The forms (unlike the plan document) let gain stability be left out: an ideal receiver.
+    gainStability: channelFields.shape.gainStability.default(0),
+    requiredNedtK: channelFields.shape.requiredNedtK.default(FIELD_DEFAULTS.channel.requiredNedtK),
   })
-  .refine((v) => v.dsbOffsetGHz === null || v.dsbOffsetGHz > v.bandwidthMHz / 2000, {
+  .refine((v) => v.dsbOffsetGHz === null || dsbOffsetClears(v.dsbOffsetGHz, v.bandwidthMHz), {
     error: "must be more than half the bandwidth (bandwidthMHz/2000 GHz)",
     path: ["dsbOffsetGHz"],
   });
@@ -251,8 +210,8 @@ export type FindingsQuery = z.infer<typeof findingsQuerySchema>;
 export const deleteQuerySchema = z.object({ version: numberParam(versionSchema) });
 
 export const tuningMapQuerySchema = z.object({
-  laserId: uuidSchema,
-  gapMHz: numberParam(finite().gt(0, { error: "must be greater than 0" })),
+  laserId: rowIdSchema,
+  gapMHz: numberParam(r.positive()),
   apply: flag,
 });
 export type TuningMapQuery = z.infer<typeof tuningMapQuerySchema>;
@@ -260,8 +219,8 @@ export type TuningMapQuery = z.infer<typeof tuningMapQuerySchema>;
 export const channelsUploadQuerySchema = z.object({ apply: flag });
 
 export const detectorResponseQuerySchema = z.object({
-  detectorId: uuidSchema,
-  dropDB: numberParam(finite().gt(0, { error: "must be greater than 0" })).default(3),
+  detectorId: rowIdSchema,
+  dropDB: numberParam(r.positive()).default(3),
   apply: flag,
 });
 export type DetectorResponseQuery = z.infer<typeof detectorResponseQuerySchema>;

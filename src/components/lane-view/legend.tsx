@@ -1,4 +1,5 @@
-import type { ItemKind, SpurFamily } from "@/lib/lanes";
+import type { ItemKind } from "@/lib/lanes";
+import { SPUR_FAMILIES } from "@/lib/plan";
 import { FAMILY_LOOK, KIND_LOOK, SEVERITY_COLOUR, markerPath, orderShape } from "./vocabulary";
 
 const GROUPS: { title: string; kinds: ItemKind[] }[] = [
@@ -45,7 +46,7 @@ function Swatch({ kind }: { kind: ItemKind }) {
 
 /** What every mark of the lane view means. */
 export function Legend() {
-  const families = Object.entries(FAMILY_LOOK) as [SpurFamily, (typeof FAMILY_LOOK)[SpurFamily]][];
+  const families = SPUR_FAMILIES.map((f) => [f, FAMILY_LOOK[f]] as const);
   return (
     <div className="grid gap-3 text-xs text-ink sm:grid-cols-2 lg:grid-cols-4" aria-label="Legend">
       {GROUPS.map((g) => (

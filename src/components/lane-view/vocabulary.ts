@@ -1,4 +1,5 @@
-import type { ItemKind, Severity, SpurFamily } from "@/lib/lanes";
+import type { ItemKind } from "@/lib/lanes";
+import type { Severity, SpurFamily } from "@/lib/plan";
 
 /**
  * The lane view's own visual vocabulary: a colour and a fill pattern per

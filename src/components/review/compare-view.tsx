@@ -1,22 +1,11 @@
-import type { EntityChange, FieldChange, Json } from "@/lib/review";
+import type { FieldChange, Json, PlanSection } from "@/lib/review";
+import type { compareMissionRevisions } from "@/server/review";
 
-type FindingView = {
-  id: string;
-  code: string;
-  severity: string;
-  chain: string;
-  channel: string | null;
-  message: string;
-};
+/** The comparison as the server builds it (src/server/review compareMissionRevisions). */
+export type CompareViewProps = Awaited<ReturnType<typeof compareMissionRevisions>>;
+type FindingView = CompareViewProps["findings"]["new"][number];
 
-export interface CompareViewProps {
-  from: { number: number; status: string; authorName: string; createdAt: string };
-  to: { number: number; status: string; authorName: string; createdAt: string };
-  entities: EntityChange[];
-  findings: { new: FindingView[]; resolved: FindingView[]; unchanged: { before: FindingView; after: FindingView }[] };
-}
-
-const SECTION: Record<string, string> = {
+const SECTION: Record<PlanSection, string> = {
   plan: "Plan",
   settings: "Settings",
   lasers: "Laser pair",

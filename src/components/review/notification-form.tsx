@@ -2,11 +2,12 @@
 import { getFormProps, getInputProps, useForm } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useActionState } from "react";
+import type { z } from "zod";
 import { notificationPreferencesSchema } from "@/schemas/review";
 import { FormMessage } from "@/components/forms/field";
 import { submitKeepingInput } from "@/components/forms/submit";
 
-type Prefs = { reviewRequested: boolean; reviewDecided: boolean; mentioned: boolean };
+type Prefs = z.infer<typeof notificationPreferencesSchema>;
 type Action = (prev: unknown, formData: FormData) => Promise<unknown>;
 
 const OPTIONS: { name: keyof Prefs; label: string; hint: string }[] = [

@@ -1,21 +1,15 @@
+import type { ReviewState } from "@/lib/review";
+import type { getApproval } from "@/server/review";
+
 /**
  * The approval section of the printable plan report: which revision, its
  * review state, who submitted and who approved it, and the waivers it was
  * baselined with. Presentational; the report page loads the data on the
  * server (src/server/review getApproval).
  */
-export interface ReportApprovalData {
-  revision: number;
-  state: "draft" | "in-review" | "baselined" | "changes-requested";
-  submittedBy: string | null;
-  submittedAt: string | null;
-  approvedBy: string | null;
-  approvedAt: string | null;
-  decisionNote: string | null;
-  waivers: { findingKey: string; reason: string; waivedByName: string; waivedAt: string }[];
-}
+export type ReportApprovalData = NonNullable<Awaited<ReturnType<typeof getApproval>>>;
 
-const STATE: Record<ReportApprovalData["state"], string> = {
+const STATE: Record<ReviewState, string> = {
   draft: "Draft (not reviewed)",
   "in-review": "In review (not approved yet)",
   baselined: "Baselined",

@@ -1,4 +1,4 @@
-import type { ReviewState } from "./use-review";
+import type { ReviewState } from "@/lib/review";
 
 const LOOK: Record<ReviewState, { label: string; cls: string }> = {
   draft: { label: "Draft", cls: "bg-slate-100 text-slate-800 ring-slate-300" },

@@ -1,7 +1,10 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import type { z } from "zod";
 import { apiFetch, sendJson } from "@/queries/api";
 import { missionKeys } from "@/queries/keys";
+import type { createCommentSchema, createWaiverSchema, decideReviewSchema, submitReviewSchema } from "@/schemas/review";
+import type { getReviewOverview, listComments } from "@/server/review";
 
 /** React Query hooks of the review panel. Keys live under the mission's key so any plan edit refreshes them. */
 export const reviewKeys = {
@@ -11,58 +14,13 @@ export const reviewKeys = {
 
 const base = (m: string) => `/api/v1/missions/${encodeURIComponent(m)}/review`;
 
-export type ReviewState = "draft" | "in-review" | "baselined" | "changes-requested";
-
-export interface WaiverView {
-  id: string;
-  findingKey: string;
-  code: string;
-  chain: string;
-  channel: string | null;
-  reason: string;
-  waivedBy: string;
-  waivedAt: string;
-  active: boolean;
-  version: number;
-}
-
-export interface ReviewOverview {
-  state: ReviewState;
-  revision: { number: number; authorName: string; createdAt: string; errorCount: number } | null;
-  baselineRevision: number | null;
-  channels: string[];
-  errors: {
-    id: string;
-    key: string;
-    code: string;
-    chain: string;
-    channel: string | null;
-    message: string;
-    waiver: WaiverView | null;
-  }[];
-  reviews: {
-    id: string;
-    revision: number;
-    submittedBy: string;
-    submittedAt: string;
-    note: string;
-    outcome: string;
-    decidedBy: string | null;
-    decidedAt: string | null;
-    decisionNote: string | null;
-    waivers: { findingKey: string; reason: string; waivedByName: string; waivedAt: string }[];
-  }[];
-}
-
-export interface CommentView {
-  id: string;
-  revision: number;
-  channelKey: string | null;
-  findingId: string | null;
-  authorName: string;
-  body: string;
-  createdAt: string;
-}
+/**
+ * The review API's replies, typed by the server functions that build them
+ * (`import type` only: nothing of the server reaches the client bundle).
+ */
+export type ReviewOverview = Awaited<ReturnType<typeof getReviewOverview>>;
+export type WaiverView = NonNullable<ReviewOverview["errors"][number]["waiver"]>;
+export type CommentView = Awaited<ReturnType<typeof listComments>>[number];
 
 export function useReviewQuery(missionId: string) {
   return useQuery({
@@ -100,16 +58,12 @@ function useReviewMutation<V>(missionId: string, fn: (v: V) => Promise<unknown>)
 }
 
 export const useSubmitMutation = (m: string) =>
-  useReviewMutation(m, (v: { revision?: number; note?: string }) => sendJson(`${base(m)}/submit`, "POST", v));
+  useReviewMutation(m, (v: z.input<typeof submitReviewSchema>) => sendJson(`${base(m)}/submit`, "POST", v));
 export const useDecideMutation = (m: string) =>
-  useReviewMutation(m, (v: { decision: "baseline" | "request-changes"; revision?: number; note?: string }) =>
-    sendJson(`${base(m)}/decide`, "POST", v),
-  );
+  useReviewMutation(m, (v: z.input<typeof decideReviewSchema>) => sendJson(`${base(m)}/decide`, "POST", v));
 export const useWaiveMutation = (m: string) =>
-  useReviewMutation(m, (v: { findingId: string; reason: string }) => sendJson(`${base(m)}/waivers`, "POST", v));
+  useReviewMutation(m, (v: z.input<typeof createWaiverSchema>) => sendJson(`${base(m)}/waivers`, "POST", v));
 export const useWithdrawWaiverMutation = (m: string) =>
   useReviewMutation(m, (id: string) => apiFetch(`${base(m)}/waivers/${encodeURIComponent(id)}`, { method: "DELETE" }));
 export const useCommentMutation = (m: string) =>
-  useReviewMutation(m, (v: { body: string; revision?: number; channelKey?: string; findingId?: string }) =>
-    sendJson(`${base(m)}/comments`, "POST", v),
-  );
+  useReviewMutation(m, (v: z.input<typeof createCommentSchema>) => sendJson(`${base(m)}/comments`, "POST", v));

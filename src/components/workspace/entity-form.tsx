@@ -1,192 +1,18 @@
 "use client";
 
-import {
-  FormProvider,
-  getFormProps,
-  getInputProps,
-  getSelectProps,
-  getTextareaProps,
-  useField,
-  useForm,
-  type Submission,
-  type SubmissionResult,
-} from "@conform-to/react";
+import { FormProvider, getFormProps, useForm, type Submission, type SubmissionResult } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useMemo, useRef, useState } from "react";
 import type { z } from "zod";
 import { ApiError } from "@/queries/api";
-import { FieldHelper, type HelperKind } from "./field-helper";
-import { splitIssues } from "./form-errors";
-import { buttonClass, LaserSafetyNote } from "./ui";
+import { Field } from "./entity-form/field";
+import { fieldNames, type FieldGroup } from "./entity-form/field-spec";
+import { ownFields } from "./entity-form/own-fields";
+import { splitIssues, statusText } from "./form-errors";
+import { buttonClass } from "./ui";
 
-export type FieldSpec = {
-  name: string;
-  label: string;
-  /** Shown in the label: "(GHz)". Every field names its unit, or what it counts. */
-  unit: string;
-  help?: string;
-  /** Laser-safety caution beside optical power fields. */
-  caution?: "laser";
-  wide?: boolean;
-  /** A helper calculation opened beside the field; its Apply fills the form. */
-  helper?: HelperKind;
-} & (
-  | { kind: "number"; step?: string; placeholder?: string }
-  | { kind: "text"; placeholder?: string }
-  | { kind: "textarea" }
-  | { kind: "select"; options: { value: string; label: string }[] }
-  | { kind: "checkbox" }
-  | { kind: "intervals"; newInterval: { minGHz: number; maxGHz: number } }
-);
-
-export interface FieldGroup {
-  legend: string;
-  fields: FieldSpec[];
-}
-
-/** Every leaf name of the specs, as conform names them (used to place server issues). */
-export function fieldNames(groups: readonly FieldGroup[]): string[] {
-  return groups.flatMap((g) => g.fields.map((f) => f.name));
-}
-
-function labelText(f: FieldSpec) {
-  return (
-    <>
-      {f.label} <span className="font-normal text-ink-soft">({f.unit})</span>
-    </>
-  );
-}
-
-function ErrorLine({ id, errors }: { id: string; errors: string[] | undefined }) {
-  return (
-    <p id={id} className="min-h-[1.1rem] text-xs text-sev-error" aria-live="polite">
-      {errors?.join("; ")}
-    </p>
-  );
-}
-
-function IntervalsField({ spec }: { spec: Extract<FieldSpec, { kind: "intervals" }> }) {
-  const [meta, form] = useField<{ minGHz: number; maxGHz: number }[]>(spec.name);
-  const list = meta.getFieldList();
-  return (
-    <fieldset className="col-span-2" aria-describedby={`${meta.id}-help ${meta.errorId}`}>
-      <legend className="text-sm font-medium">{labelText(spec)}</legend>
-      {spec.help ? (
-        <p id={`${meta.id}-help`} className="text-xs text-ink-soft">
-          {spec.help}
-        </p>
-      ) : null}
-      <div className="mt-1 space-y-1">
-        {list.map((item, index) => {
-          const f = item.getFieldset();
-          return (
-            <div key={item.key} className="flex flex-wrap items-start gap-2">
-              {(["minGHz", "maxGHz"] as const).map((k) => (
-                <label key={k} className="flex flex-col text-xs">
-                  <span>{k === "minGHz" ? "From" : "To"} (GHz)</span>
-                  <input
-                    {...getInputProps(f[k], { type: "number" })}
-                    step="any"
-                    className="w-32 rounded border border-ink/30 px-2 py-1 text-sm tabular-nums aria-[invalid=true]:border-sev-error"
-                  />
-                  <ErrorLine id={f[k].errorId} errors={f[k].errors} />
-                </label>
-              ))}
-              {list.length > 1 ? (
-                <button
-                  {...form.remove.getButtonProps({ name: meta.name, index })}
-                  className={`${buttonClass.quiet} mt-4`}
-                  aria-label={`Remove interval ${index + 1}`}
-                >
-                  Remove
-                </button>
-              ) : null}
-            </div>
-          );
-        })}
-      </div>
-      <button
-        {...form.insert.getButtonProps({ name: meta.name, defaultValue: spec.newInterval })}
-        className={buttonClass.quiet}
-      >
-        + Add interval
-      </button>
-      <ErrorLine id={meta.errorId} errors={meta.errors} />
-    </fieldset>
-  );
-}
-
-function Field({ spec, disabled }: { spec: FieldSpec; disabled: boolean }) {
-  const [meta] = useField<unknown>(spec.name);
-  if (spec.kind === "intervals") return <IntervalsField spec={spec} />;
-  const helpId = `${meta.id}-help`;
-  const describedBy = [spec.help ? helpId : null, meta.errorId].filter(Boolean).join(" ");
-  const inputClass =
-    "w-full rounded border border-ink/30 bg-white px-2 py-1.5 text-sm tabular-nums aria-[invalid=true]:border-sev-error focus:border-ink focus:outline-none focus:ring-1 focus:ring-ink";
-  let control: React.ReactNode;
-  if (spec.kind === "select") {
-    control = (
-      <select {...getSelectProps(meta)} aria-describedby={describedBy} disabled={disabled} className={inputClass}>
-        <option value="">Choose…</option>
-        {spec.options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
-    );
-  } else if (spec.kind === "checkbox") {
-    control = (
-      <input
-        {...getInputProps(meta, { type: "checkbox" })}
-        aria-describedby={describedBy}
-        disabled={disabled}
-        className="h-4 w-4"
-      />
-    );
-  } else if (spec.kind === "textarea") {
-    control = (
-      <textarea
-        {...getTextareaProps(meta)}
-        aria-describedby={describedBy}
-        disabled={disabled}
-        rows={3}
-        className={inputClass}
-      />
-    );
-  } else {
-    control = (
-      <input
-        {...getInputProps(meta, { type: spec.kind === "number" ? "number" : "text" })}
-        {...(spec.kind === "number" ? { step: spec.step ?? "any", inputMode: "decimal" as const } : {})}
-        placeholder={spec.placeholder}
-        aria-describedby={describedBy}
-        disabled={disabled}
-        className={inputClass}
-      />
-    );
-  }
-  return (
-    <div className={spec.wide || spec.helper ? "col-span-2" : ""}>
-      <label
-        htmlFor={meta.id}
-        className={`text-sm font-medium ${spec.kind === "checkbox" ? "flex items-center gap-2" : "block"}`}
-      >
-        {spec.kind === "checkbox" ? control : null}
-        <span>{labelText(spec)}</span>
-      </label>
-      {spec.kind !== "checkbox" ? <div className="mt-0.5">{control}</div> : null}
-      {spec.help ? (
-        <p id={helpId} className="mt-0.5 text-xs leading-snug text-ink-soft">
-          {spec.help}
-        </p>
-      ) : null}
-      {spec.caution === "laser" ? <LaserSafetyNote className="mt-1" /> : null}
-      <ErrorLine id={meta.errorId} errors={meta.errors} />
-      {spec.helper && !disabled ? <FieldHelper kind={spec.helper} fieldName={spec.name} /> : null}
-    </div>
-  );
-}
+export { fieldNames, ownFields };
+export type { FieldGroup, FieldSpec } from "./entity-form/field-spec";
 
 export interface EntityFormProps<S extends z.ZodType> {
   formId: string;
@@ -361,25 +187,4 @@ function InnerForm<S extends z.ZodType>(
       </form>
     </FormProvider>
   );
-}
-
-/**
- * Only the form's own fields (and conform's intent): a helper opened beside a
- * field has inputs of its own inside this form, which the strict schemas
- * would refuse as unknown keys.
- */
-export function ownFields(formData: FormData, names: readonly string[]): FormData {
-  const roots = new Set(names.map((n) => n.split(/[.[]/)[0]));
-  const out = new FormData();
-  for (const [k, v] of formData.entries()) {
-    if (k.startsWith("__") || roots.has(k.split(/[.[]/)[0])) out.append(k, v);
-  }
-  return out;
-}
-
-function statusText(err: ApiError): string {
-  if (err.status === 400) return err.message || "Some values were refused; see the fields below.";
-  if (err.status === 403) return "Your role in this team does not allow this change.";
-  if (err.status === 404) return "This item no longer exists (it may have been deleted). Reload the page.";
-  return err.message;
 }

@@ -2,7 +2,7 @@
 
 import { useFormMetadata } from "@conform-to/react";
 import { useState } from "react";
-import { ChannelNotation, DriftBudget, ReceiverNoise, ResonatorSizing, WavelengthGrid } from "@/components/helpers";
+import { ChannelNotation, DriftBudget, ReceiverNoise, ResonatorSizing, WavelengthGrid } from "@/components/tools";
 import { buttonClass } from "./ui";
 
 /** Which helper sits beside a field (see entity-specs.ts). */

@@ -2,7 +2,7 @@
 
 import { useMemo, useState } from "react";
 import type { Finding, Severity } from "@/queries/types";
-import { countBySeverity, groupFindings } from "./findings";
+import { countBySeverity, groupFindings, SEVERITIES } from "./findings";
 import { Empty, SeverityBadge } from "./ui";
 
 function FindingItem({ f }: { f: Finding }) {
@@ -35,7 +35,7 @@ export function FindingsPanel({
   return (
     <div data-testid="findings-panel">
       <div className="mb-2 flex flex-wrap gap-3 text-sm" role="group" aria-label="Show severities">
-        {(["error", "warning", "info"] as const).map((s) => (
+        {SEVERITIES.map((s) => (
           <label key={s} className="inline-flex items-center gap-1.5">
             <input type="checkbox" checked={shown[s]} onChange={(e) => setShown({ ...shown, [s]: e.target.checked })} />
             <SeverityBadge severity={s} />

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import type { Finding, FindingCode, Severity } from "@/lib/plan/types";
+import type { Finding, FindingCode, Severity } from "@/lib/plan";
 import { countBySeverity, findingsForChannel, groupFindings, worstFinding } from "./findings";
 
 const f = (severity: Severity, chain: string, channel: string | null, code = "x", data?: object): Finding => ({

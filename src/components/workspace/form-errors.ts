@@ -1,4 +1,4 @@
-import type { ApiIssue } from "@/queries/api";
+import type { ApiError, ApiIssue } from "@/queries/api";
 
 /**
  * Places the server's issues beside the form's fields: an issue whose path
@@ -36,4 +36,12 @@ function candidates(name: string): string[] {
   // Drop prefixes such as "body." or "channels[2]." one at a time.
   for (let i = 1; i < parts.length; i++) out.push(parts.slice(i).join("."));
   return out;
+}
+
+/** The form-level message for a refused save, by HTTP status. */
+export function statusText(err: ApiError): string {
+  if (err.status === 400) return err.message || "Some values were refused; see the fields below.";
+  if (err.status === 403) return "Your role in this team does not allow this change.";
+  if (err.status === 404) return "This item no longer exists (it may have been deleted). Reload the page.";
+  return err.message;
 }

@@ -1,6 +1,6 @@
 "use client";
 
-import { OpticalFrequency } from "@/components/helpers";
+import { OpticalFrequency } from "@/components/tools";
 import type { Chain, ChainResult, Detector, Laser, Resonator } from "@/queries/types";
 import { formatGHz, formatInterval, formatMHz, formatNumber, formatQ } from "./format";
 import { buttonClass, Empty, LaserSafetyNote } from "./ui";

@@ -1,9 +1,7 @@
 "use client";
 
-import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useCallback, useMemo, useState } from "react";
-import { api } from "@/queries/api";
 import type { Collection } from "@/queries/keys";
 import {
   useCollectionQuery,
@@ -15,21 +13,21 @@ import {
   useSettingsQuery,
 } from "@/queries/missions";
 import type { Channel } from "@/queries/types";
-import { Drawer } from "./drawer";
-import { EntityEditor, KIND_LABEL, MissionEditor, SettingsEditor } from "./entity-editor";
+import { KIND_LABEL } from "./entity-editor";
 import { countBySeverity } from "./findings";
 import { FindingsPanel } from "./findings-panel";
 import { ChannelsTable } from "./channels-table";
 import { ChainItem, DetectorTable, LaserTable, ResonatorTable } from "./hardware";
-import { formatAge, formatNumber, plural } from "./format";
+import { EditingDrawer, type Editing } from "./overview/editing-drawer";
+import { MissionHeader } from "./overview/mission-header";
+import { SettingsCard } from "./overview/settings-card";
 import { buttonClass, Card, ErrorNote, SENSITIVITY_TEXT, Spinner } from "./ui";
 
-type Editing =
-  | { kind: Collection; row: (Record<string, unknown> & { id: string; version: number }) | null }
-  | { kind: "settings" }
-  | { kind: "mission" }
-  | null;
-
+/**
+ * A mission's overview: its header, hardware, chains, channels with their
+ * figures, the latest check's findings, settings and recent changes, and the
+ * drawer that edits any of them (for the roles that may edit).
+ */
 export function MissionOverview({
   missionId,
   canEdit,
@@ -62,7 +60,7 @@ export function MissionOverview({
   const result = useResultQuery(missionId);
   const revisions = useRevisionsQuery(missionId);
   const activity = useActivityQuery(missionId);
-  const [editing, setEditing] = useState<Editing>(null);
+  const [editing, setEditing] = useState<Editing | null>(null);
   const [focus, setFocus] = useState<string | null>(null);
   const close = useCallback(() => setEditing(null), []);
 
@@ -95,89 +93,20 @@ export function MissionOverview({
 
   return (
     <div className="space-y-5">
-      <header className="flex flex-wrap items-start justify-between gap-4">
-        <div>
-          <p className="text-xs text-ink-soft">
-            <Link href="/missions" className="hover:underline">
-              Missions
-            </Link>{" "}
-            /
-          </p>
-          <h1 className="flex items-baseline gap-2 text-2xl font-semibold tracking-tight">
-            {mission.data?.name ?? "…"}
-            {canEdit && mission.data ? (
-              <button
-                type="button"
-                className={buttonClass.quiet}
-                onClick={() => setEditing({ kind: "mission" })}
-                aria-label="Edit mission name and description"
-              >
-                Edit
-              </button>
-            ) : null}
-            {canDelete && mission.data ? (
-              <button
-                type="button"
-                className={buttonClass.quiet}
-                onClick={confirmDelete}
-                disabled={deleteMission.isPending}
-                aria-label="Delete this mission"
-              >
-                {deleteMission.isPending ? "Deleting…" : "Delete"}
-              </button>
-            ) : null}
-          </h1>
-          {deleteMission.error ? (
-            <ErrorNote title="The mission was not deleted.">
-              {deleteMission.error.message} Reload the page to see its current state.
-            </ErrorNote>
-          ) : null}
-          {mission.data?.description ? (
-            <p className="mt-0.5 max-w-2xl text-sm text-ink-soft">{mission.data.description}</p>
-          ) : null}
-          <p className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-sm" data-testid="revision-line">
-            <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs font-medium uppercase tracking-wide">
-              {mission.data?.status ?? "draft"}
-            </span>
-            <span>
-              Revision{" "}
-              <span className="font-semibold tabular-nums" data-testid="revision-number">
-                {latest ?? "–"}
-              </span>
-            </span>
-            {result.data ? (
-              <>
-                <span className="text-sev-error">{plural(counts.error, "error")}</span>
-                <span className="text-sev-warning">{plural(counts.warning, "warning")}</span>
-                <span className="text-sev-info">{counts.info} info</span>
-              </>
-            ) : result.isLoading ? null : (
-              <span className="text-ink-soft">not checked yet</span>
-            )}
-            <span className="text-ink-soft">changed {formatAge(mission.data?.updatedAt)}</span>
-            {busy ? <Spinner label="Re-checking…" /> : null}
-          </p>
-        </div>
-        <nav className="flex flex-wrap gap-2" aria-label="Views and exports">
-          <Link className={buttonClass.secondary} href={`/missions/${missionId}/lanes`}>
-            Lane view
-          </Link>
-          <a className={buttonClass.secondary} href={api.collection(missionId, "plan")} download="plan.json">
-            Plan JSON
-          </a>
-          <a className={buttonClass.secondary} href={api.collection(missionId, "channels.csv")} download="channels.csv">
-            Channels CSV
-          </a>
-          <Link className={buttonClass.secondary} href={`/missions/${missionId}/report`}>
-            Printable report
-          </Link>
-          {canEdit ? (
-            <Link className={buttonClass.primary} href={`/missions/${missionId}/uploads`}>
-              Upload data
-            </Link>
-          ) : null}
-        </nav>
-      </header>
+      <MissionHeader
+        missionId={missionId}
+        mission={mission.data}
+        canEdit={canEdit}
+        canDelete={canDelete}
+        onEditMission={() => setEditing({ kind: "mission" })}
+        onDelete={confirmDelete}
+        deleting={deleteMission.isPending}
+        deleteError={deleteMission.error}
+        latest={latest}
+        counts={result.data ? counts : null}
+        resultLoading={result.isLoading}
+        busy={busy}
+      />
       {!canEdit ? (
         <p className="rounded bg-ink-faint px-3 py-1.5 text-sm text-ink-soft" data-testid="read-only-note">
           You can read this mission; your role does not allow changes.
@@ -268,75 +197,24 @@ export function MissionOverview({
             <FindingsPanel findings={findings} channelNames={channelNames} focus={focus} />
           )}
         </Card>
-        <Card
-          title="Check settings"
-          actions={
-            canEdit && settings.data ? (
-              <button type="button" className={buttonClass.quiet} onClick={() => setEditing({ kind: "settings" })}>
-                Edit
-              </button>
-            ) : null
-          }
-        >
-          {settings.data ? (
-            <dl className="grid grid-cols-[auto_1fr] gap-x-3 gap-y-0.5 text-sm">
-              <dt className="text-ink-soft">Guard band</dt>
-              <dd className="tabular-nums">{formatNumber(settings.data.guardMHz, 1)} MHz</dd>
-              <dt className="text-ink-soft">Image rejection</dt>
-              <dd className="tabular-nums">{formatNumber(settings.data.imageRejectionDB, 1)} dB</dd>
-              <dt className="text-ink-soft">Spur order</dt>
-              <dd className="tabular-nums">up to {settings.data.spurMaxOrder}</dd>
-              <dt className="text-ink-soft">Lock replica limit</dt>
-              <dd className="tabular-nums">{formatNumber(settings.data.replicaLimitDB, 1)} dB</dd>
-            </dl>
-          ) : settings.error ? (
-            <p className="text-sm text-sev-error">{settings.error.message}</p>
-          ) : (
-            <Spinner label="Loading…" />
-          )}
-          <h3 className="mt-5 border-t border-ink/10 pt-3 text-sm font-semibold">Recent changes</h3>
-          {activity.data && activity.data.length === 0 ? (
-            <p className="text-sm text-ink-soft">No changes yet.</p>
-          ) : null}
-          <ol className="mt-1 space-y-1.5 text-sm" data-testid="activity">
-            {(activity.data ?? []).slice(0, 8).map((a, i) => (
-              <li key={`${a.at}-${i}`}>
-                <span className="text-ink">{a.summary ?? `${a.action} ${a.entity}`}</span>
-                <span className="block text-xs text-ink-soft">
-                  {a.actorName ?? "someone"} · {formatAge(a.at)}
-                  {a.revision ? ` · revision ${a.revision}` : ""}
-                </span>
-              </li>
-            ))}
-          </ol>
-        </Card>
+        <SettingsCard
+          settings={settings.data}
+          settingsError={settings.error}
+          activity={activity.data}
+          canEdit={canEdit}
+          onEdit={() => setEditing({ kind: "settings" })}
+        />
       </div>
 
       {editing && canEdit ? (
-        editing.kind === "mission" ? (
-          mission.data ? (
-            <Drawer title="Mission" onClose={close}>
-              <MissionEditor mission={mission.data} onClose={close} />
-            </Drawer>
-          ) : null
-        ) : editing.kind === "settings" ? (
-          settings.data ? (
-            <Drawer title="Check settings" onClose={close}>
-              <SettingsEditor missionId={missionId} settings={settings.data} onClose={close} />
-            </Drawer>
-          ) : null
-        ) : (
-          <Drawer
-            title={
-              editing.row
-                ? `Edit ${KIND_LABEL[editing.kind]} ${String(editing.row.key)}`
-                : `New ${KIND_LABEL[editing.kind]}`
-            }
-            onClose={close}
-          >
-            <EntityEditor missionId={missionId} kind={editing.kind} row={editing.row} refs={refs} onClose={close} />
-          </Drawer>
-        )
+        <EditingDrawer
+          editing={editing}
+          missionId={missionId}
+          mission={mission.data}
+          settings={settings.data}
+          refs={refs}
+          close={close}
+        />
       ) : null}
     </div>
   );

@@ -14,6 +14,10 @@ export const REVIEW_STATES: readonly ReviewState[] = ["draft", "in-review", "bas
 export type ReviewAction = "submit" | "baseline" | "request-changes" | "edit";
 export const REVIEW_ACTIONS: readonly ReviewAction[] = ["submit", "baseline", "request-changes", "edit"];
 
+/** The decisions a lead or owner takes on a revision in review (the decide endpoint's choices). */
+export const REVIEW_DECISIONS = ["baseline", "request-changes"] as const satisfies readonly ReviewAction[];
+export type ReviewDecision = (typeof REVIEW_DECISIONS)[number];
+
 export interface ReviewStep {
   state: ReviewState;
   action: ReviewAction;

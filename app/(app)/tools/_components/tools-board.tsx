@@ -8,7 +8,7 @@ import {
   ReceiverNoise,
   ResonatorSizing,
   WavelengthGrid,
-} from "@/components/helpers";
+} from "@/components/tools";
 
 interface Applied {
   what: string;

@@ -1,30 +1,11 @@
 "use client";
 
 import { useId, useState } from "react";
-import {
-  freeSpectralRange,
-  fsrShiftPerKelvin,
-  groupIndex,
-  type IndexModel,
-  linewidthFromQ,
-  loadedQFromLinewidth,
-  modeShiftPerKelvin,
-  radiusForFsr,
-  wavelengthNmFromTHz,
-} from "@/lib/optics";
-import { formatFixed, formatSignificant, LN_FIT_CARRIER_THZ, parseNumberField } from "./format";
-import { attempt } from "./internals/attempt";
+import { linewidthFromQ } from "@/lib/optics";
+import { formatFixed, formatSignificant } from "./format";
 import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
 import { NumberField } from "./internals/number-field";
-
-type IndexSource = "jundt" | "zelmon-e" | "zelmon-o" | "measured";
-
-const INDEX_SOURCES: Record<IndexSource, string> = {
-  jundt: "LiNbO3 e-ray at temperature (Jundt 1997)",
-  "zelmon-e": "LiNbO3 e-ray, 21 °C (Zelmon et al. 1997)",
-  "zelmon-o": "LiNbO3 o-ray, 21 °C (Zelmon et al. 1997)",
-  measured: "Measured group index",
-};
+import { INDEX_SOURCES, resonatorSizing, type IndexSource } from "./internals/resonator-sizing-calc";
 
 export interface ResonatorApplyValue {
   fsrGHz: number;
@@ -79,63 +60,19 @@ export function ResonatorSizing({
     String(Number(linewidthFromQ(initialCarrierTHz, initialLoadedQ).toPrecision(6))),
   );
 
-  const carrier = parseNumberField(carrierText, "Carrier", LN_FIT_CARRIER_THZ);
-  const temp = parseNumberField(tempText, "Temperature", { min: -50, max: 300 });
-  const radius = parseNumberField(radiusText, "Radius", { min: 0, exclusiveMin: true });
-  const fsrIn = parseNumberField(fsrText, "FSR", { min: 0, exclusiveMin: true });
-  const ngIn = parseNumberField(ngText, "Group index", { min: 1 });
-  const qIn = parseNumberField(qText, "Loaded Q", { min: 0, exclusiveMin: true });
-  const lwIn = parseNumberField(lwText, "Linewidth", { min: 0, exclusiveMin: true });
-
-  const index =
-    carrier.ok && temp.ok
-      ? attempt(() => {
-          const lambdaUm = wavelengthNmFromTHz(carrier.value) / 1000;
-          if (source === "measured")
-            return { n: null as number | null, ng: ngIn.ok ? ngIn.value : Number.NaN, lambdaUm };
-          const model: IndexModel =
-            source === "jundt"
-              ? { fit: "jundt", temperatureC: temp.value }
-              : { fit: "zelmon", axis: source === "zelmon-e" ? "e" : "o" };
-          const g = groupIndex(lambdaUm, model);
-          return { n: g.n as number | null, ng: g.ng, lambdaUm };
-        })
-      : null;
-  const ng = index?.ok && Number.isFinite(index.value.ng) ? index.value.ng : null;
-
-  const sizing =
-    ng !== null
-      ? direction === "fromRadius"
-        ? radius.ok
-          ? attempt(() => ({ radiusUm: radius.value, fsrGHz: freeSpectralRange(radius.value, ng) }))
-          : null
-        : fsrIn.ok
-          ? attempt(() => ({ radiusUm: radiusForFsr(fsrIn.value, ng), fsrGHz: fsrIn.value }))
-          : null
-      : null;
-  const size = sizing?.ok ? sizing.value : null;
-
-  const thermal =
-    carrier.ok && temp.ok && size
-      ? attempt(() => ({
-          mode: modeShiftPerKelvin(carrier.value, temp.value),
-          fsr: fsrShiftPerKelvin(size.fsrGHz, carrier.value, temp.value),
-        }))
-      : null;
-
-  const qCalc = carrier.ok
-    ? qDirection === "fromQ"
-      ? qIn.ok
-        ? attempt(() => ({ loadedQ: qIn.value, linewidthMHz: linewidthFromQ(carrier.value, qIn.value) }))
-        : null
-      : lwIn.ok
-        ? attempt(() => ({ loadedQ: loadedQFromLinewidth(carrier.value, lwIn.value), linewidthMHz: lwIn.value }))
-        : null
-    : null;
-  const q = qCalc?.ok ? qCalc.value : null;
-
-  const firstError = [index, sizing, thermal, qCalc].find((a) => a && !a.ok);
-  const canApply = size !== null && q !== null;
+  const { carrier, temp, radius, fsrIn, ngIn, qIn, lwIn, index, ng, size, thermal, q, firstError, canApply } =
+    resonatorSizing({
+      carrierText,
+      tempText,
+      radiusText,
+      fsrText,
+      ngText,
+      qText,
+      lwText,
+      source,
+      direction,
+      qDirection,
+    });
 
   return (
     <HelperCard

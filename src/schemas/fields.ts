@@ -1,0 +1,195 @@
+import { z } from "zod";
+
+/**
+ * The field rules that the plan document (`plan/document.ts`) and the
+ * workspace forms (`workspace.ts`) share, written once: which numbers each
+ * field of the plan's entities takes (finite, positive, non-negative, whole,
+ * bounded), the sideband choice, the id rules, and the two rules that relate
+ * fields (every `min` below its `max`; a DSB offset beyond half the
+ * bandwidth).
+ *
+ * A rule is built in one of two dialects, which differ only in wording and
+ * in one normalisation:
+ * - `documentRules` carry no message of their own (`parsePlan` words every
+ *   issue with its error map, `plan/messages.ts`) and read a negative zero
+ *   as 0, so a parsed plan survives a JSON round trip unchanged;
+ * - `formRules` carry, on every check, the message a form shows beside the
+ *   field.
+ *
+ * The entity tables below return the shared fields in plan-document order
+ * (so parsed objects and issue lists keep that order); each schema adds its
+ * own id and reference fields, its defaults and its wording of the
+ * cross-field rules.
+ */
+
+export interface FieldRules {
+  /** Any finite number; `what` names it in the form message ("a number" unless told). */
+  number(what?: string): z.ZodNumber;
+  /** A finite number above 0. */
+  positive(): z.ZodNumber;
+  /** A finite number of 0 or more. */
+  nonNegative(): z.ZodNumber;
+  /** A whole number of `min` or more (counts, orders, mode numbers, versions). */
+  count(min: number): z.ZodNumber;
+  /** A whole number from `min` to `max`. */
+  countBetween(min: number, max: number): z.ZodNumber;
+  /** A share from 0 to below 1 (the lock tap fraction). */
+  fraction(): z.ZodNumber;
+  /** A phase-modulation index above 0 and below the first zero of J0. */
+  modulationIndex(): z.ZodNumber;
+  /** true or false. */
+  flag(): z.ZodBoolean;
+  /** `upper` or `lower`. */
+  sideband(): z.ZodEnum<{ upper: "upper"; lower: "lower" }>;
+}
+
+/** The largest modulation index accepted: just below the first zero of J0 (2.405), so the carrier keeps power. */
+export const MAX_MODULATION_INDEX = 2.4;
+/** Most reach intervals one laser pair may list (plan-format.md list limits). */
+export const MAX_REACH_INTERVALS = 64;
+export const SIDEBANDS = ["upper", "lower"] as const;
+
+function buildRules(dialect: "document" | "form"): FieldRules {
+  const form = dialect === "form";
+  /** The message of one check, in the form dialect only. */
+  const say = (message: string) => (form ? { error: message } : undefined);
+  // JSON numbers only: zod 4's z.number() already refuses NaN and ±Infinity
+  // (an overflowing literal such as 1e999 parses to Infinity).
+  const number = (what = "a number") =>
+    form
+      ? z.number({ error: (iss) => (iss.input === undefined ? "is required" : `must be ${what}`) })
+      : z.number().overwrite((v) => (v === 0 ? 0 : v));
+  const whole = () => number("a whole number").int(say("must be a whole number"));
+  return {
+    number: (what) => number(what),
+    positive: () => number().gt(0, say("must be greater than 0")),
+    nonNegative: () => number().gte(0, say("must be 0 or more")),
+    count: (min) => whole().gte(min, say(`must be ${min} or more`)),
+    countBetween: (min, max) =>
+      whole()
+        .gte(min, say(`must be ${min} or more`))
+        .lte(max, say(`must be ${max} or less`)),
+    fraction: () => number().gte(0, say("must be 0 or more")).lt(1, say("must be below 1")),
+    modulationIndex: () =>
+      number()
+        .gt(0, say("must be greater than 0"))
+        .lt(MAX_MODULATION_INDEX, say(`must be below ${MAX_MODULATION_INDEX} (the first zero of J0)`)),
+    flag: () => (form ? z.boolean({ error: "must be true or false" }) : z.boolean()),
+    sideband: () => (form ? z.enum(SIDEBANDS, { error: "must be upper or lower" }) : z.enum(SIDEBANDS)),
+  };
+}
+
+/** The rules as the plan document states them (messages from `parsePlan`'s error map). */
+export const documentRules: FieldRules = buildRules("document");
+/** The rules as the workspace forms state them (a message on every check). */
+export const formRules: FieldRules = buildRules("form");
+
+// ---------------------------------------------------------------- ids
+
+/** An id in the plan document (and a reference to one): any non-empty string. */
+export const planIdSchema = () => z.string().min(1);
+
+/**
+ * A plan-document id as the workspace stores it (`key`): a plan id that is
+ * also at most 64 characters and has no surrounding spaces.
+ */
+export const entityKeySchema = z
+  .string({ error: "is required" })
+  .min(1, { error: "is required" })
+  .max(64, { error: "must be at most 64 characters" })
+  .refine((s) => s.trim() === s, { error: "must not start or end with a space" });
+
+/** A reference to a stored row (chains name their hardware, channels their chain). */
+export const rowIdSchema = z.uuid({ error: "must be the id of an existing row" });
+
+/** Required text of a form, trimmed: a mission's or a channel's name. */
+export const requiredTextSchema = (max: number) =>
+  z
+    .string({ error: "is required" })
+    .trim()
+    .min(1, { error: "is required" })
+    .max(max, { error: `must be at most ${max} characters` });
+
+// ---------------------------------------------------------------- rules that relate fields
+
+/** An interval is well formed when its lower edge lies below its upper edge. */
+export const isOrdered = (minGHz: number, maxGHz: number): boolean => minGHz < maxGHz;
+
+/** Half a channel's bandwidth in GHz. */
+export const halfBandGHz = (bandwidthMHz: number): number => bandwidthMHz / 2000;
+
+/** A DSB offset must exceed half the bandwidth, or the two passbands would touch at the centre. */
+export const dsbOffsetClears = (dsbOffsetGHz: number, bandwidthMHz: number): boolean =>
+  dsbOffsetGHz > halfBandGHz(bandwidthMHz);
+
+// ---------------------------------------------------------------- the entities' shared fields, in document order
+
+export const settingsShape = (r: FieldRules) => ({
+  guardMHz: r.nonNegative(),
+  imageRejectionDB: r.number(),
+  spurMaxOrder: r.countBetween(2, 9),
+  replicaLimitDB: r.number(),
+});
+
+export const lockShape = (r: FieldRules) => ({
+  modulationMHz: r.positive(),
+  modulationIndex: r.modulationIndex(),
+  orders: r.count(1),
+});
+
+/** A laser pair's fields after its id; `reach` and `lock` are the caller's objects (strictness and wording differ). */
+export const laserShape = <Reach extends z.ZodType, Lock extends z.ZodType>(
+  r: FieldRules,
+  parts: { reach: Reach; lock: Lock },
+) => ({
+  carrierTHz: r.positive(),
+  carrierPowerMW: r.positive(),
+  loPowerMW: r.positive(),
+  reach: parts.reach,
+  stepMHz: r.nonNegative(),
+  driftMHz: r.nonNegative(),
+  lock: parts.lock,
+});
+
+export const resonatorShape = (r: FieldRules) => ({
+  fsrGHz: r.positive(),
+  loadedQ: r.positive(),
+});
+
+export const detectorShape = (r: FieldRules) => ({
+  minGHz: r.nonNegative(),
+  maxGHz: r.positive(),
+  maxInputMW: r.positive(),
+  sampleRateGHz: r.positive().nullable(),
+});
+
+/** A chain's fields after its hardware references; `rfInput` is the caller's interval object. */
+export const chainShape = <RfInput extends z.ZodType>(r: FieldRules, parts: { rfInput: RfInput }) => ({
+  mode: r.count(1),
+  sideband: r.sideband(),
+  loOffsetGHz: r.number(),
+  rfInput: parts.rfInput,
+  tapFraction: r.fraction(),
+  pathLossDB: r.nonNegative(),
+  carrierRejectionDB: r.nonNegative(),
+  sharedIf: r.flag(),
+});
+
+/** A channel's fields after its id, name and chain reference. */
+export const channelShape = (r: FieldRules) => ({
+  centerGHz: r.positive(),
+  bandwidthMHz: r.positive(),
+  dsbOffsetGHz: r.positive().nullable(),
+  integrationMs: r.positive(),
+  antennaK: r.nonNegative(),
+  receiverK: r.nonNegative(),
+  gainStability: r.nonNegative(),
+  requiredNedtK: r.nonNegative().nullable(),
+});
+
+/** The values a complete entity takes for a field left out (plan-format.md; the forms send partial updates without them). */
+export const FIELD_DEFAULTS = {
+  detector: { sampleRateGHz: null },
+  chain: { carrierRejectionDB: 0, sharedIf: false },
+  channel: { dsbOffsetGHz: null, requiredNedtK: null },
+} as const;
