@@ -1,12 +1,12 @@
+import { SEVERITIES } from "@/lib/plan";
 import type { Finding, Severity } from "@/queries/types";
 
-/** error > warning > info; higher rank is worse. */
-export const SEVERITY_RANK: Record<Severity, number> = { error: 3, warning: 2, info: 1 };
+export { SEVERITIES };
 
-/** The engine's severities, worst first (from the rank above, which the type checker holds to the engine's `Severity`). */
-export const SEVERITIES: readonly Severity[] = (Object.keys(SEVERITY_RANK) as Severity[]).sort(
-  (a, b) => SEVERITY_RANK[b] - SEVERITY_RANK[a],
-);
+/** error > warning > info; higher rank is worse (the engine lists its severities worst first). */
+export const SEVERITY_RANK = Object.fromEntries(SEVERITIES.map((s, i) => [s, SEVERITIES.length - i])) as Readonly<
+  Record<Severity, number>
+>;
 
 /** The worst finding of a list (first of equal severity, i.e. engine order), or null. */
 export function worstFinding(findings: readonly Finding[]): Finding | null {
