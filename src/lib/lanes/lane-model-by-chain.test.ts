@@ -66,7 +66,13 @@ describe("laneModelByChain", () => {
         }
         expect(key(second.model)).toEqual(key(buildLaneModel(moved.plan, moved.result, ref)));
       }),
-      { numRuns: 12 },
+      {
+        numRuns: 12,
+        // Regression: moving chain 0 by −0.7275 GHz moves an image band so that
+        // the 86–92 GHz protected band comes within the reference margin; the
+        // chain-by-chain build kept the old reference items.
+        examples: [[0, -0.7274999999999993]],
+      },
     );
   });
 });

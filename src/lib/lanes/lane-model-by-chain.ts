@@ -1,4 +1,5 @@
 import { buildLaneModel } from "./build-lane-model";
+import { referenceItems, rfHull } from "./internals/reference-items";
 import { rfLane } from "./internals/rf-lane";
 import type { Lane, LaneItem, LaneModel, LanePlanInput, LaneReferenceInput, LaneResultInput } from "./types";
 
@@ -12,8 +13,6 @@ export interface LaneModelParts {
   readonly reference: { readonly inputs: readonly unknown[]; readonly items: readonly LaneItem[] } | null;
   readonly chains: ReadonlyMap<string, ChainPart>;
 }
-
-const EMPTY_RESULT: LaneResultInput = { chains: [], channels: [], spurs: [], findings: [] };
 
 function sameInputs(a: readonly unknown[], b: readonly unknown[]): boolean {
   if (a.length !== b.length) return false;
@@ -34,19 +33,9 @@ export function laneModelByChain(
   reference: LaneReferenceInput,
   previous: LaneModelParts | null = null,
 ): { model: LaneModel; parts: LaneModelParts } {
-  const refInputs = [plan.channels, reference, ...plan.chains.map((c) => c.rfInput)];
-  const reference_ =
-    previous?.reference && sameInputs(previous.reference.inputs, refInputs)
-      ? previous.reference
-      : {
-          inputs: refInputs,
-          items: buildLaneModel(plan, EMPTY_RESULT, reference).items.filter(
-            (i) => i.kind === "protected-band" || i.kind === "line-centre",
-          ),
-        };
   const chains = new Map<string, ChainPart>();
   const lanes: Lane[] = [];
-  const items: LaneItem[] = [...reference_.items];
+  const chainItems: LaneItem[] = [];
   for (const chain of plan.chains) {
     const laser = plan.lasers.find((l) => l.id === chain.laser);
     const res = plan.resonators.find((r) => r.id === chain.resonator);
@@ -91,8 +80,17 @@ export function laneModelByChain(
           };
     chains.set(chain.id, part);
     for (const l of part.model.lanes) if (!lanes.some((x) => x.id === l.id)) lanes.push(l);
-    items.push(...part.model.items);
+    chainItems.push(...part.model.items);
   }
+  // Which reference bands and lines are drawn depends on the hull of every
+  // chain's RF items (image bands move with the LO), as in buildLaneModel.
+  const rf = rfHull(chainItems);
+  const refInputs = [reference, rf[0], rf[1]];
+  const reference_ =
+    previous?.reference && sameInputs(previous.reference.inputs, refInputs)
+      ? previous.reference
+      : { inputs: refInputs, items: referenceItems(reference, rf) };
+  const items: LaneItem[] = [...reference_.items, ...chainItems];
   if (lanes.length === 0 || lanes[0]?.id !== "rf") lanes.unshift(rfLane());
   let lo = Infinity;
   let hi = -Infinity;
