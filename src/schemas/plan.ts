@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { formatPath } from "./issues";
 
 /**
  * The plan document `heterolane.plan/1` (docs: plan-format, "Input document").
@@ -297,19 +298,8 @@ export function crossFieldIssues(input: unknown): RawIssue[] {
 // ---------------------------------------------------------------------------
 // Paths and messages.
 
-/** `channels[2].bandwidthMHz`; keys that are not plain names are quoted: `a["x y"]`. */
-export function formatPath(path: readonly PropertyKey[]): string {
-  let s = "";
-  for (const seg of path) {
-    if (typeof seg === "number") s += `[${seg}]`;
-    else {
-      const key = String(seg);
-      if (/^[A-Za-z_$][A-Za-z0-9_$]*$/.test(key)) s += s === "" ? key : `.${key}`;
-      else s += `[${JSON.stringify(key)}]`;
-    }
-  }
-  return s;
-}
+// The one path formatter (`channels[2].bandwidthMHz`), shared with the server's 400 answers.
+export { formatPath };
 
 function describeValue(v: unknown): string {
   if (v === null) return "null";
