@@ -73,6 +73,10 @@ describe("layering", () => {
     expect(importsOf("src/server/core/").filter(([, t]) => areas.some((a) => t.startsWith(a)))).toEqual([]);
   });
 
+  it("server modules import the core's modules, never its index (which loads the guards and the auth instance)", () => {
+    expect(importsOf("src/server/").filter(([, t]) => t === "src/server/core/index.ts")).toEqual([]);
+  });
+
   it("app/ imports neither db/ nor tests/", () => {
     expect(importsOf("app/").filter(([, t]) => t.startsWith("db/") || t.startsWith("tests/"))).toEqual([]);
   });
