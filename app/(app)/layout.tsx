@@ -2,8 +2,7 @@ import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { Providers } from "@/components/providers";
 import { TopBar } from "@/components/shell/top-bar";
-import { auth } from "@/server/auth/auth";
-import { getActor } from "@/server/auth/guard";
+import { readActor } from "@/server/auth/guard";
 import { listTeamsOf } from "@/server/auth/queries";
 import { signOutAction, switchTeamAction } from "./actions";
 
@@ -12,10 +11,8 @@ import { signOutAction, switchTeamAction } from "./actions";
  * /sign-in, no team → /teams/new). Pages and actions check roles again.
  */
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
-  const h = await headers();
-  const session = await auth.api.getSession({ headers: h });
+  const { session, actor } = await readActor(await headers());
   if (!session) redirect("/sign-in");
-  const actor = await getActor(h);
   if (!actor) redirect("/teams/new");
   const teams = await listTeamsOf(session.user.id);
   return (

@@ -1,5 +1,4 @@
 "use server";
-import { parseWithZod } from "@conform-to/zod/v4";
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { auth } from "@/server/auth/auth";
@@ -13,6 +12,7 @@ import {
   SignInSchema,
   SignUpSchema,
 } from "@/schemas/auth";
+import { formAction } from "@/server/core";
 
 const TOO_MANY = "Too many attempts from this address. Wait a minute and try again.";
 
@@ -27,44 +27,44 @@ function verifyCallback(next: string | undefined): string {
   return n ? `/verify-email/result?next=${encodeURIComponent(n)}` : "/verify-email/result";
 }
 
-export async function signUpAction(_prev: unknown, formData: FormData) {
-  const submission = parseWithZod(formData, { schema: SignUpSchema });
-  if (submission.status !== "success") return submission.reply();
-  const tooMany = await limited("sign-up");
-  if (tooMany) return submission.reply({ formErrors: tooMany });
-  const { name, email, password } = submission.value;
-  const next = formData.get("next");
-  if (await emailIsRegistered(email)) {
-    return submission.reply({
-      fieldErrors: {
-        email: ["An account with this e-mail address already exists. Sign in, or reset the password if you forgot it."],
-      },
-    });
-  }
-  try {
-    await auth.api.signUpEmail({
-      body: { name, email, password, callbackURL: verifyCallback(typeof next === "string" ? next : undefined) },
-      headers: await headers(),
-    });
-  } catch (err) {
-    const e = authError(err);
-    if (e?.status === 429) return submission.reply({ formErrors: [TOO_MANY] });
-    if (e?.code === "INVALID_EMAIL")
-      return submission.reply({ fieldErrors: { email: ["E-mail address is not valid."] } });
-    if (e?.code === "PASSWORD_TOO_SHORT" || e?.code === "PASSWORD_TOO_LONG")
-      return submission.reply({ fieldErrors: { password: [e.message] } });
-    if (e) return submission.reply({ formErrors: [e.message] });
-    throw err;
-  }
-  redirect(`/verify-email?email=${encodeURIComponent(email)}`);
-}
+export const signUpAction = formAction(
+  { access: "public", schema: SignUpSchema },
+  async ({ value, formData, reply }) => {
+    const tooMany = await limited("sign-up");
+    if (tooMany) return reply({ formErrors: tooMany });
+    const { name, email, password } = value;
+    const next = formData.get("next");
+    if (await emailIsRegistered(email)) {
+      return reply({
+        fieldErrors: {
+          email: [
+            "An account with this e-mail address already exists. Sign in, or reset the password if you forgot it.",
+          ],
+        },
+      });
+    }
+    try {
+      await auth.api.signUpEmail({
+        body: { name, email, password, callbackURL: verifyCallback(typeof next === "string" ? next : undefined) },
+        headers: await headers(),
+      });
+    } catch (err) {
+      const e = authError(err);
+      if (e?.status === 429) return reply({ formErrors: [TOO_MANY] });
+      if (e?.code === "INVALID_EMAIL") return reply({ fieldErrors: { email: ["E-mail address is not valid."] } });
+      if (e?.code === "PASSWORD_TOO_SHORT" || e?.code === "PASSWORD_TOO_LONG")
+        return reply({ fieldErrors: { password: [e.message] } });
+      if (e) return reply({ formErrors: [e.message] });
+      throw err;
+    }
+    redirect(`/verify-email?email=${encodeURIComponent(email)}`);
+  },
+);
 
-export async function signInAction(_prev: unknown, formData: FormData) {
-  const submission = parseWithZod(formData, { schema: SignInSchema });
-  if (submission.status !== "success") return submission.reply();
+export const signInAction = formAction({ access: "public", schema: SignInSchema }, async ({ value, reply }) => {
   const tooMany = await limited("sign-in");
-  if (tooMany) return submission.reply({ formErrors: tooMany });
-  const { email, password, next } = submission.value;
+  if (tooMany) return reply({ formErrors: tooMany });
+  const { email, password, next } = value;
   let userId: string;
   try {
     const res = await auth.api.signInEmail({
@@ -76,86 +76,88 @@ export async function signInAction(_prev: unknown, formData: FormData) {
     if (isNextControlFlow(err)) throw err;
     const e = authError(err);
     if (e?.code === "EMAIL_NOT_VERIFIED")
-      return submission.reply({
+      return reply({
         formErrors: [
           "Confirm your e-mail address first. We have sent a new confirmation link to " +
             email +
             "; open it and you are signed in.",
         ],
       });
-    if (e?.code === "INVALID_EMAIL_OR_PASSWORD")
-      return submission.reply({ formErrors: ["E-mail address or password is wrong."] });
-    if (e?.status === 429) return submission.reply({ formErrors: [TOO_MANY] });
-    if (e) return submission.reply({ formErrors: [e.message] });
+    if (e?.code === "INVALID_EMAIL_OR_PASSWORD") return reply({ formErrors: ["E-mail address or password is wrong."] });
+    if (e?.status === 429) return reply({ formErrors: [TOO_MANY] });
+    if (e) return reply({ formErrors: [e.message] });
     throw err;
   }
   // The new session starts in the person's first team (see the session hook in src/server/auth/auth.ts).
   const teams = await listTeamsOf(userId);
   redirect(safeNext(next, teams.length ? "/missions" : "/teams/new"));
-}
+});
 
-export async function forgotPasswordAction(_prev: unknown, formData: FormData) {
-  const submission = parseWithZod(formData, { schema: ForgotPasswordSchema });
-  if (submission.status !== "success") return submission.reply();
-  const tooMany = await limited("forgot-password");
-  if (tooMany) return submission.reply({ formErrors: tooMany });
-  try {
-    await auth.api.requestPasswordReset({
-      body: { email: submission.value.email, redirectTo: "/reset-password" },
-      headers: await headers(),
-    });
-  } catch (err) {
-    const e = authError(err);
-    if (e?.status === 429) return submission.reply({ formErrors: [TOO_MANY] });
-    if (e) return submission.reply({ formErrors: [e.message] });
-    throw err;
-  }
-  redirect(`/forgot-password?sent=${encodeURIComponent(submission.value.email)}`);
-}
-
-export async function resetPasswordAction(_prev: unknown, formData: FormData) {
-  const submission = parseWithZod(formData, { schema: ResetPasswordSchema });
-  if (submission.status !== "success") return submission.reply();
-  const tooMany = await limited("reset-password");
-  if (tooMany) return submission.reply({ formErrors: tooMany });
-  try {
-    await auth.api.resetPassword({
-      body: { token: submission.value.token, newPassword: submission.value.password },
-      headers: await headers(),
-    });
-  } catch (err) {
-    const e = authError(err);
-    if (e?.code === "INVALID_TOKEN")
-      return submission.reply({
-        formErrors: [
-          "This reset link has expired or was already used. Ask for a new one on the “Forgot password” page.",
-        ],
+export const forgotPasswordAction = formAction(
+  { access: "public", schema: ForgotPasswordSchema },
+  async ({ value, reply }) => {
+    const tooMany = await limited("forgot-password");
+    if (tooMany) return reply({ formErrors: tooMany });
+    try {
+      await auth.api.requestPasswordReset({
+        body: { email: value.email, redirectTo: "/reset-password" },
+        headers: await headers(),
       });
-    if (e?.code === "PASSWORD_TOO_SHORT" || e?.code === "PASSWORD_TOO_LONG")
-      return submission.reply({ fieldErrors: { password: [e.message] } });
-    if (e?.status === 429) return submission.reply({ formErrors: [TOO_MANY] });
-    if (e) return submission.reply({ formErrors: [e.message] });
-    throw err;
-  }
-  redirect("/sign-in?reset=1");
-}
+    } catch (err) {
+      const e = authError(err);
+      if (e?.status === 429) return reply({ formErrors: [TOO_MANY] });
+      if (e) return reply({ formErrors: [e.message] });
+      throw err;
+    }
+    redirect(`/forgot-password?sent=${encodeURIComponent(value.email)}`);
+  },
+);
 
-export async function resendVerificationAction(_prev: unknown, formData: FormData) {
-  const submission = parseWithZod(formData, { schema: ResendVerificationSchema });
-  if (submission.status !== "success") return submission.reply();
-  const tooMany = await limited("resend-verification");
-  if (tooMany) return submission.reply({ formErrors: tooMany });
-  try {
-    await auth.api.sendVerificationEmail({
-      body: { email: submission.value.email, callbackURL: "/verify-email/result" },
-      headers: await headers(),
-    });
-  } catch (err) {
-    const e = authError(err);
-    if (e?.status === 429) return submission.reply({ formErrors: [TOO_MANY] });
-    if (e?.code === "EMAIL_ALREADY_VERIFIED") redirect("/sign-in");
-    if (e) return submission.reply({ formErrors: [e.message] });
-    throw err;
-  }
-  redirect(`/verify-email?email=${encodeURIComponent(submission.value.email)}&resent=1`);
-}
+export const resetPasswordAction = formAction(
+  { access: "public", schema: ResetPasswordSchema },
+  async ({ value, reply }) => {
+    const tooMany = await limited("reset-password");
+    if (tooMany) return reply({ formErrors: tooMany });
+    try {
+      await auth.api.resetPassword({
+        body: { token: value.token, newPassword: value.password },
+        headers: await headers(),
+      });
+    } catch (err) {
+      const e = authError(err);
+      if (e?.code === "INVALID_TOKEN")
+        return reply({
+          formErrors: [
+            "This reset link has expired or was already used. Ask for a new one on the “Forgot password” page.",
+          ],
+        });
+      if (e?.code === "PASSWORD_TOO_SHORT" || e?.code === "PASSWORD_TOO_LONG")
+        return reply({ fieldErrors: { password: [e.message] } });
+      if (e?.status === 429) return reply({ formErrors: [TOO_MANY] });
+      if (e) return reply({ formErrors: [e.message] });
+      throw err;
+    }
+    redirect("/sign-in?reset=1");
+  },
+);
+
+export const resendVerificationAction = formAction(
+  { access: "public", schema: ResendVerificationSchema },
+  async ({ value, reply }) => {
+    const tooMany = await limited("resend-verification");
+    if (tooMany) return reply({ formErrors: tooMany });
+    try {
+      await auth.api.sendVerificationEmail({
+        body: { email: value.email, callbackURL: "/verify-email/result" },
+        headers: await headers(),
+      });
+    } catch (err) {
+      const e = authError(err);
+      if (e?.status === 429) return reply({ formErrors: [TOO_MANY] });
+      if (e?.code === "EMAIL_ALREADY_VERIFIED") redirect("/sign-in");
+      if (e) return reply({ formErrors: [e.message] });
+      throw err;
+    }
+    redirect(`/verify-email?email=${encodeURIComponent(value.email)}&resent=1`);
+  },
+);

@@ -26,7 +26,7 @@ async function staticLab(): Promise<{ base: string; server: Server }> {
   const out = await build({
     stdin: {
       contents: `import { createRoot } from "react-dom/client";
-import { LabLaneView } from "./app/lab/lane-view/_components/lab-lane-view";
+import { LabLaneView } from "./app/(dev)/lab/lane-view/_components/lab-lane-view";
 const name = new URLSearchParams(location.search).get("plan") ?? "demo64";
 createRoot(document.getElementById("root")!).render(<LabLaneView name={name} />);`,
       resolveDir: process.cwd(),

@@ -34,10 +34,10 @@ export BETTER_AUTH_SECRET="${BETTER_AUTH_SECRET:-$(cat .data/auth-secret)}"
 export BETTER_AUTH_URL="${BETTER_AUTH_URL:-http://localhost:$APP_PORT}"
 export SMTP_URL="${SMTP_URL:-smtp://127.0.0.1:$SMTP_PORT}"
 export MAIL_FROM="${MAIL_FROM:-Heterolane <no-reply@heterolane.local>}"
-export HETEROLANE_DEV_MAIL="${HETEROLANE_DEV_MAIL:-1}"
+export HETEROLANE_DEV_ROUTES="${HETEROLANE_DEV_ROUTES:-${HETEROLANE_DEV_MAIL:-1}}"
 
 node_modules/.bin/tsx db/migrate.ts
-node_modules/.bin/tsx --conditions=react-server db/seed.ts
+node_modules/.bin/tsx src/server/seed/run.ts
 ensure_build
 
 set -m

@@ -17,7 +17,7 @@ export BETTER_AUTH_SECRET="dev-secret-$NAME-0123456789abcdef0123456789"
 export BETTER_AUTH_URL="http://localhost:$APP_PORT"
 export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
 export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
-export HETEROLANE_DEV_MAIL=1
+export HETEROLANE_DEV_ROUTES=1
 export HETEROLANE_AUTH_RATE_LIMIT=off
 export NEXT_DIST_DIR=".next-$NAME"
 node_modules/.bin/tsx db/migrate.ts

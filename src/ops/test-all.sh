@@ -41,7 +41,7 @@ export BETTER_AUTH_SECRET="test-secret-$(node -e "console.log(require('crypto').
 export BETTER_AUTH_URL="http://localhost:$APP_PORT"
 export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
 export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
-export HETEROLANE_DEV_MAIL=1
+export HETEROLANE_DEV_ROUTES=1
 export HETEROLANE_AUTH_RATE_LIMIT=off
 export HETEROLANE_TEST_URL="http://localhost:$APP_PORT"
 

@@ -20,6 +20,7 @@ const EnvSchema = z.object({
   MAIL_FROM: nonEmpty("MAIL_FROM"),
   NODE_ENV: z.enum(["development", "production", "test"]).optional(),
   HETEROLANE_AUTH_RATE_LIMIT: z.enum(["on", "off"]).optional(),
+  HETEROLANE_DEV_ROUTES: z.enum(["0", "1"]).optional(),
   HETEROLANE_DEV_MAIL: z.enum(["0", "1"]).optional(),
 });
 
@@ -36,9 +37,4 @@ export function serverEnv(): ServerEnv {
   }
   cached = parsed.data;
   return cached;
-}
-
-/** The dev mail page and similar helpers: on outside production, or when HETEROLANE_DEV_MAIL=1. */
-export function devMailEnabled(): boolean {
-  return process.env.HETEROLANE_DEV_MAIL === "1" || process.env.NODE_ENV !== "production";
 }

@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { closeTestPool, makeTeamWithRoles, type TeamWithRoles } from "../setup/auth-helpers";
 import { call } from "../setup/workspace-helpers";
 import { pool } from "@db/client";
-import { seedDemoMission } from "@db/seed/mission-demo";
+import { seedDemoMission } from "@/server/seed/demo-mission";
 import { DEMO_MISSION_NAME, demoPlan } from "@db/seed/mission-demo-plan";
 import { parsePlan } from "@/schemas/plan";
 import { checkPlan } from "@/lib/plan";

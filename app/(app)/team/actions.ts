@@ -1,57 +1,58 @@
 "use server";
-import { parseWithZod } from "@conform-to/zod/v4";
 import { revalidatePath } from "next/cache";
-import { headers } from "next/headers";
 import { redirect } from "next/navigation";
-import { HttpError } from "@/server/http";
+import { z } from "zod";
+import { ChangeRoleSchema, InviteSchema, MemberIdSchema } from "@/schemas/auth";
+import { ANY_MEMBER, formAction, stateAction, type ActionState } from "@/server/core";
 import { cancelInvitation, changeMemberRole, inviteMember, leaveTeam, removeMember } from "@/server/team/service";
-import { InviteSchema } from "@/schemas/auth";
 
-export type ActionState = { error?: string; ok?: string } | undefined;
+export type { ActionState };
 
-export async function inviteAction(_prev: unknown, formData: FormData) {
-  const submission = parseWithZod(formData, { schema: InviteSchema });
-  if (submission.status !== "success") return submission.reply();
-  try {
-    await inviteMember(await headers(), submission.value);
-  } catch (err) {
-    if (!(err instanceof HttpError)) throw err;
-    if (err.issues?.length)
-      return submission.reply({ fieldErrors: Object.fromEntries(err.issues.map((i) => [i.path, [i.message]])) });
-    return submission.reply({ formErrors: [err.message] });
-  }
-  revalidatePath("/team");
-  redirect(`/team?invited=${encodeURIComponent(submission.value.email)}`);
-}
+export const inviteAction = formAction(
+  { access: { invitation: ["create"] }, what: "invite people", schema: InviteSchema },
+  async ({ actor, headers, value }) => {
+    await inviteMember(actor, headers, value);
+    revalidatePath("/team");
+    redirect(`/team?invited=${encodeURIComponent(value.email)}`);
+  },
+);
 
-async function run(fn: (h: Headers) => Promise<unknown>, ok: string): Promise<ActionState> {
-  try {
-    await fn(await headers());
-  } catch (err) {
-    if (err instanceof HttpError) return { error: err.message };
-    throw err;
-  }
-  revalidatePath("/team");
-  return { ok };
-}
+export const changeRoleAction = stateAction(
+  { access: { member: ["update"] }, what: "change roles", schema: ChangeRoleSchema },
+  async ({ actor, headers, value }) => {
+    await changeMemberRole(actor, headers, value);
+    revalidatePath("/team");
+    return { ok: "Role changed." };
+  },
+);
 
-export async function changeRoleAction(_prev: ActionState, formData: FormData): Promise<ActionState> {
-  return run(
-    (h) => changeMemberRole(h, { memberId: formData.get("memberId"), role: formData.get("role") }),
-    "Role changed.",
-  );
-}
+export const removeMemberAction = stateAction(
+  { access: { member: ["delete"] }, what: "remove members", schema: MemberIdSchema },
+  async ({ actor, headers, value }) => {
+    await removeMember(actor, headers, value);
+    revalidatePath("/team");
+    return { ok: "Member removed." };
+  },
+);
 
-export async function removeMemberAction(_prev: ActionState, formData: FormData): Promise<ActionState> {
-  return run((h) => removeMember(h, { memberId: formData.get("memberId") }), "Member removed.");
-}
+export const cancelInvitationAction = stateAction(
+  {
+    access: { invitation: ["cancel"] },
+    what: "cancel invitations",
+    schema: z.object({ invitationId: z.string({ error: "Invitation is missing." }).min(1, "Invitation is missing.") }),
+  },
+  async ({ actor, headers, value }) => {
+    await cancelInvitation(actor, headers, value);
+    revalidatePath("/team");
+    return { ok: "Invitation cancelled." };
+  },
+);
 
-export async function cancelInvitationAction(_prev: ActionState, formData: FormData): Promise<ActionState> {
-  return run((h) => cancelInvitation(h, { invitationId: formData.get("invitationId") }), "Invitation cancelled.");
-}
-
-export async function leaveTeamAction(_prev: ActionState, _formData: FormData): Promise<ActionState> {
-  const result = await run((h) => leaveTeam(h), "You left the team.");
-  if (result?.error) return result;
-  redirect("/teams/new");
-}
+export const leaveTeamAction = stateAction(
+  { access: ANY_MEMBER, what: "leave the team", schema: z.object({}) },
+  async ({ actor, headers }) => {
+    await leaveTeam(actor, headers);
+    revalidatePath("/team");
+    redirect("/teams/new");
+  },
+);

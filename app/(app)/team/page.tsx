@@ -20,8 +20,7 @@ export default async function TeamPage({
 }: {
   searchParams: Promise<Record<string, string | undefined>>;
 }) {
-  await requirePageActor("/team");
-  const { actor, team, members, invitations } = await getTeam(await headers());
+  const { actor, team, members, invitations } = await getTeam(await requirePageActor("/team"), await headers());
   const { invited } = await searchParams;
   // Controls shown per role; every action is checked again on the server.
   const canInvite = roleCan(actor.role, { invitation: ["create"] });

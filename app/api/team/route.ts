@@ -1,12 +1,8 @@
-import { errorResponse } from "@/server/http";
+import { ANY_MEMBER, guarded, json } from "@/server/core";
 import { getTeam } from "@/server/team/service";
 
 /** The active team: members with roles, pending invitations, and the caller's own role. */
-export async function GET(request: Request) {
-  try {
-    const { actor, team, members, invitations } = await getTeam(request.headers);
-    return Response.json({ team, role: actor.role, members, invitations });
-  } catch (err) {
-    return errorResponse(err);
-  }
-}
+export const GET = guarded(ANY_MEMBER, { what: "read the team" }, async ({ request, actor }) => {
+  const { team, members, invitations } = await getTeam(actor, request.headers);
+  return json({ team, role: actor.role, members, invitations });
+});

@@ -9,6 +9,7 @@ import { ac, roles } from "@/lib/permissions";
 import { serverEnv } from "@/server/env";
 import { listTeamsOf } from "./queries";
 import { existingAccountMail, invitationMail, resetPasswordMail, sendMail, verificationMail } from "@/server/mail";
+import { membershipAudit } from "@/server/team/membership-audit";
 
 /**
  * The one better-auth instance (docs/decisions/003-auth-and-roles.md).
@@ -70,6 +71,8 @@ export const auth = betterAuth({
       "/send-verification-email": { window: 60, max: 5 },
     },
   },
+  // Every membership change (over HTTP or through auth.api) writes its audit row.
+  hooks: { after: membershipAudit },
   databaseHooks: {
     session: {
       create: {

@@ -2,7 +2,7 @@ import "server-only";
 import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { auth } from "./auth";
-import { getActor } from "./guard";
+import { readActor } from "./guard";
 import type { Actor } from "./actor";
 
 /** The session of a signed-in page, or a redirect to /sign-in (coming back to `next` afterwards). */
@@ -13,12 +13,13 @@ export async function requireSessionPage(next = "/missions") {
 }
 
 /**
- * For pages of the signed-in app that work inside a team: the actor, or a
- * redirect to /sign-in (signed out) or /teams/new (no active team yet).
+ * For pages of the signed-in app that work inside a team: the actor (one
+ * session read), or a redirect to /sign-in (signed out) or /teams/new (no
+ * active team yet).
  */
 export async function requirePageActor(next = "/missions"): Promise<Actor> {
-  await requireSessionPage(next);
-  const actor = await getActor(await headers());
+  const { session, actor } = await readActor(await headers());
+  if (!session) redirect(`/sign-in?next=${encodeURIComponent(next)}`);
   if (!actor) redirect("/teams/new");
   return actor;
 }

@@ -48,3 +48,13 @@ export async function countOwners(teamId: string): Promise<number> {
     .where(and(eq(member.organizationId, teamId), eq(member.role, "owner")));
   return rows[0]?.n ?? 0;
 }
+
+/** The role of a user in a team (their member row), or null when they are not a member. */
+export async function memberRole(userId: string, teamId: string): Promise<string | null> {
+  const rows = await db
+    .select({ role: member.role })
+    .from(member)
+    .where(and(eq(member.userId, userId), eq(member.organizationId, teamId)))
+    .limit(1);
+  return rows[0]?.role ?? null;
+}

@@ -3,7 +3,7 @@ import { and, asc, eq } from "drizzle-orm";
 import { db } from "@db/client";
 import { findings, planRevisions } from "@db/schema";
 import { compareRevisions } from "@/lib/review";
-import { notFound } from "@/server/http";
+import { notFound } from "@/server/core/http";
 
 async function loadRevision(missionId: string, number: number) {
   const [r] = await db

@@ -2,7 +2,7 @@ import "server-only";
 import { and, eq, inArray } from "drizzle-orm";
 import { db } from "@db/client";
 import { member, notificationPreferences, user } from "@db/schema";
-import type { Queryable } from "@/server/workspace/tx";
+import type { Queryable } from "@/server/core/db";
 
 export interface TeamMember {
   userId: string;

@@ -2,9 +2,9 @@ import "server-only";
 import { desc, eq } from "drizzle-orm";
 import { db } from "@db/client";
 import { planRevisions } from "@db/schema";
-import { HttpError } from "@/server/http";
+import { HttpError } from "@/server/core/http";
 import { requirePageActor } from "@/server/auth/page-guard";
-import { getMissionRow } from "@/server/workspace/queries";
+import { getMissionRow } from "@/server/core/mission-scope";
 import { compareMissionRevisions } from "./compare";
 
 /**

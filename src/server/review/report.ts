@@ -4,9 +4,9 @@ import { db } from "@db/client";
 import { planRevisions } from "@db/schema";
 import { getActor } from "@/server/auth/guard";
 import { roleCan } from "@/lib/permissions";
-import { HttpError } from "@/server/http";
-import { getMissionRow } from "@/server/workspace/queries";
-import { getApproval } from "./service";
+import { HttpError } from "@/server/core/http";
+import { getMissionRow } from "@/server/core/mission-scope";
+import { getApproval } from "./overview";
 
 /** The approval of the mission's newest revision for the report page, or null (no revision, no access). */
 export async function approvalForReport(missionId: string) {

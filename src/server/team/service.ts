@@ -1,25 +1,20 @@
 import "server-only";
-import { z } from "zod";
-import { auth } from "@/server/auth/auth";
-import { requireActor } from "@/server/auth/guard";
-import { authError } from "@/server/auth/errors";
-import { HttpError, type Issue } from "@/server/http";
-import { ChangeRoleSchema, InviteSchema, MemberIdSchema } from "@/schemas/auth";
+import { randomBytes } from "node:crypto";
 import type { RoleName } from "@/lib/permissions";
+import { slugFromName } from "@/schemas/auth";
+import type { Actor } from "@/server/auth/actor";
+import { auth } from "@/server/auth/auth";
+import { authError } from "@/server/auth/errors";
+import { HttpError } from "@/server/core/http";
 
 /**
- * Team membership operations shared by the Team page's server actions and the
- * /api/team routes. Each one checks the caller's role in the active team
- * first (401/403 before any work); better-auth's organization plugin checks
- * the same statements again and guards the last owner.
+ * Team membership operations behind the /api/team routes and the team,
+ * invitation and team-creation server actions. The guards (src/server/core)
+ * have checked the caller's role before these run; better-auth's
+ * organization plugin checks the same statements again and guards the last
+ * owner. Each change is written to the activity log by the auth instance's
+ * after-hook (membership-audit.ts), whichever way it was made.
  */
-
-function parse<T>(schema: z.ZodType<T>, input: unknown): T {
-  const r = schema.safeParse(input);
-  if (r.success) return r.data;
-  const issues: Issue[] = r.error.issues.map((i) => ({ path: i.path.join("."), message: i.message }));
-  throw new HttpError(400, "invalid-input", issues.map((i) => `${i.path}: ${i.message}`).join("; "), issues);
-}
 
 const FRIENDLY: Record<string, [number, string]> = {
   USER_IS_ALREADY_A_MEMBER_OF_THIS_ORGANIZATION: [409, "This person is already a member of the team."],
@@ -43,20 +38,23 @@ const FRIENDLY: Record<string, [number, string]> = {
   INVITATION_LIMIT_REACHED: [409, "The team has too many pending invitations. Cancel some first."],
 };
 
-async function call<T>(fn: () => Promise<T>): Promise<T> {
+/** Runs a better-auth call; its refusals become HttpErrors (known codes with a plain message, `messages` first). */
+async function call<T>(fn: () => Promise<T>, messages: Record<string, string> = {}): Promise<T> {
   try {
     return await fn();
   } catch (err) {
     const e = authError(err);
     if (!e) throw err;
+    const code = e.code.toLowerCase().replace(/_/g, "-");
+    const own = messages[e.code];
+    if (own) throw new HttpError(e.status >= 400 && e.status < 500 ? e.status : 400, code, own);
     const known = FRIENDLY[e.code];
-    if (known) throw new HttpError(known[0], e.code.toLowerCase().replace(/_/g, "-"), known[1]);
+    if (known) throw new HttpError(known[0], code, known[1]);
     throw new HttpError(e.status >= 400 && e.status < 500 ? e.status : 400, "auth", e.message);
   }
 }
 
-export async function getTeam(h: Headers) {
-  const actor = await requireActor(h);
+export async function getTeam(actor: Actor, h: Headers) {
   const team = await call(() => auth.api.getFullOrganization({ query: { organizationId: actor.teamId }, headers: h }));
   if (!team) throw new HttpError(404, "not-found", "No such team.");
   return {
@@ -71,9 +69,7 @@ export async function getTeam(h: Headers) {
   };
 }
 
-export async function inviteMember(h: Headers, input: unknown) {
-  const value = parse(InviteSchema, input);
-  const actor = await requireActor(h, { invitation: ["create"] }, "invite people");
+export async function inviteMember(actor: Actor, h: Headers, value: { email: string; role: RoleName }) {
   if (value.role === "owner" && actor.role !== "owner")
     throw new HttpError(403, "forbidden", "Only an owner may invite someone as owner.");
   const inv = await call(() =>
@@ -85,9 +81,7 @@ export async function inviteMember(h: Headers, input: unknown) {
   return { id: inv.id, email: inv.email, role: inv.role, expiresAt: inv.expiresAt };
 }
 
-export async function changeMemberRole(h: Headers, input: unknown) {
-  const value = parse(ChangeRoleSchema, input);
-  const actor = await requireActor(h, { member: ["update"] }, "change roles");
+export async function changeMemberRole(actor: Actor, h: Headers, value: { memberId: string; role: RoleName }) {
   await call(() =>
     auth.api.updateMemberRole({
       body: { memberId: value.memberId, role: value.role, organizationId: actor.teamId },
@@ -97,25 +91,54 @@ export async function changeMemberRole(h: Headers, input: unknown) {
   return { memberId: value.memberId, role: value.role };
 }
 
-export async function removeMember(h: Headers, input: unknown) {
-  const value = parse(MemberIdSchema, input);
-  const actor = await requireActor(h, { member: ["delete"] }, "remove members");
+export async function removeMember(actor: Actor, h: Headers, value: { memberId: string }) {
   await call(() =>
     auth.api.removeMember({ body: { memberIdOrEmail: value.memberId, organizationId: actor.teamId }, headers: h }),
   );
   return { memberId: value.memberId };
 }
 
-export async function cancelInvitation(h: Headers, input: unknown) {
-  const value = parse(z.object({ invitationId: z.string().min(1, "Invitation is missing.") }), input);
-  await requireActor(h, { invitation: ["cancel"] }, "cancel invitations");
+export async function cancelInvitation(_actor: Actor, h: Headers, value: { invitationId: string }) {
   await call(() => auth.api.cancelInvitation({ body: { invitationId: value.invitationId }, headers: h }));
   return { invitationId: value.invitationId };
 }
 
 /** Leaves the active team. The last owner may not leave (409). */
-export async function leaveTeam(h: Headers) {
-  const actor = await requireActor(h);
+export async function leaveTeam(actor: Actor, h: Headers) {
   await call(() => auth.api.leaveOrganization({ body: { organizationId: actor.teamId }, headers: h }));
   return { teamId: actor.teamId };
+}
+
+/** Creates a team (the creator becomes its owner) and makes it the active one. */
+export async function createTeam(h: Headers, name: string) {
+  const team = await call(() =>
+    auth.api.createOrganization({
+      body: { name, slug: slugFromName(name, randomBytes(3).toString("hex")) },
+      headers: h,
+    }),
+  );
+  if (team) await switchTeam(h, team.id);
+  return team;
+}
+
+/** Makes a team the active one (better-auth checks membership). */
+export async function switchTeam(h: Headers, teamId: string) {
+  await call(() => auth.api.setActiveOrganization({ body: { organizationId: teamId }, headers: h }));
+}
+
+/** Accepts an invitation for the signed-in person and makes its team active; returns the team id. */
+export async function acceptInvitation(h: Headers, invitationId: string): Promise<string> {
+  const res = await call(() => auth.api.acceptInvitation({ body: { invitationId }, headers: h }), {
+    INVITATION_NOT_FOUND: "This invitation has expired or was already answered.",
+    YOU_ARE_NOT_THE_RECIPIENT_OF_THE_INVITATION:
+      "This invitation is for another e-mail address. Sign in with that address to accept it.",
+  });
+  if (!res) throw new HttpError(409, "not-accepted", "This invitation could not be accepted.");
+  await switchTeam(h, res.invitation.organizationId);
+  return res.invitation.organizationId;
+}
+
+/** Declines an invitation addressed to the signed-in person. */
+export async function declineInvitation(h: Headers, invitationId: string): Promise<void> {
+  await call(() => auth.api.rejectInvitation({ body: { invitationId }, headers: h }));
 }

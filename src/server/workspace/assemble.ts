@@ -4,8 +4,8 @@ import type { AnyPgColumn } from "drizzle-orm/pg-core";
 import { chains, channels, detectors, lasers, missions, planSettings, resonators } from "@db/schema";
 import type { PlanInput } from "@/schemas/plan";
 import { PLAN_FORMAT } from "@/schemas/plan";
-import { notFound } from "@/server/http";
-import type { Queryable } from "./tx";
+import type { Queryable } from "@/server/core/db";
+import { notFound } from "@/server/core/http";
 import { channelFigures } from "./mappers";
 
 /**

@@ -1,101 +1,65 @@
 import "server-only";
 import { and, asc, eq, sql } from "drizzle-orm";
 import { db } from "@db/client";
-import type { AnyPgColumn, PgTable } from "drizzle-orm/pg-core";
-import { chains, channels, detectors, lasers, resonators } from "@db/schema";
-import { entityCreateSchemas, entityUpdateSchemas, type EntityKind } from "@/schemas/workspace";
-import { HttpError, notFound } from "@/server/http";
+import { chains, channels } from "@db/schema";
+import type { EntityKind } from "@/schemas/workspace";
 import type { Actor } from "@/server/auth/actor";
-import { invalidInput, isUuid, mapDbError, parseOr400, staleVersion, zodIssues } from "./errors";
+import { inTransaction, mapDbError, type Queryable, type Tx } from "@/server/core/db";
+import { HttpError, invalidInput, notFound, staleVersion } from "@/server/core/http";
+import { isUuid, parseOr400 } from "@/server/core/input";
+import { getMissionRow, lockMission } from "@/server/core/mission-scope";
 import {
-  chainDto,
-  chainInputOf,
-  chainValues,
-  channelDto,
-  channelInputOf,
-  channelValues,
-  detectorDto,
-  detectorInputOf,
-  detectorValues,
-  laserDto,
-  laserInputOf,
-  laserValues,
-  resonatorDto,
-  resonatorInputOf,
-  resonatorValues,
-} from "./mappers";
-import { saveAndCheck, type RevisionInfo } from "./save-and-check";
-import { inTransaction, lockMission, type Queryable, type Tx } from "./tx";
-import { getMissionRow } from "./queries";
+  KINDS,
+  REFERENCES,
+  rowsOf,
+  type EntityInput,
+  type EntityPatch,
+  type EntityTable,
+  type Row,
+} from "./entity-kinds";
+import { saveAndCheck, type ActivityNote, type RevisionInfo } from "./save-and-check";
 import { assemblePlan } from "./assemble";
 
-/* eslint-disable @typescript-eslint/no-explicit-any -- one table-driven service for five entity kinds */
-type AnyRow = { id: string; key: string; version: number; missionId: string; position: number } & Record<string, any>;
-interface Kind {
-  singular: string;
-  table: PgTable & { id: AnyPgColumn; missionId: AnyPgColumn; version: AnyPgColumn; position: AnyPgColumn };
-  dto: (r: any) => Record<string, unknown>;
-  inputOf: (r: any) => Record<string, unknown>;
-  values: (i: any) => Record<string, unknown>;
-}
+/**
+ * One service for the five entity kinds of a mission (lasers, resonators,
+ * detectors, chains, channels): list, read, create, update (with version)
+ * and delete, each change re-checked through saveAndCheck. What differs per
+ * kind is in its typed spec (entity-kinds.ts).
+ */
 
-const KINDS: Record<EntityKind, Kind> = {
-  lasers: { singular: "laser", table: lasers, dto: laserDto, inputOf: laserInputOf, values: laserValues },
-  resonators: {
-    singular: "resonator",
-    table: resonators,
-    dto: resonatorDto,
-    inputOf: resonatorInputOf,
-    values: resonatorValues,
-  },
-  detectors: {
-    singular: "detector",
-    table: detectors,
-    dto: detectorDto,
-    inputOf: detectorInputOf,
-    values: detectorValues,
-  },
-  chains: { singular: "chain", table: chains, dto: chainDto, inputOf: chainInputOf, values: chainValues },
-  channels: { singular: "channel", table: channels, dto: channelDto, inputOf: channelInputOf, values: channelValues },
-};
+export type { EntityInput, EntityPatch };
+export { singularOf } from "./entity-kinds";
 
-export function singularOf(kind: EntityKind): string {
-  return KINDS[kind].singular;
-}
-
-async function findRow(q: Queryable, kind: EntityKind, missionId: string, id: string, lock: boolean): Promise<AnyRow> {
+async function findRow<K extends EntityKind>(
+  q: Queryable,
+  kind: K,
+  missionId: string,
+  id: string,
+  lock: boolean,
+): Promise<Row<K>> {
   const k = KINDS[kind];
   if (!isUuid(id)) throw notFound(k.singular);
+  const table: EntityTable = k.table;
   const base = q
     .select()
-    .from(k.table as any)
-    .where(and(eq(k.table.id, id), eq(k.table.missionId, missionId)));
-  const rows = (lock ? await base.for("update") : await base) as AnyRow[];
-  const row = rows[0];
+    .from(table)
+    .where(and(eq(table.id, id), eq(table.missionId, missionId)));
+  const [row] = rowsOf(k, lock ? await base.for("update") : await base);
   if (!row) throw notFound(k.singular);
   return row;
 }
 
 /** References of a chain or channel must be rows of the same mission. */
-async function checkReferences(tx: Tx, kind: EntityKind, missionId: string, input: Record<string, unknown>) {
-  const refs: [string, Kind][] =
-    kind === "chains"
-      ? [
-          ["laserId", KINDS.lasers],
-          ["resonatorId", KINDS.resonators],
-          ["detectorId", KINDS.detectors],
-        ]
-      : kind === "channels"
-        ? [["chainId", KINDS.chains]]
-        : [];
+async function checkReferences<K extends EntityKind>(tx: Tx, kind: K, missionId: string, input: EntityInput<K>) {
   const issues = [];
-  for (const [field, k] of refs) {
-    const id = String(input[field]);
+  for (const [field, target] of REFERENCES[kind]) {
+    const table: EntityTable = KINDS[target].table;
     const rows = await tx
-      .select({ id: k.table.id })
-      .from(k.table as any)
-      .where(and(eq(k.table.id, id), eq(k.table.missionId, missionId)));
-    if (rows.length === 0) issues.push({ path: field, message: `no ${k.singular} with this id in the mission` });
+      .select({ id: table.id })
+      .from(table)
+      .where(and(eq(table.id, String(input[field])), eq(table.missionId, missionId)));
+    if (rows.length === 0)
+      issues.push({ path: field, message: `no ${KINDS[target].singular} with this id in the mission` });
   }
   if (issues.length) throw invalidInput(issues);
 }
@@ -110,18 +74,19 @@ async function dependents(tx: Tx, kind: EntityKind, id: string): Promise<string[
   return (await tx.select({ key: chains.key }).from(chains).where(eq(col, id))).map((r) => `chain ${r.key}`);
 }
 
-export async function listEntities(actor: Actor, missionId: string, kind: EntityKind) {
+export async function listEntities<K extends EntityKind>(actor: Actor, missionId: string, kind: K) {
   await getMissionRow(actor, missionId);
   const k = KINDS[kind];
-  const rows = (await db
+  const table: EntityTable = k.table;
+  const rows = await db
     .select()
-    .from(k.table as any)
-    .where(eq(k.table.missionId, missionId))
-    .orderBy(asc(k.table.position), sql`created_at`)) as AnyRow[];
-  return rows.map(k.dto);
+    .from(table)
+    .where(eq(table.missionId, missionId))
+    .orderBy(asc(table.position), asc(table.createdAt));
+  return rowsOf(k, rows).map((r) => k.dto(r));
 }
 
-export async function getEntity(actor: Actor, missionId: string, kind: EntityKind, id: string) {
+export async function getEntity<K extends EntityKind>(actor: Actor, missionId: string, kind: K, id: string) {
   await getMissionRow(actor, missionId);
   return KINDS[kind].dto(await findRow(db, kind, missionId, id, false));
 }
@@ -141,20 +106,13 @@ const FORM_FIELD: Record<string, string> = {
  * → `laserId`) so a form can show them beside the field; issues about other
  * rows keep their plan-document path.
  */
-async function checkAfter(
-  tx: Tx,
-  missionId: string,
-  actor: Actor,
-  kind: EntityKind,
-  key: string,
-  note: Parameters<typeof saveAndCheck>[3],
-) {
+async function checkAfter(tx: Tx, missionId: string, actor: Actor, kind: EntityKind, key: string, note: ActivityNote) {
   try {
     return await saveAndCheck(tx, missionId, actor, note);
   } catch (e) {
     if (!(e instanceof HttpError) || e.code !== "invalid-plan" || !e.issues) throw e;
     const plan = await assemblePlan(tx, missionId);
-    const index = (plan[kind] as { id: string }[]).findIndex((r) => r.id === key);
+    const index = plan[kind].findIndex((r) => r.id === key);
     const prefix = `${kind}[${index}].`;
     const issues = e.issues.map((i) => {
       if (index < 0 || !i.path.startsWith(prefix)) return i;
@@ -166,33 +124,31 @@ async function checkAfter(
   }
 }
 
-export type MutationResult = { entity: Record<string, unknown>; revision: RevisionInfo };
+export type MutationResult = { entity: { id: string; key: string; version: number }; revision: RevisionInfo };
 
-export async function createEntity(
+export async function createEntity<K extends EntityKind>(
   actor: Actor,
   missionId: string,
-  kind: EntityKind,
-  body: unknown,
+  kind: K,
+  input: EntityInput<K>,
 ): Promise<MutationResult> {
   const k = KINDS[kind];
-  const input = parseOr400(entityCreateSchemas[kind], body, k.singular) as Record<string, unknown>;
+  const table: EntityTable = k.table;
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
     await checkReferences(tx, kind, missionId, input);
     const [{ next } = { next: 0 }] = await tx
-      .select({ next: sql<number>`coalesce(max(${k.table.position}), -1) + 1` })
-      .from(k.table as any)
-      .where(eq(k.table.missionId, missionId));
-    let row: AnyRow;
+      .select({ next: sql<number>`coalesce(max(${table.position}), -1) + 1` })
+      .from(table)
+      .where(eq(table.missionId, missionId));
+    const values: EntityTable["$inferInsert"] = { ...k.values(input), missionId, position: Number(next) };
+    let row: Row<K> | undefined;
     try {
-      const inserted = (await tx
-        .insert(k.table)
-        .values({ ...k.values(input), missionId, position: Number(next) } as any)
-        .returning()) as AnyRow[];
-      row = inserted[0] as AnyRow;
+      [row] = rowsOf(k, await tx.insert(table).values(values).returning());
     } catch (e) {
       throw mapDbError(e, k.singular);
     }
+    if (!row) throw new Error(`${k.singular} insert returned no row`);
     const revision = await checkAfter(tx, missionId, actor, kind, row.key, {
       action: "create",
       entity: `${k.singular} ${row.key}`,
@@ -202,40 +158,44 @@ export async function createEntity(
   });
 }
 
-export async function updateEntity(
+export async function updateEntity<K extends EntityKind>(
   actor: Actor,
   missionId: string,
-  kind: EntityKind,
+  kind: K,
   id: string,
-  body: unknown,
+  patch: EntityPatch<K>,
 ): Promise<MutationResult> {
   const k = KINDS[kind];
-  const patch = parseOr400(entityUpdateSchemas[kind], body, `${k.singular} update`) as Record<string, unknown>;
+  const table: EntityTable = k.table;
   const { version, ...changes } = patch;
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
     const current = await findRow(tx, kind, missionId, id, true);
     if (current.version !== version) throw staleVersion(k.dto(current), k.singular);
-    const merged = { ...k.inputOf(current), ...changes };
-    const parsed = entityCreateSchemas[kind].safeParse(merged);
-    if (!parsed.success) throw invalidInput(zodIssues(parsed.error), `The ${k.singular} is not valid.`);
-    const input = parsed.data as Record<string, unknown>;
+    const before: Record<string, unknown> = k.inputOf(current);
+    const input = parseOr400(k.schema, { ...before, ...changes }, k.singular);
     await checkReferences(tx, kind, missionId, input);
-    let row: AnyRow;
+    const values: Partial<EntityTable["$inferInsert"]> = {
+      ...k.values(input),
+      version: current.version + 1,
+      updatedAt: new Date(),
+    };
+    let row: Row<K> | undefined;
     try {
-      const updated = (await tx
-        .update(k.table)
-        .set({ ...k.values(input), version: current.version + 1, updatedAt: new Date() } as any)
-        .where(and(eq(k.table.id, id), eq(k.table.version, current.version)))
-        .returning()) as AnyRow[];
-      if (!updated[0]) throw staleVersion(k.dto(current), k.singular);
-      row = updated[0];
+      [row] = rowsOf(
+        k,
+        await tx
+          .update(table)
+          .set(values)
+          .where(and(eq(table.id, id), eq(table.version, current.version)))
+          .returning(),
+      );
     } catch (e) {
       throw mapDbError(e, k.singular);
     }
-    const fields = Object.keys(changes).filter(
-      (f) => JSON.stringify(k.inputOf(current)[f]) !== JSON.stringify((input as Record<string, unknown>)[f]),
-    );
+    if (!row) throw staleVersion(k.dto(current), k.singular);
+    const after: Record<string, unknown> = input;
+    const fields = Object.keys(changes).filter((f) => JSON.stringify(before[f]) !== JSON.stringify(after[f]));
     const revision = await checkAfter(tx, missionId, actor, kind, row.key, {
       action: "update",
       entity: `${k.singular} ${row.key}`,
@@ -247,14 +207,15 @@ export async function updateEntity(
   });
 }
 
-export async function deleteEntity(
+export async function deleteEntity<K extends EntityKind>(
   actor: Actor,
   missionId: string,
-  kind: EntityKind,
+  kind: K,
   id: string,
   version: number,
 ): Promise<{ revision: RevisionInfo }> {
   const k = KINDS[kind];
+  const table: EntityTable = k.table;
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
     const current = await findRow(tx, kind, missionId, id, true);
@@ -266,7 +227,7 @@ export async function deleteEntity(
         "in-use",
         `${k.singular[0]!.toUpperCase()}${k.singular.slice(1)} ${current.key} is used by ${users.join(", ")}; remove or re-point them first.`,
       );
-    await tx.delete(k.table).where(eq(k.table.id, id));
+    await tx.delete(table).where(eq(table.id, id));
     const revision = await saveAndCheck(tx, missionId, actor, {
       action: "delete",
       entity: `${k.singular} ${current.key}`,

@@ -1,42 +1,47 @@
 import "server-only";
-import { deleteQuerySchema, type EntityKind } from "@/schemas/workspace";
-import { createEntity, deleteEntity, getEntity, listEntities, updateEntity } from "./entities";
-import { parseOr400 } from "./errors";
-import { CAN, guarded, json, readJsonBody } from "./route";
+import { deleteQuerySchema, entityCreateSchemas, entityUpdateSchemas, type EntityKind } from "@/schemas/workspace";
+import { guarded } from "@/server/core/guard";
+import { json } from "@/server/core/http";
+import { CAN } from "./can";
+import { createEntity, deleteEntity, getEntity, listEntities, singularOf, updateEntity } from "./entities";
 
 /** Handlers of `/api/v1/missions/{missionId}/{kind}`: list and create. */
 export function collectionRoutes(kind: EntityKind) {
   return {
-    GET: guarded<"missionId">(CAN.read, `read ${kind}`, async ({ actor, params }) =>
+    GET: guarded(CAN.read, { what: `read ${kind}`, params: ["missionId"] }, async ({ actor, params }) =>
       json({ [kind]: await listEntities(actor, params.missionId, kind) }),
     ),
-    POST: guarded<"missionId">(CAN.edit, `add ${kind}`, async ({ request, actor, params }) => {
-      const { entity, revision } = await createEntity(actor, params.missionId, kind, await readJsonBody(request));
-      return json({ ...entity, revision }, 201);
-    }),
+    POST: guarded(
+      CAN.edit,
+      { what: `add ${kind}`, params: ["missionId"], body: entityCreateSchemas[kind], input: singularOf(kind) },
+      async ({ actor, params, body }) => {
+        const { entity, revision } = await createEntity(actor, params.missionId, kind, body);
+        return json({ ...entity, revision }, 201);
+      },
+    ),
   };
 }
 
 /** Handlers of `/api/v1/missions/{missionId}/{kind}/{id}`: read, update (with version), delete (with ?version=). */
 export function itemRoutes(kind: EntityKind) {
-  type P = "missionId" | "id";
+  const params = ["missionId", "id"] as const;
   return {
-    GET: guarded<P>(CAN.read, `read ${kind}`, async ({ actor, params }) =>
+    GET: guarded(CAN.read, { what: `read ${kind}`, params }, async ({ actor, params }) =>
       json(await getEntity(actor, params.missionId, kind, params.id)),
     ),
-    PATCH: guarded<P>(CAN.edit, `change ${kind}`, async ({ request, actor, params }) => {
-      const { entity, revision } = await updateEntity(
-        actor,
-        params.missionId,
-        kind,
-        params.id,
-        await readJsonBody(request),
-      );
-      return json({ ...entity, revision });
-    }),
-    DELETE: guarded<P>(CAN.edit, `remove ${kind}`, async ({ actor, params, query }) => {
-      const { version } = parseOr400(deleteQuerySchema, query, "query");
-      return json({ deleted: params.id, ...(await deleteEntity(actor, params.missionId, kind, params.id, version)) });
-    }),
+    PATCH: guarded(
+      CAN.edit,
+      { what: `change ${kind}`, params, body: entityUpdateSchemas[kind], input: `${singularOf(kind)} update` },
+      async ({ actor, params, body }) => {
+        const { entity, revision } = await updateEntity(actor, params.missionId, kind, params.id, body);
+        return json({ ...entity, revision });
+      },
+    ),
+    DELETE: guarded(
+      CAN.edit,
+      { what: `remove ${kind}`, params, query: deleteQuerySchema, input: "query" },
+      async ({ actor, params, query }) =>
+        json({ deleted: params.id, ...(await deleteEntity(actor, params.missionId, kind, params.id, query.version)) }),
+    ),
   };
 }

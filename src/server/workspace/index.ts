@@ -5,4 +5,4 @@ export * from "./plan-io";
 export * from "./uploads";
 export { saveAndCheck, type ActivityNote, type RevisionInfo } from "./save-and-check";
 export { assemblePlan } from "./assemble";
-export { CAN, guarded, json, readJsonBody } from "./route";
+export { CAN } from "./can";

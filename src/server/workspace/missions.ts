@@ -1,17 +1,23 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import { activity, missions, planSettings } from "@db/schema";
-import { DEFAULT_SETTINGS, missionCreateSchema, missionUpdateSchema, settingsUpdateSchema } from "@/schemas/workspace";
+import { missions, planSettings } from "@db/schema";
+import {
+  DEFAULT_SETTINGS,
+  type MissionCreateInput,
+  type MissionUpdateInput,
+  type SettingsUpdateInput,
+} from "@/schemas/workspace";
 import type { Actor } from "@/server/auth/actor";
-import { parseOr400, staleVersion } from "./errors";
+import { writeActivity } from "@/server/core/activity";
+import { inTransaction, type Tx } from "@/server/core/db";
+import { staleVersion } from "@/server/core/http";
+import { lockMission } from "@/server/core/mission-scope";
 import { missionDto, settingsDto } from "./mappers";
 import { getMission } from "./queries";
 import { saveAndCheck } from "./save-and-check";
-import { inTransaction, lockMission, type Tx } from "./tx";
 
 /** Creates a mission with default plan settings and its first (empty) revision. */
-export async function createMission(actor: Actor, body: unknown) {
-  const input = parseOr400(missionCreateSchema, body, "mission");
+export async function createMission(actor: Actor, input: MissionCreateInput) {
   return inTransaction((tx) => createMissionIn(tx, actor, input.name, input.description ?? ""));
 }
 
@@ -30,8 +36,8 @@ export async function createMissionIn(tx: Tx, actor: Actor, name: string, descri
   return { ...missionDto(m, "draft"), revision };
 }
 
-export async function updateMission(actor: Actor, missionId: string, body: unknown) {
-  const { version, ...changes } = parseOr400(missionUpdateSchema, body, "mission update");
+export async function updateMission(actor: Actor, missionId: string, input: MissionUpdateInput) {
+  const { version, ...changes } = input;
   return inTransaction(async (tx) => {
     const current = await lockMission(tx, actor, missionId);
     if (current.version !== version) throw staleVersion(await getMission(actor, missionId, tx), "mission");
@@ -40,9 +46,7 @@ export async function updateMission(actor: Actor, missionId: string, body: unkno
       .set({ ...changes, version: current.version + 1, updatedAt: new Date() })
       .where(eq(missions.id, missionId))
       .returning();
-    const fields = Object.keys(changes).filter(
-      (k) => (changes as Record<string, unknown>)[k] !== (current as Record<string, unknown>)[k],
-    );
+    const fields = (Object.keys(changes) as (keyof typeof changes)[]).filter((k) => changes[k] !== current[k]);
     const revision = await saveAndCheck(tx, missionId, actor, {
       action: "update",
       entity: `mission ${m!.name}`,
@@ -59,11 +63,8 @@ export async function deleteMission(actor: Actor, missionId: string, version: nu
     if (version !== undefined && current.version !== version)
       throw staleVersion(await getMission(actor, missionId, tx), "mission");
     await tx.delete(missions).where(and(eq(missions.id, missionId), eq(missions.teamId, actor.teamId)));
-    await tx.insert(activity).values({
-      teamId: actor.teamId,
+    await writeActivity(tx, actor, {
       missionId: null,
-      actorId: actor.userId,
-      actorName: actor.name,
       action: "delete",
       entity: `mission ${current.name}`,
       summary: `Deleted mission ${current.name} (${missionId}) and all its revisions.`,
@@ -72,8 +73,8 @@ export async function deleteMission(actor: Actor, missionId: string, version: nu
   });
 }
 
-export async function updateSettings(actor: Actor, missionId: string, body: unknown) {
-  const { version, ...values } = parseOr400(settingsUpdateSchema, body, "settings");
+export async function updateSettings(actor: Actor, missionId: string, input: SettingsUpdateInput) {
+  const { version, ...values } = input;
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
     const [current] = await tx.select().from(planSettings).where(eq(planSettings.missionId, missionId)).for("update");

@@ -3,12 +3,12 @@ import { eq } from "drizzle-orm";
 import { db } from "@db/client";
 import { chains, channels, detectors, lasers, missions, planSettings, resonators } from "@db/schema";
 import { parsePlan, type Plan } from "@/schemas/plan";
-import { HttpError } from "@/server/http";
 import type { Actor } from "@/server/auth/actor";
+import { inTransaction, type Queryable, type Tx } from "@/server/core/db";
+import { HttpError } from "@/server/core/http";
+import { getMissionRow, lockMission } from "@/server/core/mission-scope";
 import { assemblePlan } from "./assemble";
-import { getMissionRow } from "./queries";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
-import { inTransaction, lockMission, type Queryable, type Tx } from "./tx";
 import { channelFigures } from "./mappers";
 
 /**

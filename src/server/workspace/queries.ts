@@ -13,12 +13,12 @@ import {
   planRevisions,
   planSettings,
   resonators,
-  type Mission,
 } from "@db/schema";
 import type { FindingsQuery } from "@/schemas/workspace";
-import { notFound } from "@/server/http";
 import type { Actor } from "@/server/auth/actor";
-import { isUuid } from "./errors";
+import type { Queryable } from "@/server/core/db";
+import { notFound } from "@/server/core/http";
+import { getMissionRow } from "@/server/core/mission-scope";
 import {
   chainDto,
   channelDto,
@@ -29,20 +29,8 @@ import {
   resonatorDto,
   settingsDto,
 } from "./mappers";
-import type { Queryable } from "./tx";
 
 /** Named read queries of the workspace. Every one is scoped to the actor's team. */
-
-/** The mission of the actor's team, or 404 (also for another team's mission). */
-export async function getMissionRow(actor: Actor, missionId: string, q: Queryable = db): Promise<Mission> {
-  if (!isUuid(missionId)) throw notFound("mission");
-  const [m] = await q
-    .select()
-    .from(missions)
-    .where(and(eq(missions.id, missionId), eq(missions.teamId, actor.teamId)));
-  if (!m) throw notFound("mission");
-  return m;
-}
 
 async function latestStatus(q: Queryable, missionId: string): Promise<string> {
   const [r] = await q

@@ -1,22 +1,25 @@
 import "server-only";
 import { eq, sql } from "drizzle-orm";
-import { activity, findings, missions, planRevisions } from "@db/schema";
+import { findings, missions, planRevisions } from "@db/schema";
 import { parsePlan } from "@/schemas/plan";
 import { checkPlan, type ResultDocument } from "@/lib/plan";
-import { HttpError } from "@/server/http";
 import type { Actor } from "@/server/auth/actor";
-import { onPlanEdited } from "@/server/review/on-plan-edited";
+import { writeActivity, type ActivityEntry } from "@/server/core/activity";
+import type { Tx } from "@/server/core/db";
+import { HttpError } from "@/server/core/http";
+import type { PlanEvents } from "@/server/core/plan-events";
+import { reviewPlanEvents } from "@/server/review/plan-events";
 import { assemblePlan } from "./assemble";
-import type { Tx } from "./tx";
 
-export interface ActivityNote {
-  /** create | update | delete | import | upload | settings | … */
-  action: string;
-  /** What was touched, e.g. "channel wv1", "laser LP1", "plan". */
-  entity: string;
-  /** One line for people. */
-  summary: string;
-}
+/**
+ * Who hears of every stored plan change (the contract is in
+ * src/server/core/plan-events.ts). Review's module is the only one of
+ * review the workspace imports; review imports nothing of the workspace.
+ */
+const PLAN_LISTENERS: readonly PlanEvents[] = [reviewPlanEvents];
+
+/** What a change did, for its activity row (src/server/core/activity.ts). */
+export type ActivityNote = Pick<ActivityEntry, "action" | "entity" | "summary">;
 
 export interface RevisionInfo {
   number: number;
@@ -51,8 +54,8 @@ export async function saveAndCheck(tx: Tx, missionId: string, actor: Actor, note
     .where(eq(planRevisions.missionId, missionId));
   const before = max === null ? null : Number(max);
   const number = (before ?? 0) + 1;
-  // Review: a revision is never modified; an edit during a review withdraws it (src/server/review).
-  await onPlanEdited(tx, missionId, actor);
+  // A revision is never modified; listeners may react to the edit (review withdraws an open review).
+  for (const l of PLAN_LISTENERS) await l.planEdited({ tx, missionId, actor });
   const info: RevisionInfo = {
     number,
     errorCount: count("error"),
@@ -89,17 +92,7 @@ export async function saveAndCheck(tx: Tx, missionId: string, actor: Actor, note
         data: f.data,
       })),
     );
-  await tx.insert(activity).values({
-    teamId: actor.teamId,
-    missionId,
-    actorId: actor.userId,
-    actorName: actor.name,
-    action: note.action,
-    entity: note.entity,
-    summary: note.summary,
-    revisionBefore: before,
-    revisionAfter: number,
-  });
+  await writeActivity(tx, actor, { missionId, ...note, revisionBefore: before, revisionAfter: number });
   await tx.update(missions).set({ updatedAt: new Date() }).where(eq(missions.id, missionId));
   return info;
 }

@@ -5,12 +5,12 @@ import { db } from "@db/client";
 import { chains, channels, detectors, lasers, uploads } from "@db/schema";
 import { decodeUtf8, parseChannelCsv, parseDetectorResponse, parseTuningMap, type FileIssue } from "@/lib/imports";
 import { UPLOAD_MAX_BYTES, type DetectorResponseQuery, type TuningMapQuery } from "@/schemas/workspace";
-import { HttpError, notFound, type Issue } from "@/server/http";
 import type { Actor } from "@/server/auth/actor";
+import { inTransaction, type Tx } from "@/server/core/db";
+import { HttpError, notFound, type Issue } from "@/server/core/http";
+import { getMissionRow, lockMission } from "@/server/core/mission-scope";
 import { detectorDto, laserDto } from "./mappers";
-import { getMissionRow } from "./queries";
 import { saveAndCheck } from "./save-and-check";
-import { inTransaction, lockMission, type Tx } from "./tx";
 
 export interface UploadedFile {
   filename: string;

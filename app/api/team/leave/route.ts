@@ -1,11 +1,7 @@
-import { errorResponse } from "@/server/http";
+import { ANY_MEMBER, guarded, json } from "@/server/core";
 import { leaveTeam } from "@/server/team/service";
 
 /** Leaves the active team; the last owner gets 409. */
-export async function POST(request: Request) {
-  try {
-    return Response.json(await leaveTeam(request.headers));
-  } catch (err) {
-    return errorResponse(err);
-  }
-}
+export const POST = guarded(ANY_MEMBER, { what: "leave the team" }, async ({ request, actor }) =>
+  json(await leaveTeam(actor, request.headers)),
+);

@@ -1,9 +1,13 @@
-import { CAN, createMission, guarded, json, listMissions, readJsonBody } from "@/server/workspace";
+import { missionCreateSchema } from "@/schemas/workspace";
+import { guarded, json } from "@/server/core";
+import { CAN, createMission, listMissions } from "@/server/workspace";
 
-export const GET = guarded(CAN.read, "read missions", async ({ actor }) =>
+export const GET = guarded(CAN.read, { what: "read missions" }, async ({ actor }) =>
   json({ missions: await listMissions(actor) }),
 );
 
-export const POST = guarded(CAN.createMission, "create missions", async ({ request, actor }) =>
-  json(await createMission(actor, await readJsonBody(request)), 201),
+export const POST = guarded(
+  CAN.createMission,
+  { what: "create missions", body: missionCreateSchema, input: "mission" },
+  async ({ actor, body }) => json(await createMission(actor, body), 201),
 );

@@ -1,11 +1,10 @@
-import { errorResponse } from "@/server/http";
+import { guarded, json } from "@/server/core";
 import { cancelInvitation } from "@/server/team/service";
 
-export async function DELETE(request: Request, { params }: { params: Promise<{ id: string }> }) {
-  try {
-    const { id } = await params;
-    return Response.json(await cancelInvitation(request.headers, { invitationId: id }));
-  } catch (err) {
-    return errorResponse(err);
-  }
-}
+/** Cancels a pending invitation. */
+export const DELETE = guarded(
+  { invitation: ["cancel"] },
+  { what: "cancel invitations", params: ["id"] },
+  async ({ request, actor, params }) =>
+    json(await cancelInvitation(actor, request.headers, { invitationId: params.id })),
+);

@@ -1,24 +1,26 @@
-import { errorResponse, readJsonBody } from "@/server/http";
+import { ChangeRoleSchema } from "@/schemas/auth";
+import { guarded, json } from "@/server/core";
 import { changeMemberRole, removeMember } from "@/server/team/service";
 
+const params = ["memberId"] as const;
+
 /** Changes a member's role (owner only). Body: { role }. */
-export async function PATCH(request: Request, { params }: { params: Promise<{ memberId: string }> }) {
-  try {
-    const { memberId } = await params;
-    const body = await readJsonBody(request, 10_000);
-    const role = typeof body === "object" && body !== null ? (body as { role?: unknown }).role : undefined;
-    return Response.json(await changeMemberRole(request.headers, { memberId, role }));
-  } catch (err) {
-    return errorResponse(err);
-  }
-}
+export const PATCH = guarded(
+  { member: ["update"] },
+  {
+    what: "change roles",
+    params,
+    body: ChangeRoleSchema.pick({ role: true }),
+    bodyLimit: 10_000,
+    input: "role change",
+  },
+  async ({ request, actor, params, body }) =>
+    json(await changeMemberRole(actor, request.headers, { memberId: params.memberId, role: body.role })),
+);
 
 /** Removes a member from the team (owner only; never the last owner). */
-export async function DELETE(request: Request, { params }: { params: Promise<{ memberId: string }> }) {
-  try {
-    const { memberId } = await params;
-    return Response.json(await removeMember(request.headers, { memberId }));
-  } catch (err) {
-    return errorResponse(err);
-  }
-}
+export const DELETE = guarded(
+  { member: ["delete"] },
+  { what: "remove members", params },
+  async ({ request, actor, params }) => json(await removeMember(actor, request.headers, { memberId: params.memberId })),
+);

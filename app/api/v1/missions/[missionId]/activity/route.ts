@@ -1,6 +1,11 @@
-import { CAN, getMissionRow, guarded, json, listActivity } from "@/server/workspace";
+import { getMissionRow, guarded, json } from "@/server/core";
+import { CAN, listActivity } from "@/server/workspace";
 
-export const GET = guarded<"missionId">(CAN.audit, "read the activity log", async ({ actor, params }) => {
-  const m = await getMissionRow(actor, params.missionId);
-  return json({ activity: await listActivity(m.id) });
-});
+export const GET = guarded(
+  CAN.audit,
+  { what: "read the activity log", params: ["missionId"] },
+  async ({ actor, params }) => {
+    const m = await getMissionRow(actor, params.missionId);
+    return json({ activity: await listActivity(m.id) });
+  },
+);

@@ -1,10 +1,12 @@
-import { getMissionRow, guarded, json } from "@/server/workspace";
-import { parseOr400 } from "@/server/workspace/errors";
-import { compareMissionRevisions } from "@/server/review";
 import { compareQuerySchema } from "@/schemas/review";
+import { getMissionRow, guarded, json } from "@/server/core";
+import { compareMissionRevisions } from "@/server/review";
 
-export const GET = guarded<"missionId">({ plan: ["read"] }, "compare revisions", async ({ actor, params, query }) => {
-  const m = await getMissionRow(actor, params.missionId);
-  const q = parseOr400(compareQuerySchema, { from: query.from, to: query.to }, "comparison");
-  return json(await compareMissionRevisions(m.id, q.from, q.to));
-});
+export const GET = guarded(
+  { plan: ["read"] },
+  { what: "compare revisions", params: ["missionId"], query: compareQuerySchema, input: "comparison" },
+  async ({ actor, params, query }) => {
+    const m = await getMissionRow(actor, params.missionId);
+    return json(await compareMissionRevisions(m.id, query.from, query.to));
+  },
+);

@@ -1,9 +1,12 @@
 import { findingsQuerySchema } from "@/schemas/workspace";
-import { CAN, getMissionRow, guarded, json, listFindings } from "@/server/workspace";
-import { parseOr400 } from "@/server/workspace/errors";
+import { getMissionRow, guarded, json } from "@/server/core";
+import { CAN, listFindings } from "@/server/workspace";
 
-export const GET = guarded<"missionId">(CAN.read, "read findings", async ({ actor, params, query }) => {
-  const filter = parseOr400(findingsQuerySchema, query, "findings filter");
-  const m = await getMissionRow(actor, params.missionId);
-  return json(await listFindings(m.id, filter));
-});
+export const GET = guarded(
+  CAN.read,
+  { what: "read findings", params: ["missionId"], query: findingsQuerySchema, input: "findings filter" },
+  async ({ actor, params, query }) => {
+    const m = await getMissionRow(actor, params.missionId);
+    return json(await listFindings(m.id, query));
+  },
+);

@@ -1,6 +1,7 @@
-import { CAN, getMissionRow, guarded, json, listRevisions } from "@/server/workspace";
+import { getMissionRow, guarded, json } from "@/server/core";
+import { CAN, listRevisions } from "@/server/workspace";
 
-export const GET = guarded<"missionId">(CAN.read, "read revisions", async ({ actor, params }) => {
+export const GET = guarded(CAN.read, { what: "read revisions", params: ["missionId"] }, async ({ actor, params }) => {
   const m = await getMissionRow(actor, params.missionId);
   return json({ revisions: await listRevisions(m.id) });
 });

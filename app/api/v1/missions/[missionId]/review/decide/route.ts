@@ -1,13 +1,9 @@
-import { guarded, json, readJsonBody } from "@/server/workspace";
-import { parseOr400 } from "@/server/workspace/errors";
-import { decideReview } from "@/server/review";
 import { decideReviewSchema } from "@/schemas/review";
+import { guarded, json } from "@/server/core";
+import { decideReview } from "@/server/review";
 
-export const POST = guarded<"missionId">(
+export const POST = guarded(
   { review: ["decide"] },
-  "decide a review",
-  async ({ request, actor, params }) => {
-    const body = parseOr400(decideReviewSchema, await readJsonBody(request, 20_000), "decision");
-    return json(await decideReview(actor, params.missionId, body));
-  },
+  { what: "decide a review", params: ["missionId"], body: decideReviewSchema, bodyLimit: 20_000, input: "decision" },
+  async ({ actor, params, body }) => json(await decideReview(actor, params.missionId, body)),
 );

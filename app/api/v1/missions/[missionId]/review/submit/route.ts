@@ -1,13 +1,15 @@
-import { guarded, json, readJsonBody } from "@/server/workspace";
-import { parseOr400 } from "@/server/workspace/errors";
-import { submitReview } from "@/server/review";
 import { submitReviewSchema } from "@/schemas/review";
+import { guarded, json } from "@/server/core";
+import { submitReview } from "@/server/review";
 
-export const POST = guarded<"missionId">(
+export const POST = guarded(
   { review: ["submit"] },
-  "submit a plan for review",
-  async ({ request, actor, params }) => {
-    const body = parseOr400(submitReviewSchema, await readJsonBody(request, 20_000), "submission");
-    return json(await submitReview(actor, params.missionId, body));
+  {
+    what: "submit a plan for review",
+    params: ["missionId"],
+    body: submitReviewSchema,
+    bodyLimit: 20_000,
+    input: "submission",
   },
+  async ({ actor, params, body }) => json(await submitReview(actor, params.missionId, body)),
 );

@@ -1,18 +1,16 @@
-import { getMissionRow, guarded, json, readJsonBody } from "@/server/workspace";
-import { parseOr400 } from "@/server/workspace/errors";
-import { createWaiver, listWaivers } from "@/server/review";
 import { createWaiverSchema } from "@/schemas/review";
+import { getMissionRow, guarded, json } from "@/server/core";
+import { createWaiver, listWaivers } from "@/server/review";
 
-export const GET = guarded<"missionId">({ review: ["read"] }, "read waivers", async ({ actor, params }) => {
+const params = ["missionId"] as const;
+
+export const GET = guarded({ review: ["read"] }, { what: "read waivers", params }, async ({ actor, params }) => {
   const m = await getMissionRow(actor, params.missionId);
   return json({ waivers: await listWaivers(m.id) });
 });
 
-export const POST = guarded<"missionId">(
+export const POST = guarded(
   { review: ["waive"] },
-  "record a waiver",
-  async ({ request, actor, params }) => {
-    const body = parseOr400(createWaiverSchema, await readJsonBody(request, 20_000), "waiver");
-    return json(await createWaiver(actor, params.missionId, body), 201);
-  },
+  { what: "record a waiver", params, body: createWaiverSchema, bodyLimit: 20_000, input: "waiver" },
+  async ({ actor, params, body }) => json(await createWaiver(actor, params.missionId, body), 201),
 );

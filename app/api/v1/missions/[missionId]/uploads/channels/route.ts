@@ -1,10 +1,13 @@
 import { channelsUploadQuerySchema } from "@/schemas/workspace";
-import { CAN, getMissionRow, guarded, json, readUploadedFile, uploadChannels } from "@/server/workspace";
-import { parseOr400 } from "@/server/workspace/errors";
+import { getMissionRow, guarded, json } from "@/server/core";
+import { CAN, readUploadedFile, uploadChannels } from "@/server/workspace";
 
-export const POST = guarded<"missionId">(CAN.import, "upload files", async ({ request, actor, params, query }) => {
-  await getMissionRow(actor, params.missionId);
-  const q = parseOr400(channelsUploadQuerySchema, query, "query");
-  const file = await readUploadedFile(request);
-  return json(await uploadChannels(actor, params.missionId, q.apply, file));
-});
+export const POST = guarded(
+  CAN.import,
+  { what: "upload files", params: ["missionId"], query: channelsUploadQuerySchema, input: "query" },
+  async ({ request, actor, params, query }) => {
+    await getMissionRow(actor, params.missionId);
+    const file = await readUploadedFile(request);
+    return json(await uploadChannels(actor, params.missionId, query.apply, file));
+  },
+);

@@ -1,10 +1,13 @@
 import { detectorResponseQuerySchema } from "@/schemas/workspace";
-import { CAN, getMissionRow, guarded, json, readUploadedFile, uploadDetectorResponse } from "@/server/workspace";
-import { parseOr400 } from "@/server/workspace/errors";
+import { getMissionRow, guarded, json } from "@/server/core";
+import { CAN, readUploadedFile, uploadDetectorResponse } from "@/server/workspace";
 
-export const POST = guarded<"missionId">(CAN.import, "upload files", async ({ request, actor, params, query }) => {
-  await getMissionRow(actor, params.missionId);
-  const q = parseOr400(detectorResponseQuerySchema, query, "query");
-  const file = await readUploadedFile(request);
-  return json(await uploadDetectorResponse(actor, params.missionId, q, file));
-});
+export const POST = guarded(
+  CAN.import,
+  { what: "upload files", params: ["missionId"], query: detectorResponseQuerySchema, input: "query" },
+  async ({ request, actor, params, query }) => {
+    await getMissionRow(actor, params.missionId);
+    const file = await readUploadedFile(request);
+    return json(await uploadDetectorResponse(actor, params.missionId, query, file));
+  },
+);

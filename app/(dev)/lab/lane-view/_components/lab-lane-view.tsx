@@ -5,10 +5,6 @@ import { parsePlan } from "@/schemas/plan";
 import { demoPlan } from "@/lib/lanes";
 import { LaneView } from "@/components/lane-view/lane-view";
 import type { FrameTime } from "@/components/lane-view/use-live-recheck";
-import ex1 from "../../../../tests/fixtures/plans/ex1-single-channel.plan.json";
-import ex2 from "../../../../tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json";
-
-const FIXTURES: Record<string, unknown> = { ex1, ex2 };
 
 declare global {
   interface Window {
@@ -24,9 +20,9 @@ function recordFrame(t: FrameTime) {
 export function LabLaneView({ name }: { name: string }) {
   const parsed = useMemo(() => {
     const m = /^demo(\d+)$/.exec(name);
-    const raw = m ? demoPlan(Number(m[1])) : FIXTURES[name];
+    const raw = m ? demoPlan(Number(m[1])) : undefined;
     if (raw === undefined)
-      return { ok: false as const, message: `Unknown plan "${name}": use demoN (for example demo64), ex1 or ex2.` };
+      return { ok: false as const, message: `Unknown plan "${name}": use demoN (for example demo64).` };
     const p = parsePlan(raw);
     return p.ok
       ? { ok: true as const, plan: p.plan }

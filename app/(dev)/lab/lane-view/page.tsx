@@ -1,17 +1,17 @@
-import { notFound } from "next/navigation";
+import { requireDevRoutes } from "@/server/core/dev-routes";
 import { LabLaneView } from "./_components/lab-lane-view";
 
 export const metadata = { title: "Lane view lab" };
 export const dynamic = "force-dynamic";
 
 /**
- * Development page: the lane view of a plan named in the query
- * (`?plan=demo64`, `demoN`, `ex1`, `ex2`), checked in the browser, with no
- * database. For the lane view benchmark and for looking at the chart.
- * Not found in production unless HETEROLANE_DEV_MAIL=1.
+ * Development page: the lane view of a generated demo plan named in the
+ * query (`?plan=demo64`, `demoN` for N channels), checked in the browser,
+ * with no database. For the lane view benchmark and for looking at the
+ * chart. A development route (see the `(dev)` layout).
  */
 export default async function LaneViewLab({ searchParams }: { searchParams: Promise<{ plan?: string }> }) {
-  if (process.env.NODE_ENV === "production" && process.env.HETEROLANE_DEV_MAIL !== "1") notFound();
+  requireDevRoutes();
   const { plan } = await searchParams;
   return (
     <main className="mx-auto max-w-[1400px] p-4">

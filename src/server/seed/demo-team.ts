@@ -1,8 +1,9 @@
+import "server-only";
 import { randomBytes } from "node:crypto";
 import { hashPassword } from "better-auth/crypto";
 import { and, eq } from "drizzle-orm";
-import { db } from "../client";
-import { account, member, organization, user } from "../schema";
+import { db } from "@db/client";
+import { account, member, organization, user } from "@db/schema";
 
 /**
  * The invented demo team and its four people, one per role. Demo data, marked

@@ -1,20 +1,21 @@
+import "server-only";
 import { and, eq } from "drizzle-orm";
-import { db } from "../client";
-import { missions, user } from "../schema";
+import { db } from "@db/client";
+import { missions, user } from "@db/schema";
+import { DEMO_MISSION_DESCRIPTION, DEMO_MISSION_NAME, demoPlan } from "@db/seed/mission-demo-plan";
 import { parsePlan } from "@/schemas/plan";
 import type { Actor } from "@/server/auth/actor";
+import { inTransaction } from "@/server/core/db";
 import { createMissionIn } from "@/server/workspace/missions";
 import { replaceDraft } from "@/server/workspace/plan-io";
 import { saveAndCheck } from "@/server/workspace/save-and-check";
-import { DEMO_MISSION_DESCRIPTION, DEMO_MISSION_NAME, demoPlan } from "./mission-demo-plan";
 
 /**
  * Seeds the invented demo mission into a team (idempotent: skipped when the
  * team already has a mission of that name). The plan goes through the same
  * saveAndCheck path as every edit, so the stored revision, result and
- * findings are the engine's. Needs the `react-server` export condition
- * (the workspace services are server-only): run with
- * `tsx --conditions=react-server db/seed.ts`.
+ * findings are the engine's. The demo plan itself is data in
+ * db/seed/mission-demo-plan.ts (also read by the benchmark and the tests).
  */
 export async function seedDemoMission(
   teamId: string,
@@ -31,7 +32,7 @@ export async function seedDemoMission(
   const parsed = parsePlan(demoPlan());
   if (!parsed.ok)
     throw new Error(`demo plan is invalid: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
-  return db.transaction(async (tx) => {
+  return inTransaction(async (tx) => {
     const mission = await createMissionIn(tx, actor, DEMO_MISSION_NAME, DEMO_MISSION_DESCRIPTION);
     await replaceDraft(tx, mission.id, parsed.plan);
     const revision = await saveAndCheck(tx, mission.id, actor, {

@@ -1,14 +1,13 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
-import { devMailEnabled } from "@/server/env";
+import { requireDevRoutes } from "@/server/core/dev-routes";
 import { listCapturedMail } from "@/server/mail/captured";
 
 export const metadata: Metadata = { title: "Captured e-mail (development)" };
 export const dynamic = "force-dynamic";
 
-/** Messages caught by the local mail catcher, newest first. 404 in production unless HETEROLANE_DEV_MAIL=1. */
+/** Messages caught by the local mail catcher, newest first. A development route (see the `(dev)` layout). */
 export default async function DevMailPage() {
-  if (!devMailEnabled()) notFound();
+  requireDevRoutes();
   const mails = await listCapturedMail(50);
   return (
     <main className="mx-auto max-w-4xl px-4 py-8">
