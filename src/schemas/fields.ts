@@ -45,7 +45,7 @@ export interface FieldRules {
 
 /** The largest modulation index accepted: just below the first zero of J0 (2.405), so the carrier keeps power. */
 export const MAX_MODULATION_INDEX = 2.4;
-/** Most reach intervals one laser pair may list (plan-format.md list limits). */
+/** Most reach intervals one laser pair may list (docs/plan-format.md §2.10 "List limits"). */
 export const MAX_REACH_INTERVALS = 64;
 export const SIDEBANDS = ["upper", "lower"] as const;
 
@@ -187,7 +187,7 @@ export const channelShape = (r: FieldRules) => ({
   requiredNedtK: r.nonNegative().nullable(),
 });
 
-/** The values a complete entity takes for a field left out (plan-format.md; the forms send partial updates without them). */
+/** The values a complete entity takes for a field left out (the "if omitted" column of docs/plan-format.md §2.5–§2.7; the forms send partial updates without them). */
 export const FIELD_DEFAULTS = {
   detector: { sampleRateGHz: null },
   chain: { carrierRejectionDB: 0, sharedIf: false },

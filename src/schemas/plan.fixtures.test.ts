@@ -4,7 +4,7 @@ import { join } from "node:path";
 import { parsePlanText } from "./plan";
 
 // tests/fixtures/invalid: documents with every expected issue written out
-// by hand from the contract.
+// by hand from docs/plan-format.md §2.
 const DIR = join(__dirname, "../../tests/fixtures/invalid");
 const names = readdirSync(DIR)
   .filter((f) => f.endsWith(".plan.json"))

@@ -96,7 +96,7 @@ describe("parsePlan on mutations of valid plans", () => {
       { numRuns: 300 },
     );
   });
-  it("generated valid plans are accepted (the generator stays inside the contract)", () => {
+  it("generated valid plans are accepted (the generator stays inside the plan format)", () => {
     fc.assert(
       fc.property(validPlanArb, (doc) => {
         const r = parsePlan(doc);

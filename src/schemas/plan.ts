@@ -1,5 +1,5 @@
 /**
- * The plan document `heterolane.plan/1` (docs: plan-format, "Input document"):
+ * The plan document `heterolane.plan/1` (docs/plan-format.md §2 "The plan document"):
  * its schema, its validation and its reading from JSON text. The parts live
  * in `./plan/`:
  *

@@ -4,7 +4,7 @@
  * handlers under `app/api/v1/missions/**` and the server services.
  *
  * Field names and units are exactly those of the plan document
- * (docs: plan-format.md, `heterolane.plan/1`); `key` is the plan-document id
+ * (docs/plan-format.md §2 "The plan document `heterolane.plan/1`"); `key` is the plan-document id
  * ("LP1", "R1", "A", "wv1"). Chains reference hardware by row uuid
  * (`laserId`, `resonatorId`, `detectorId`), channels their chain by `chainId`.
  *

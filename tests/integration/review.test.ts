@@ -84,7 +84,7 @@ async function missionIn(s: State): Promise<string> {
   return id;
 }
 
-// Hand-written expectations (docs/permissions.md and product.md §7), independent of src/lib/review.
+// Hand-written expectations (docs/permissions.md and docs/decisions/016-review-readings.md), independent of src/lib/review.
 const MAY: Record<Action, Role[]> = {
   submit: ["owner", "lead", "engineer"],
   baseline: ["owner", "lead"],

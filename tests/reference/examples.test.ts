@@ -9,7 +9,7 @@ import { parsePlanText } from "@/schemas/plan";
 const DIR = join(__dirname, "../../docs/examples");
 const files = readdirSync(DIR).filter((f) => f.endsWith(".plan.json"));
 
-// The codes whose severity is "error" in the contract's rules table
+// The codes whose severity is "error" in the rules table of docs/plan-format.md §4.1
 // (slot-overlap is an error unless the chain has sharedIf; spur-in-slot is
 // an error for the carrier-beat, lock-lo and lock-self families).
 const ERROR_CODES = [

@@ -8,18 +8,19 @@ import { LINE_CENTRES, PROTECTED_BANDS } from "@/lib/reference";
 import { example1 } from "../fixtures/plans/builders";
 
 /**
- * Published and derived check values (domain-reference.md §8 and §1–§6)
- * run through the engine itself, each with its source beside the value.
+ * Published check values and values derived in docs/calculations.md (Derived check
+ * values), run through the engine itself, each with its source beside the
+ * value.
  */
 describe("known answers through the plan engine", () => {
-  it("linewidth δν = ν/Q_L: 193.4 THz at Q_L = 1e8 → 1.934 MHz (domain-reference §2.2, derived check)", () => {
+  it("linewidth δν = ν/Q_L: 193.4 THz at Q_L = 1e8 → 1.934 MHz (definition of the loaded Q; derived check, docs/calculations.md)", () => {
     const r = checkPlan(example1((p) => (p.resonators[0]!.loadedQ = 1e8)));
     expect(r.chains[0]!.linewidthMHz).toBeCloseTo(1.934, 6);
-    // and Q_L = 1e7 → 19.34 MHz, the worked plan of plan-format.md
+    // and Q_L = 1e7 → 19.34 MHz, the worked plan of docs/plan-format.md §8.2 "Chain figures"
     expect(checkPlan(example1()).chains[0]!.linewidthMHz).toBeCloseTo(19.34, 6);
   });
 
-  it("Lorentzian image rejection 1 + (4·f_IF/δν)²: δν = 2 MHz, f_IF = 1 GHz → 66.0 dB (domain-reference §1.3 and §8, derived check)", () => {
+  it("Lorentzian image rejection 1 + (4·f_IF/δν)²: δν = 2 MHz, f_IF = 1 GHz → 66.0 dB (Lorentzian mode response; derived check, docs/calculations.md)", () => {
     // δ = 2 MHz at 193.4 THz needs Q_L = 9.67e7; a 1 kHz channel at the mode centre with the LO 1 GHz above it
     const plan = example1((p) => {
       p.resonators[0]!.loadedQ = 193.4e3 / 0.002;
@@ -47,7 +48,7 @@ describe("known answers through the plan engine", () => {
     expect(r.channels[0]!.radiometricBandwidthMHz).toBeCloseTo(100, 6);
   });
 
-  it("with gain fluctuations T_sys·√(1/(Bτ) + (ΔG/G)²): T_sys = 1250 K, B = 1 GHz, τ = 10 ms, ΔG/G = 1e-4 → 0.415 K (domain-reference §6.1 worked example, form from Ulaby & Long, from memory)", () => {
+  it("with gain fluctuations T_sys·√(1/(Bτ) + (ΔG/G)²): T_sys = 1250 K, B = 1 GHz, τ = 10 ms, ΔG/G = 1e-4 → 0.415 K (derived check, docs/calculations.md; gain term after Ulaby & Long 2014, from memory: equation to be checked in that edition)", () => {
     const r = checkPlan(
       example1((p) => {
         p.resonators[0]!.loadedQ = 1;
@@ -61,7 +62,7 @@ describe("known answers through the plan engine", () => {
     expect(r.channels[0]!.nedtK).toBeCloseTo(0.415, 3);
   });
 
-  it("USB, high-side LO, f_RF = 183.31 GHz, f_IF = 1.5 GHz → Δ = 184.81 GHz, image 186.31 GHz, IF inverted (domain-reference §3.1 and §8 item 11)", () => {
+  it("USB, high-side LO, f_RF = 183.31 GHz, f_IF = 1.5 GHz → Δ = 184.81 GHz, image 186.31 GHz, IF inverted (derived check, docs/calculations.md)", () => {
     const r = checkPlan(example1());
     const ch = r.channels[0]!;
     const imageCentre = (ch.imageGHz![0] + ch.imageGHz![1]) / 2;
@@ -72,7 +73,7 @@ describe("known answers through the plan engine", () => {
     expect(184.81 - 183.305).toBeCloseTo(ch.ifSlotGHz![1], 9);
   });
 
-  it("sounder channel expansion 183.311 ± 3.00 GHz, 2 × 1000 MHz → passbands 179.811–180.811 and 185.811–186.811 GHz, IF 2.5–3.5 GHz (domain-reference §8 item 10, MHS channel table)", () => {
+  it("sounder channel expansion 183.311 ± 3.00 GHz, 2 × 1000 MHz → passbands 179.811–180.811 and 185.811–186.811 GHz, IF 2.5–3.5 GHz (channel table of the MHS instrument description)", () => {
     const plan = example1((p) => {
       p.channels[0]!.centerGHz = 183.311;
       p.channels[0]!.dsbOffsetGHz = 3;
@@ -90,7 +91,7 @@ describe("known answers through the plan engine", () => {
     expect(slot[1]).toBeCloseTo(3.5, 9);
   });
 
-  it("IM3 of 1.0 and 1.1 GHz: 2f1 − f2 = 0.9 GHz and 2f2 − f1 = 1.2 GHz appear as order-3 intermod spurs (domain-reference §4 #14 and §8, derived check)", () => {
+  it("IM3 of 1.0 and 1.1 GHz: 2f1 − f2 = 0.9 GHz and 2f2 − f1 = 1.2 GHz appear as order-3 intermod spurs (derived check, docs/calculations.md)", () => {
     // two 1 kHz channels whose slots sit at 1.0 and 1.1 GHz, no drift
     const plan = example1((p) => {
       p.lasers[0]!.driftMHz = 0;
@@ -106,12 +107,12 @@ describe("known answers through the plan engine", () => {
     expect(near(1.2)?.source).toBe("1·wv1−2·wv2");
   });
 
-  it("ADC alias f = 1.2 GHz at f_s = 1.0 GHz → 0.2 GHz, zone 3 (domain-reference §8 item 12, sampling theorem)", () => {
+  it("ADC alias f = 1.2 GHz at f_s = 1.0 GHz → 0.2 GHz, zone 3 (sampling theorem; derived in docs/plan-format.md §5.4)", () => {
     expect(foldFrequency(1.2, 1.0)).toBeCloseTo(0.2, 12);
     expect(nyquistZone(1.2, 1.0) + 1).toBe(3);
   });
 
-  it("lock sideband weight: β = 1.08, δν = 2 MHz, f_PDH = 20 MHz → about −30 dB (domain-reference §4 #5, derived)", () => {
+  it("lock sideband weight: β = 1.08, δν = 2 MHz, f_PDH = 20 MHz → about −30 dB (derived check, docs/calculations.md)", () => {
     expect(lockOrderWeightDB(1, 0.02, 1.08, 0.002)).toBeCloseTo(-29.9, 1);
   });
 });

@@ -1,7 +1,7 @@
 /**
- * Published and derived check values for the optics helpers, as listed in the
- * project's domain reference §8 (copied here so the suite does not depend on
- * that document at run time). Each value names its source.
+ * Published and derived check values for the optics helpers. Each value
+ * names its source; the derived ones are worked out in docs/helpers.md
+ * (Derived check values).
  */
 import { describe, expect, it } from "vitest";
 import {
@@ -71,7 +71,7 @@ describe("published check values", () => {
   });
 });
 
-describe("derived check values (domain reference §2 and §8, derived there, not published)", () => {
+describe("derived check values (docs/helpers.md, not published)", () => {
   it("group index, FSR and radius", () => {
     // derived from Jundt 1997: n_g(e, 1.55 µm) = 2.1824
     expect(groupIndex(1.55, { fit: "jundt", temperatureC: 24.5 }).ng).toBeCloseTo(2.18, 2);

@@ -5,7 +5,7 @@ import { join } from "node:path";
 import { MAX_GRID_POINTS, MAX_LOCK_ORDER_ENUMERATED } from "@/lib/plan";
 import { validPlanInput } from "../fixtures/valid-plan";
 
-// The validator accepts any finite number within the contract's signs and
+// The validator accepts any finite number within the plan format's signs and
 // ranges, so absurd magnitudes reach the engine (through the CLI and the
 // HTTP endpoint, where an engine that never returns blocks the server).
 // Each accepted document here must be checked without throwing and within
@@ -19,7 +19,7 @@ const HANG_MS = 6000;
 type Doc = Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
 
 /**
- * The work-step bound (ADR 005: the engine bounds its own work; steps as
+ * The work-step bound (ADR 018: the engine bounds its own work; steps as
  * counted by `checkPlan(plan, { work })`, see `WorkCounter`). A check
  * evaluates each chain once at its LO and builds the chain's feasibility
  * map over each of its laser's reach intervals; each of these enumerates at

@@ -61,7 +61,7 @@ describe("checkPlan on every plan the validator accepts", { timeout: 120_000 }, 
       { numRuns: 400 },
     );
   });
-  it("edge values the contract allows: zero step, zero drift, DC-coupled detector, empty reach, no channels", () => {
+  it("edge values the plan format allows: zero step, zero drift, DC-coupled detector, empty reach, no channels", () => {
     const doc = validPlanInput() as Record<string, any>; // eslint-disable-line @typescript-eslint/no-explicit-any
     doc.lasers[0].stepMHz = 0;
     doc.lasers[0].driftMHz = 0;

@@ -4,7 +4,7 @@ import { type ExpectedSubset, fixtureExpected, mustParse, fixtureInput } from ".
 
 /**
  * The two worked examples (tests/fixtures/plans, computed independently
- * from docs plan-format.md) reproduced within the tolerances stored in each
+ * from docs/plan-format.md §3–§7) reproduced within the tolerances stored in each
  * expected file: GHz absolute, dB absolute, other figures relative, feasible
  * edges absolute.
  */
@@ -62,7 +62,7 @@ for (const name of ["ex1-single-channel", "ex2-lower-sideband-sampled"]) {
       }
     });
 
-    it("error findings: the same set (the expected file lists them by code name within a channel; see ADR 004)", () => {
+    it("error findings: the same set (the expected file lists them by code name within a channel; see ADR 017)", () => {
       const key = (f: { code: string; chain: string; channel: string | null }) => `${f.chain}|${f.channel}|${f.code}`;
       const got = result.findings.filter((f) => f.severity === "error").map(key);
       expect([...got].sort()).toEqual(exp.errors.map(key).sort());

@@ -218,7 +218,8 @@ export function DriftBudget({
           ["combination", combine === "rss" ? "root-sum-square" : "worst case"],
         ]}
         sources={[
-          "Bookkeeping of laser-2, resonator, lock and step terms: project domain reference §3.3 (common practice: guard ≥ full peak-to-peak drift or 3× RMS, plus half the step)",
+          "Bookkeeping of laser-2, resonator, lock and step terms: derived in docs/helpers.md (Drift budget)",
+          "Guard ≥ full peak-to-peak drift or 3× RMS, plus half the step: common practice",
           "Mode shift: Jundt, Opt. Lett. 22, 1553 (1997) and Kim & Smith, J. Appl. Phys. 40, 4637 (1969), formula derived in docs/helpers.md",
           "Root-sum-square assumes independent random terms; the half-step is a bound, so rss is optimistic about it",
         ]}

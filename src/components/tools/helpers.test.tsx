@@ -39,11 +39,11 @@ describe("helper components (first render, server-side)", () => {
         initialLoadedQ={1e8}
       />,
     );
-    // derived (domain reference §2.1): R ≈ 119.3 µm for 183.31 GHz
+    // derived (docs/helpers.md, Derived check values): R ≈ 119.3 µm for 183.31 GHz
     expect(Number(byTestId(html, "rs-radius").replace(/[^\d.]/g, ""))).toBeCloseTo(119.27, 1);
-    // derived (§2.2): 1.934 MHz at Q 1e8, 193.4 THz
+    // derived (same section): 1.934 MHz at Q 1e8, 193.4 THz
     expect(byTestId(html, "rs-linewidth")).toMatch(/^1\.934/);
-    // derived (§2.4): −6.2 GHz/K and −6.4 MHz/K
+    // derived (docs/helpers.md, Thermal tuning): −6.2 GHz/K and −6.4 MHz/K
     expect(byTestId(html, "rs-mode-shift")).toMatch(/^\u22126\.2/);
     expect(byTestId(html, "rs-fsr-shift")).toMatch(/^\u22126\.38/);
     expect(html).not.toContain(">Apply FSR and Q<"); // no onApply, no button
@@ -53,7 +53,7 @@ describe("helper components (first render, server-side)", () => {
     const html = renderToString(
       <ResonatorSizing initialRadiusUm={1000} initialMeasuredGroupIndex={2.1824} onApply={() => {}} />,
     );
-    // derived (§2.1): R = 1 mm, n_g = 2.1824 → 21.86 GHz
+    // derived (docs/helpers.md, Derived check values): R = 1 mm, n_g = 2.1824 → 21.86 GHz
     expect(byTestId(html, "rs-fsr")).toMatch(/^21\.86/);
     expect(html).toContain(">Apply FSR and Q<");
   });

@@ -245,7 +245,7 @@ export function ResonatorSizing({
           testId="rs-mode-shift"
         />
         <ResultRow
-          label="FSR shift dFSR/dT (fixed λ, §2.4 form)"
+          label="FSR shift dFSR/dT (n_g at fixed λ)"
           value={thermal?.ok ? formatFixed(thermal.value.fsr.mhzPerK, 3) : "—"}
           unit="MHz/K"
           testId="rs-fsr-shift"

@@ -22,7 +22,7 @@ const channel = (key: string, over: Partial<Channel> = {}): Channel => ({
 });
 
 describe("rfBands", () => {
-  it("gives c ± B/2 for SSB and the two bands c ± d ± B/2 for DSB (plan-format.md, passbands)", () => {
+  it("gives c ± B/2 for SSB and the two bands c ± d ± B/2 for DSB (docs/plan-format.md §3.2 'Per channel')", () => {
     expect(rfBands({ centerGHz: 183.31, bandwidthMHz: 10, dsbOffsetGHz: null })).toEqual([[183.305, 183.315]]);
     const [lo, hi] = rfBands({ centerGHz: 183.31, bandwidthMHz: 1000, dsbOffsetGHz: 3 });
     expect(lo?.[0]).toBeCloseTo(179.81, 9);

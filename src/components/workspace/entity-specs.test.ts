@@ -49,7 +49,7 @@ describe("nextKey", () => {
 });
 
 describe("form defaults", () => {
-  // The defaults are the example values of plan-format.md; each must pass its own schema.
+  // The defaults are the example values of docs/plan-format.md §8.1 "The plan"; each must pass its own schema.
   it("are valid entities for their schemas", () => {
     expect(laserSchema.safeParse(laserDefaults).success).toBe(true);
     expect(resonatorSchema.safeParse(resonatorDefaults).success).toBe(true);

@@ -1,6 +1,6 @@
 /**
  * The fields of every workspace form: label, unit, help text and, for a new
- * entity, a sensible default (the example values of plan-format.md, which
+ * entity, a sensible default (the example values of docs/plan-format.md §8.1 "The plan", which
  * describe a 183 GHz water-vapour channel on a 193.4 THz carrier).
  */
 export {

@@ -42,7 +42,7 @@ describe("formatAge", () => {
 
 describe("nedtStatus", () => {
   it("compares the estimate with the requirement", () => {
-    // Example channel of plan-format.md: NEΔT 17.92 K against a 20 K requirement.
+    // Example channel of docs/plan-format.md §8.3 "Channel figures at L = 184.81": NEΔT 17.92 K against a 20 K requirement.
     expect(nedtStatus(17.92, 20)).toEqual({ state: "met", marginK: 20 - 17.92 });
     expect(nedtStatus(21, 20).state).toBe("unmet");
     expect(nedtStatus(20 + 1e-10, 20).state).toBe("met");

@@ -67,7 +67,7 @@ export function nedtStatus(
   if (nedtK === null || nedtK === undefined || !Number.isFinite(nedtK)) return { state: "no-estimate", marginK: null };
   if (requiredK === null || requiredK === undefined) return { state: "no-requirement", marginK: null };
   const margin = requiredK - nedtK;
-  // The engine's rule allows 1e-9 K in favour of passing (plan-format.md, units and conventions).
+  // The engine's rule allows 1e-9 K in favour of passing (docs/plan-format.md §1.4 "The 1e-9 allowance").
   return { state: margin >= -1e-9 ? "met" : "unmet", marginK: margin };
 }
 

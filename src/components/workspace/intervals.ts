@@ -2,8 +2,9 @@ import type { Interval } from "@/queries/types";
 
 /**
  * The union of closed intervals as sorted, disjoint intervals, merging those
- * that overlap or touch (plan-format.md: reach intervals are merged where
- * they overlap or touch before any rule). Used to draw the current reach.
+ * that overlap or touch (docs/plan-format.md §1.3 "Intervals, gap and
+ * guard": reach intervals are merged where they overlap or touch before any
+ * rule). Used to draw the current reach.
  */
 export function mergedCoverage(intervals: readonly Interval[]): Interval[] {
   const sorted = [...intervals].filter((i) => i.minGHz <= i.maxGHz).sort((a, b) => a.minGHz - b.minGHz);

@@ -4,7 +4,7 @@ import { loTHz } from "./hardware";
 
 describe("loTHz", () => {
   it("adds the signed offset in GHz to the carrier in THz", () => {
-    // plan-format.md example: carrier 193.4 THz, LO offset 184.81 GHz → laser 2 at 193.58481 THz (arithmetic)
+    // docs/plan-format.md §8 "Worked example 1": carrier 193.4 THz, LO offset 184.81 GHz → laser 2 at 193.58481 THz (arithmetic)
     expect(loTHz(193.4, 184.81)).toBeCloseTo(193.58481, 9);
     expect(loTHz(193.4, -184.81)).toBeCloseTo(193.21519, 9);
   });

@@ -19,7 +19,7 @@ import { Section } from "./report/section";
 import { SourcesSection } from "./report/sources-section";
 import { buttonClass, LASER_SAFETY_TEXT, SENSITIVITY_TEXT, Spinner } from "./ui";
 
-/** What model v1 leaves out (plan-format.md, "Not in model v1"). */
+/** What model v1 leaves out (docs/plan-format.md §10 "What version 1 does not model"). */
 export const MODEL_V1_LIMITS = [
   "The detector is assumed to be a balanced pair of photodiodes.",
   "Laser noise pedestals beating with the carrier or the LO are not modelled.",

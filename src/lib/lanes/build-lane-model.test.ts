@@ -11,8 +11,8 @@ import type { LanePlanInput, LaneResultInput } from "./types";
 const plan1 = ex1 as unknown as LanePlanInput;
 const plan2 = ex2 as unknown as LanePlanInput;
 
-// Result numbers for example 1 are those of plan-format.md's result example
-// (the worked example of the contract), cut to what the lane view reads.
+// Result numbers for example 1 are those of docs/plan-format.md §8 "Worked example 1",
+// cut to what the lane view reads.
 const result1: LaneResultInput = {
   chains: [
     {
@@ -61,13 +61,13 @@ describe("buildLaneModel, example 1 (upper sideband)", () => {
   const byId = new Map(model.items.map((i) => [i.id, i]));
 
   it("draws the channel passband c ± B/2 and the wanted mode n·fsr ± δ/2", () => {
-    // c = 183.31 GHz, B = 10 MHz (plan-format.md example plan)
+    // c = 183.31 GHz, B = 10 MHz (docs/plan-format.md §8.1 "The plan")
     const ch = byId.get("rf:channel:wv1:0");
     expect(ch?.lo).toBeCloseTo(183.305, 9);
     expect(ch?.hi).toBeCloseTo(183.315, 9);
     expect(ch?.severity).toBe("info");
     expect(ch?.codes).toEqual(["in-protected-band"]);
-    // δ = 193.4 THz / 1e7 = 19.34 MHz (plan-format.md, "linewidthMHz": 19.34)
+    // δ = 193.4 THz / 1e7 = 19.34 MHz (docs/plan-format.md §8.2 "Chain figures": linewidthMHz 19.34)
     const mode = model.items.find((i) => i.kind === "mode-passband" && i.codes.includes("wanted"));
     expect(mode?.lo).toBeCloseTo(183.31 - 0.00967, 9);
     expect(mode?.hi).toBeCloseTo(183.31 + 0.00967, 9);

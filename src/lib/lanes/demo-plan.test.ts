@@ -20,7 +20,7 @@ describe("demoPlan", () => {
     const plan = demoPlan(64);
     for (const chain of plan.chains) {
       const res = plan.resonators.find((r) => r.id === chain.resonator)!;
-      const delta = (193.4 * 1000) / res.loadedQ; // δ = carrierTHz·1000/loadedQ (plan-format.md)
+      const delta = (193.4 * 1000) / res.loadedQ; // δ = carrierTHz·1000/loadedQ (docs/plan-format.md §3.1 "Per chain")
       const chs = plan.channels.filter((c) => c.chain === chain.id);
       expect(chs).toHaveLength(16);
       for (const c of chs) expect(Math.abs(c.centerGHz - chain.mode * res.fsrGHz)).toBeLessThanOrEqual(delta / 2);

@@ -1,7 +1,7 @@
 import type { FindingCode } from "@/lib/plan";
 
 /**
- * A plain sentence for each rule code (plan-format.md, Rules), for the
+ * A plain sentence for each rule code (docs/plan-format.md §4.1 "The rules"), for the
  * details panel and the tooltips of blocked LO intervals.
  */
 const TEXT: Readonly<Record<FindingCode, string>> = {

@@ -37,13 +37,13 @@ function assembled(plan: Plan): ResultDocument {
 describe("recheckAtOffset", () => {
   const plan = parsed(ex1);
 
-  it("known answer: example 1 at L = 184.81 GHz gives the IF slot 1.495–1.505 GHz (plan-format.md result example)", () => {
+  it("known answer: example 1 at L = 184.81 GHz gives the IF slot 1.495–1.505 GHz (docs/plan-format.md §8.3 'Channel figures at L = 184.81')", () => {
     const r = assembled(plan);
     const ch = r.channels.find((c) => c.id === "wv1");
     expect(ch?.ifSlotGHz?.[0]).toBeCloseTo(1.495, 9);
     expect(ch?.ifSlotGHz?.[1]).toBeCloseTo(1.505, 9);
     expect(ch?.occupiedGHz?.[0]).toBeCloseTo(1.475, 9);
-    // NEΔT 17.92 K (plan-format.md result example, rounded there to 0.01 K)
+    // NEΔT 17.92 K (docs/plan-format.md §8.3, rounded there to 0.01 K)
     expect(ch?.nedtK).toBeCloseTo(17.92, 1);
   });
 

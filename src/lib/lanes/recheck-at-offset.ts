@@ -17,7 +17,7 @@ export interface Recheck {
  * document, computed from `previous` (the result of the same plan at any
  * other LO): only the moved chain is evaluated at the new offset; its
  * feasibility map and place are kept, because they do not depend on the LO
- * (plan-format.md, "Feasibility map and place"). The result equals
+ * (docs/plan-format.md §6 "Feasibility map and place"). The result equals
  * `checkPlan` of the moved plan (tested). Pass `prepared` (the chain
  * prepared for this plan, any LO) to skip preparing it on every frame of a
  * drag.

@@ -3,7 +3,7 @@
  * from one `LaneModel`; nothing is computed in the components.
  *
  * Input types are the subset of the `heterolane.plan/1` and
- * `heterolane.result/1` documents (docs: plan-format.md) the lane view reads,
+ * `heterolane.result/1` documents (docs/plan-format.md §2 and §7) the lane view reads,
  * written structurally so that the engine's own types are assignable to them.
  */
 

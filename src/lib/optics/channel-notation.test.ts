@@ -15,7 +15,7 @@ function error(r: ChannelParseResult) {
 
 describe("parseChannelNotation", () => {
   it("reads the MHS channel table notation and expands the passbands", () => {
-    // MHS channel 4 (MHS radiometric table, domain reference §1.4/§8 item 10):
+    // MHS channel 4 (channel table of the MHS instrument description):
     // 183.311 ± 3.00 GHz, 2 × 1000 MHz → passbands [179.811, 180.811] and [185.811, 186.811] GHz
     const ch = value(parseChannelNotation("183.311 ± 3.00 GHz, 2 × 1000 MHz"));
     expect(ch).toEqual({ centerGHz: 183.311, dsbOffsetGHz: 3, bandwidthMHz: 1000 });
@@ -77,7 +77,7 @@ describe("parseChannelNotation", () => {
     expect(e.message).toMatch(/quadruple-sideband .* not in model v1/);
   });
 
-  it("refuses overlapping or non-physical passbands (plan-format: dsbOffsetGHz > bandwidthMHz/2000)", () => {
+  it("refuses overlapping or non-physical passbands (docs/plan-format.md §2.8 'Rules between fields': dsbOffsetGHz > bandwidthMHz/2000)", () => {
     expect(error(parseChannelNotation("183.31 ± 0.5 GHz, 2 × 1000 MHz")).part).toBe("offset");
     expect(error(parseChannelNotation("2 ± 1.9 GHz, 2 × 1000 MHz")).message).toMatch(/reach 0 GHz/);
     expect(error(parseChannelNotation("0 GHz, 10 MHz")).part).toBe("centre");

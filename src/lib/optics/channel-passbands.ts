@@ -6,9 +6,9 @@ export interface Passband {
 }
 
 /**
- * RF passbands of a channel (plan-format.md, "Derived quantities (per
- * channel)"): single sideband P = [c − B/2, c + B/2]; double sideband the
- * pair [c ∓ d − B/2, c ∓ d + B/2], lower first. B = bandwidthMHz/1000.
+ * RF passbands of a channel (docs/plan-format.md §3.2 "Per channel"):
+ * single sideband P = [c − B/2, c + B/2]; double sideband the pair
+ * [c ∓ d − B/2, c ∓ d + B/2], lower first. B = bandwidthMHz/1000.
  */
 export function channelPassbands(channel: ChannelSpec): Passband[] {
   const half = channel.bandwidthMHz / 2000;

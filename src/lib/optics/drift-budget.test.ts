@@ -13,7 +13,7 @@ const input = fc.record({
 });
 
 describe("driftBudget", () => {
-  it("adds the terms of domain reference §3.3", () => {
+  it("adds the terms of the drift bookkeeping (docs/helpers.md, Drift budget)", () => {
     // Worked by hand: laser 2 ±10 MHz, 1 mK at −6.2 GHz/K (= 6.2 MHz), lock 0.5 MHz, step 10 MHz (half = 5)
     const base: Omit<DriftBudgetInput, "combine"> = {
       laser2MHz: 10,
@@ -27,7 +27,7 @@ describe("driftBudget", () => {
     expect(worst.terms.find((t) => t.key === "resonator")?.mhz).toBeCloseTo(6.2, 12);
     const rss = driftBudget({ ...base, combine: "rss" });
     expect(rss.driftMHz).toBeCloseTo(Math.sqrt(100 + 6.2 ** 2 + 0.25 + 25), 12);
-    // domain reference §3.3: 6.2 MHz per mK of resonator temperature error
+    // derived (docs/helpers.md, Drift budget): 6.2 MHz per mK of resonator temperature error
     expect(
       driftBudget({ ...base, laser2MHz: 0, lockOffsetMHz: 0, stepMHz: 0, combine: "worst-case" }).driftMHz,
     ).toBeCloseTo(6.2, 12);

@@ -30,7 +30,7 @@ export interface DriftBudgetResult {
 
 /**
  * Drift budget for the laser-pair offset relative to the carrier (the plan's
- * `driftMHz`), following the bookkeeping of the domain reference §3.3: the
+ * `driftMHz`), following the bookkeeping derived in docs/helpers.md (Drift budget): the
  * IF centre moves by laser-2 drift plus the resonator's thermal mode shift
  * (laser 1 follows the mode, laser 2 does not), plus the lock's residual
  * offset and half the tuning step.

@@ -7,8 +7,8 @@ import { modeShiftPerKelvin } from "./mode-shift-per-kelvin";
 
 export interface FsrShiftResult {
   /**
-   * dFSR/dT in MHz per kelvin by the domain reference §2.4 formula, with n_g
-   * taken at a fixed wavelength: −FSR·[α_a + (∂n_g/∂T)/n_g].
+   * dFSR/dT in MHz per kelvin by the formula derived in docs/helpers.md (Thermal
+   * tuning), with n_g taken at a fixed wavelength: −FSR·[α_a + (∂n_g/∂T)/n_g].
    */
   mhzPerK: number;
   /**
@@ -35,9 +35,9 @@ function jundtGroupIndex(lambdaUm: number, temperatureC: number): number {
  * Thermal shift of the free spectral range of a z-cut LiNbO3 disc (e-ray),
  * from FSR = c/(2πR·n_g):
  *
- *   dFSR/dT = −FSR·[ α_a + (dn_g/dT)/n_g ]                (domain reference §2.4)
+ *   dFSR/dT = −FSR·[ α_a + (dn_g/dT)/n_g ]                (derived, docs/helpers.md)
  *
- * with dn_g/dT = ∂n_g/∂T (fixed wavelength, the §2.4 reading, `mhzPerK`) or
+ * with dn_g/dT = ∂n_g/∂T (fixed wavelength, `mhzPerK`) or
  * ∂n_g/∂T + (∂n_g/∂λ)·(dλ/dT), dλ/dT = −(λ/ν)·dν/dT from modeShiftPerKelvin
  * (the modes followed as they move, `mhzPerKFollowingMode`). n_g(λ, T) from
  * Jundt, Opt. Lett. 22, 1553 (1997); α_a from Kim & Smith, J. Appl. Phys. 40,

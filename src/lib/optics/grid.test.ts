@@ -31,7 +31,7 @@ describe("nearestGridChannel", () => {
     const flex = nearestGridChannel(193.06875, 6.25);
     expect(flex).toMatchObject({ index: -5, centreTHz: 193.06875, grid: "flexible" });
     expect(flex.offsetGHz).toBeCloseTo(0, 9);
-    // domain reference §3.1 worked carrier 193.4 THz: 100 GHz grid N = 3, exactly on it
+    // the 193.4 THz carrier of docs/plan-format.md §8 "Worked example 1": 100 GHz grid N = 3 (193.1 + 3 × 0.1), exactly on it (arithmetic)
     const c = nearestGridChannel(193.4, 100);
     expect(c.index).toBe(3);
     expect(c.offsetGHz).toBeCloseTo(0, 9);

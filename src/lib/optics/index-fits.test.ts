@@ -27,7 +27,7 @@ describe("LiNbO3 Sellmeier fits", () => {
     expect(Math.abs(lnIndexZelmon(1.55, "o") - 2.2111)).toBeLessThan(2e-4);
     // Jundt, Opt. Lett. 22, 1553 (1997): n_e(1.55 µm, 24.5 °C) = 2.1379
     expect(Math.abs(lnExtraordinaryIndexJundt(1.55, 24.5) - 2.1379)).toBeLessThan(2e-4);
-    // Cross-check, MSU acousto-optics group LiNbO3 table: n_e(1.55 µm) = 2.1365, within 1e-3 (domain reference §2.4)
+    // Cross-check, LiNbO3 property table of the acousto-optics group, Moscow State University: n_e(1.55 µm) = 2.1365, within 1e-3
     expect(Math.abs(lnIndexZelmon(1.55, "e") - 2.1365)).toBeLessThan(1.5e-3);
   });
 
@@ -62,7 +62,7 @@ describe("LiNbO3 Sellmeier fits", () => {
 
 describe("groupIndex", () => {
   it("gives n_g ≈ 2.18 at 1.55 µm", () => {
-    // domain reference §2.1/§2.4 [calc from Jundt 1997]: n_g(e, 1550 nm, 24.5 °C) = 2.1824 (derived)
+    // derived from the Jundt 1997 fit, n_g = n − λ·dn/dλ (docs/helpers.md, Derived check values): n_g(e, 1550 nm, 24.5 °C) = 2.1824
     expect(groupIndex(1.55, { fit: "jundt", temperatureC: 24.5 }).ng).toBeCloseTo(2.1824, 4);
     expect(groupIndex(1.55, { fit: "zelmon", axis: "e" }).ng).toBeCloseTo(2.18, 2);
   });

@@ -5,8 +5,7 @@ import { requireInRange } from "./internals/errors";
  * (the radius of a z-cut disc), per kelvin. Kim & Smith, "Thermal expansion
  * of lithium tantalate and lithium niobate single crystals", J. Appl. Phys.
  * 40, 4637–4641 (1969): ΔL/L = α·(T − T0) + β·(T − T0)², α = 1.53e-5 /K,
- * β = 5.3e-9 /K², T0 = 19 °C (coefficients as transcribed in the project's
- * domain reference, §2.4). Reading: the local coefficient is
+ * β = 5.3e-9 /K², T0 = 19 °C. Reading: the local coefficient is
  * α_a(T) = (1/L)·dL/dT = (α + 2β·(T − T0)) / (1 + α·(T − T0) + β·(T − T0)²).
  */
 export const LN_EXPANSION_A = { alpha: 1.53e-5, beta: 5.3e-9, t0C: 19 } as const;

@@ -20,7 +20,7 @@ export interface ModeShiftResult {
  *
  *   dν_q/dT = −ν·[ (n/n_g)·α_a + (∂n/∂T)/n_g ]
  *
- * (derivation in the project's domain reference §2.4; n, n_g and ∂n/∂T from
+ * (derivation in docs/helpers.md, Thermal tuning; n, n_g and ∂n/∂T from
  * Jundt, Opt. Lett. 22, 1553 (1997); α_a from Kim & Smith, J. Appl. Phys. 40,
  * 4637 (1969)).
  */

@@ -55,7 +55,8 @@ export interface ParseChannelOptions {
 
 /**
  * Parse the channel notation of microwave sounder tables into the plan's
- * channel fields (domain reference §1.4):
+ * channel fields (as in the channel tables of the MHS instrument description,
+ * AMSU-B and the EUMETSAT ICI):
  *
  * - "183.31 ± 7.0" (also "+/-", "+-", "± 7.0 GHz"): double-sideband c ± d;
  * - "183.311 ± 3.00 GHz, 2 × 1000 MHz": with the bandwidth per sideband

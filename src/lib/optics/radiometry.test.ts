@@ -21,9 +21,9 @@ function friis(stages: { tK: number; gain: number }[]): number {
 
 describe("quantumLimitK", () => {
   it("matches h·f/k with exact SI constants", () => {
-    // domain reference §8 item 6 (exact SI constants): 183.31 GHz → 8.797 K
+    // h·f/k_B with the exact SI (2019) constants: 183.31 GHz → 8.797 K (derived)
     expect(quantumLimitK(183.31)).toBeCloseTo(8.797, 3);
-    // domain reference §6.2 [calc]: 0.04799 K/GHz; 1.07 K at 22.235 GHz; 15.6 K at 325.153 GHz
+    // derived (docs/helpers.md, Derived check values): 0.04799 K/GHz; 1.07 K at 22.235 GHz; 15.6 K at 325.153 GHz
     expect(quantumLimitK(1)).toBeCloseTo(0.04799, 5);
     expect(quantumLimitK(22.235)).toBeCloseTo(1.07, 2);
     expect(quantumLimitK(325.153)).toBeCloseTo(15.6, 1);
@@ -32,9 +32,9 @@ describe("quantumLimitK", () => {
 
 describe("planckRadiationTemperature", () => {
   it("matches the Planck-law values", () => {
-    // domain reference §8 item 7 (Planck law): J(300 K, 183.31 GHz) = 295.62 K
+    // Planck's law with the exact SI constants: J(300 K, 183.31 GHz) = 295.62 K (derived)
     expect(planckRadiationTemperature(300, 183.31)).toBeCloseTo(295.62, 2);
-    // domain reference §6.2 [calc]: J(2.725 K, 183.31 GHz) = 0.363 K
+    // derived (docs/helpers.md, Derived check values): J(2.725 K, 183.31 GHz) = 0.363 K
     expect(planckRadiationTemperature(2.725, 183.31)).toBeCloseTo(0.363, 3);
     expect(planckRadiationTemperature(0, 183.31)).toBe(0);
   });
@@ -98,7 +98,7 @@ describe("planckRadiationTemperature", () => {
 
 describe("receiverNoise (design estimate)", () => {
   it("is h·f/(k·η) without a front end", () => {
-    // domain reference §2.5 [calc, derivation]: T ≈ hf/(k·η); η = 1 % × 0.5 at 183.31 GHz → 8.797/0.005 = 1759.5 K
+    // derived (docs/helpers.md, Receiver noise): T ≈ hf/(k·η); η = 1 % × 0.5 at 183.31 GHz → 8.797/0.005 = 1759.5 K
     const r = receiverNoise({ rfGHz: 183.31, photonEfficiency: 0.01, opticalEfficiency: 0.5 });
     expect(r.etaTotal).toBeCloseTo(0.005, 15);
     expect(r.receiverK).toBeCloseTo(8.7975 / 0.005, 0);

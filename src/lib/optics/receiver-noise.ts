@@ -39,7 +39,7 @@ export interface ReceiverNoiseResult {
  * Design estimate of the receiver noise temperature of an electro-optic
  * up-conversion receiver with ideal heterodyne readout:
  *
- *   T_up = h·f / (k_B·η),   η = η_ph · η_opt        (domain reference §2.5)
+ *   T_up = h·f / (k_B·η),   η = η_ph · η_opt        (derived, docs/helpers.md)
  *
  * With a lossy passive front end of loss L (power ratio, L = 10^(dB/10)) at
  * physical temperature T_phys ahead of it, the cascade (Friis) formula

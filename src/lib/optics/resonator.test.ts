@@ -9,7 +9,7 @@ const radius = fc.double({ min: 10, max: 10_000, noNaN: true });
 const ng = fc.double({ min: 1.3, max: 4, noNaN: true });
 
 describe("freeSpectralRange / radiusForFsr", () => {
-  it("gives the derived check values of domain reference §2.1 (derived, not published)", () => {
+  it("gives the derived check values of docs/helpers.md (derived, not published)", () => {
     // derived: R = 1 mm, n_g = 2.1824 → FSR = 21.86 GHz
     expect(freeSpectralRange(1000, 2.1824)).toBeCloseTo(21.86, 2);
     // derived: R = 0.25 mm → 87.5 GHz
@@ -54,11 +54,11 @@ describe("freeSpectralRange / radiusForFsr", () => {
 
 describe("linewidthFromQ / loadedQFromLinewidth", () => {
   it("matches δν = ν/Q at 193.4 THz", () => {
-    // derived in domain reference §2.2: Q_L = 1e8 → 1.934 MHz, 1e7 → 19.34 MHz, 1e6 → 193.4 MHz
+    // derived in docs/helpers.md (Derived check values): Q_L = 1e8 → 1.934 MHz, 1e7 → 19.34 MHz, 1e6 → 193.4 MHz
     expect(linewidthFromQ(193.4, 1e8)).toBeCloseTo(1.934, 6);
     expect(linewidthFromQ(193.4, 1e7)).toBeCloseTo(19.34, 6);
     expect(linewidthFromQ(193.4, 1e6)).toBeCloseTo(193.4, 6);
-    // photon lifetime τ = 1/(2π δν) ≈ 82 ns at Q_L = 1e8 (domain reference §2.2, derived)
+    // photon lifetime τ = 1/(2π δν) ≈ 82 ns at Q_L = 1e8 (derived, docs/helpers.md)
     expect(1 / (2 * Math.PI * linewidthFromQ(193.4, 1e8) * 1e6)).toBeCloseTo(82.3e-9, 10);
   });
 

@@ -34,7 +34,7 @@ function setup(carrierTHz: number, fsrGHz: number, t: number) {
 }
 
 describe("modeShiftPerKelvin / fsrShiftPerKelvin", () => {
-  it("reproduces the values derived in domain reference §2.4 (derived, not published)", () => {
+  it("reproduces the values derived in docs/helpers.md (derived, not published)", () => {
     // derived: dν/dT ≈ −6.2 GHz/K at 193.4 THz; ∂n_e/∂T ≈ 3.75e-5 /K at 25 °C
     const mode = modeShiftPerKelvin(193.4, 25);
     expect(mode.ghzPerK).toBeCloseTo(-6.2, 1);
@@ -45,7 +45,7 @@ describe("modeShiftPerKelvin / fsrShiftPerKelvin", () => {
     expect(fsr.dngDT).toBeCloseTo(4.25e-5, 6);
     // following the modes (adds group-velocity dispersion): ≈ −6.28 MHz/K, computed here
     expect(fsr.mhzPerKFollowingMode).toBeCloseTo(-6.28, 2);
-    // crystal-supplier datasheet: dn_e/dT ≈ 37e-6 /°C (domain reference §2.4), within 10 %
+    // a crystal supplier's datasheet: dn_e/dT ≈ 37e-6 /°C (1–4 µm), within 10 %
     expect(Math.abs(mode.dnDT - 37e-6) / 37e-6).toBeLessThan(0.1);
   });
 
@@ -78,7 +78,7 @@ describe("modeShiftPerKelvin / fsrShiftPerKelvin", () => {
           const formula = fsrShiftPerKelvin(solvedFsrGHz, modeTHz, t);
           // following the modes: agreement to 0.2 % (the solved FSR is a discrete difference)
           expect(Math.abs(formula.mhzPerKFollowingMode / numericMHzPerK - 1)).toBeLessThan(2e-3);
-          // the fixed-wavelength §2.4 reading overstates the magnitude by the dispersion term (≈ 1–3 %)
+          // the fixed-wavelength reading (docs/helpers.md) overstates the magnitude by the dispersion term (≈ 1–3 %)
           expect(formula.mhzPerK / numericMHzPerK).toBeGreaterThan(1);
           expect(formula.mhzPerK / numericMHzPerK).toBeLessThan(1.05);
         },

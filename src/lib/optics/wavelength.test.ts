@@ -13,7 +13,7 @@ describe("wavelengthNmFromTHz / frequencyTHzFromNm", () => {
     expect(wavelengthNmFromTHz(193.1)).toBeCloseTo(1552.524, 3);
     // ITU-T G.694.1, 50 GHz grid N = +1: 193.15 THz ↔ 1552.122 nm
     expect(wavelengthNmFromTHz(193.15)).toBeCloseTo(1552.122, 3);
-    // domain reference §3.5 [calc]: 193.4 THz ↔ 1550.116 nm; 1550 nm ↔ 193.4145 THz
+    // derived, λ = c/f with the exact c: 193.4 THz ↔ 1550.116 nm; 1550 nm ↔ 193.4145 THz
     expect(wavelengthNmFromTHz(193.4)).toBeCloseTo(1550.116, 3);
     expect(frequencyTHzFromNm(1550)).toBeCloseTo(193.4145, 4);
   });

@@ -165,7 +165,7 @@ describe("checkChainAtOffset: sampled IF and lock rules on example 2 (fs = 8 GHz
 });
 
 describe("checkChainAtOffset on any valid plan", () => {
-  it("never throws, gives JSON-safe findings in contract order, and the map-only mode finds exactly the L-dependent errors (property)", () => {
+  it("never throws, gives JSON-safe findings in the order of docs/plan-format.md §4.3, and the map-only mode finds exactly the L-dependent errors (property)", () => {
     fc.assert(
       fc.property(arbitraryPlan(), fc.double({ min: -500, max: 500, noNaN: true }), (plan, L) => {
         for (const chain of plan.chains) {

@@ -4,9 +4,9 @@ import { type EvaluateOptions, evaluateChain } from "./internals/evaluate-chain"
 import type { Finding } from "./types";
 
 /**
- * Every finding of chain `chainId` and its channels, in contract order
- * (plan-format.md, "Rules"), with the chain's LO replaced by
- * `loOffsetGHz`. No feasibility map or place.
+ * Every finding of chain `chainId` and its channels, in the order of
+ * docs/plan-format.md §4.3 "Order of findings", with the chain's LO
+ * replaced by `loOffsetGHz`. No feasibility map or place.
  *
  * `options.mapOnly` restricts the work to the error rules that depend on
  * L (the ones that shape the feasibility map); the harmonic and

@@ -25,9 +25,9 @@ export interface CheckOptions {
 
 /**
  * Check a parsed plan and build the whole `heterolane.result/1` document
- * (plan-format.md, "Result document"): per chain the linewidth,
+ * (docs/plan-format.md §7 "The result document"): per chain the linewidth,
  * photodiode power, feasibility map and place; per channel the IF figures;
- * every kept spur; every finding in contract order.
+ * every kept spur; every finding in the order of §4.3.
  */
 export function checkPlan(plan: Plan, options: CheckOptions = {}): ResultDocument {
   const { work } = options;

@@ -11,7 +11,7 @@ export interface ChainAtOffset {
   channels: ChannelResult[];
   /** Every kept spur of the chain (family in table order, then band). */
   spurs: Spur[];
-  /** Every finding of the chain and its channels, in contract order. */
+  /** Every finding of the chain and its channels, in the order of docs/plan-format.md §4.3. */
   findings: Finding[];
 }
 

@@ -7,8 +7,8 @@ import type { Plan } from "@/schemas/plan";
 import { L_DEPENDENT_ERROR_CODES } from "./types";
 
 describe("feasibility map: the worked examples", () => {
-  it("reproduces example 1 (computed independently from the contract)", () => {
-    // Hand check (plan-format.md rules with the example's numbers): channel
+  it("reproduces example 1 (computed independently from docs/plan-format.md)", () => {
+    // Hand check (the rules of docs/plan-format.md §4.1 with the example's numbers): channel
     // wv1 is the band X = [183.305, 183.315] GHz, drift D = 0.02, guard
     // g = 0.05, detector [0.05, 6], lock tones m·fm = 0.06·m, m = 1..4.
     // Above the band the slot is [L − 183.315, L − 183.305], so
@@ -191,7 +191,7 @@ describe("feasibility map: hand-worked small cases", () => {
     expect(none).toEqual({ feasibleGHz: [], excludedGHz: [] });
   });
 
-  it("the codes are the map-shaping codes of the contract, in rules-table order", () => {
+  it("the codes are the map-shaping codes of docs/plan-format.md §6.1, in rules-table order", () => {
     expect([...MAP_CODES]).toEqual([...L_DEPENDENT_ERROR_CODES]);
   });
 });

@@ -15,8 +15,8 @@ export interface FeasibilityMap {
 }
 
 /**
- * The feasibility map of one chain (plan-format.md, "Feasibility map and
- * place"): every LO offset L within the merged reach for which no error
+ * The feasibility map of one chain (docs/plan-format.md §6 "Feasibility
+ * map and place"): every LO offset L within the merged reach for which no error
  * rule that depends on L fires for the chain or any of its channels,
  * computed exactly from the breakpoints of the rules (image-response edges
  * bisected to 1e-6 GHz), never by sampling. `options.work` counts the

@@ -1,7 +1,7 @@
 import type { Plan } from "@/schemas/plan";
 import type { PlaceReason } from "./types";
 
-/** The allowance of every comparison (plan-format.md, "Units and conventions"), GHz. */
+/** The allowance of every comparison (docs/plan-format.md §1.4 "The 1e-9 allowance"), GHz. */
 const TOL = 1e-9;
 
 export interface Placement {
@@ -10,7 +10,7 @@ export interface Placement {
 }
 
 /**
- * Where to set the LO (plan-format.md, "Feasibility map and place"): among
+ * Where to set the LO (docs/plan-format.md §6.5 "Place"): among
  * the feasible intervals that hold at least one multiple of the laser's
  * step (any point when the step is 0), take the widest (widths compared
  * after rounding to 1 kHz; equal widths go to the interval whose midpoint

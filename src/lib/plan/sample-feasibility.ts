@@ -9,7 +9,7 @@ export interface FeasibilitySample {
   codes: FindingCode[];
 }
 
-/** Reach intervals merged where they overlap or touch (plan-format.md). */
+/** Reach intervals merged where they overlap or touch (docs/plan-format.md §1.3 "Intervals, gap and guard"). */
 function mergedReach(plan: Plan, chainId: string): [number, number][] {
   const chain = plan.chains.find((c) => c.id === chainId);
   const laser = chain && plan.lasers.find((l) => l.id === chain.laser);

@@ -1,6 +1,6 @@
 /**
  * Types of the result document `heterolane.result/1`
- * (docs: plan-format.md, "Result document" and "Rules").
+ * (docs/plan-format.md §7 "The result document" and §4 "Rules and findings").
  */
 
 export const RESULT_FORMAT = "heterolane.result/1" as const;
@@ -41,7 +41,7 @@ export function ruleRank(code: FindingCode): number {
 }
 
 /**
- * Severity of each rule (plan-format.md, rules table). `slot-overlap` is a
+ * Severity of each rule (docs/plan-format.md §4.1 "The rules"). `slot-overlap` is a
  * warning instead when the chain has `sharedIf`; `spur-in-slot` is info for
  * the harmonic and intermodulation families.
  */
@@ -94,7 +94,7 @@ export type LDependentErrorCode = (typeof L_DEPENDENT)[number];
 
 /**
  * Error rules whose outcome depends on the LO offset L, in rules-table
- * order (plan-format.md, "Rules", column "depends on L"; `slot-overlap`
+ * order (docs/plan-format.md §4.1 "The rules", column "depends on L"; `slot-overlap`
  * only while it is an error, i.e. the chain is not `sharedIf`): these, and
  * only these, shape the feasibility map.
  */

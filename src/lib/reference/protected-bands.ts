@@ -4,15 +4,15 @@ export interface ProtectedBand {
   /** Where the entry comes from, for people. */
   source: string;
   /**
-   * True when the edges are written from memory of the regulation and were
-   * not checked against its text (the project's domain reference, §7.3,
-   * marks every RR No. 5.340 band in 100–350 GHz this way).
+   * True when the edges are written from memory of the regulation and are
+   * still to be checked against the text of its current edition (every RR
+   * No. 5.340 band below is).
    */
   fromMemory: boolean;
 }
 
 const RR_5_340 =
-  "ITU Radio Regulations, Article 5, No. 5.340 (all emissions are prohibited); edges from memory, not checked against the current edition";
+  "ITU Radio Regulations, Article 5, No. 5.340 (all emissions are prohibited); band edges to be checked against the current edition of the Radio Regulations";
 
 /**
  * Bands at or near 100–350 GHz listed in RR No. 5.340. The 182–185 GHz band

@@ -3,9 +3,10 @@ import type { PathSegment } from "./format-path";
 import { formatNumber } from "./messages";
 
 /**
- * The rules of the plan contract that relate several fields: every `min`
- * below its `max`, `dsbOffsetGHz` above half the bandwidth, unique ids,
- * references that resolve, one chain per laser. They are written against
+ * The rules of the plan format that relate several fields
+ * (docs/plan-format.md §2.8 "Rules between fields"): every `min` below its
+ * `max`, `dsbOffsetGHz` above half the bandwidth, unique ids, references
+ * that resolve, one chain per laser. They are written against
  * unknown input so that they also run on a document with other faults
  * (`parsePlan` reports them beside the field rules); each rule only fires
  * when the fields it compares are themselves well formed.
@@ -70,7 +71,7 @@ function collectIds(doc: Record<string, unknown>, key: ListKey, out: RawIssue[])
 }
 
 /**
- * The rules of the contract that relate several fields. Works on any
+ * The rules of the format that relate several fields (§2.8). Works on any
  * value: parts that are malformed are skipped (the field rules report them).
  */
 export function crossFieldIssues(input: unknown): RawIssue[] {

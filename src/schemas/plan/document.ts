@@ -15,16 +15,16 @@ import {
 import { crossFieldIssues } from "./cross-field";
 
 /**
- * The zod schema of the plan document `heterolane.plan/1` (docs:
- * plan-format, "Input document"): types, signs, ranges, strict objects and
- * list limits. The numeric rules come from the shared field rules
+ * The zod schema of the plan document `heterolane.plan/1`
+ * (docs/plan-format.md §2 "The plan document"): types, signs, ranges,
+ * strict objects and list limits. The numeric rules come from the shared field rules
  * (`../fields.ts`) in their document dialect; the rules that relate several
  * fields are `crossFieldIssues` (`cross-field.ts`).
  */
 
 export const PLAN_FORMAT = "heterolane.plan/1" as const;
 
-/** List limits of the contract. */
+/** List limits (docs/plan-format.md §2.10 "List limits"). */
 export const PLAN_LIMITS = {
   channels: 256,
   chains: 64,

@@ -72,7 +72,7 @@ export function issueMessage(iss: z.core.$ZodRawIssue): string {
   }
 }
 
-// Reading order: keys in the order the contract lists them, indices ascending.
+// Reading order: keys in the order docs/plan-format.md §2.11 "Validation reports" lists them, indices ascending.
 const KEY_ORDER = [
   "format",
   "name",

@@ -9,7 +9,8 @@ export function SourcesSection() {
     <Section title="Sources of reference values">
       <ul className="list-disc pl-5 text-xs">
         <li>
-          Rules, units and the result document: Heterolane plan model v1 (heterolane.plan/1, heterolane.result/1).
+          Rules, units and the result document: the Heterolane plan format, version 1 (docs/plan-format.md:
+          heterolane.plan/1, heterolane.result/1).
         </li>
         <li>
           NEΔT: the total-power radiometer equation with gain fluctuations, (T_A + T_R)·√(1/(Bτ) + (ΔG/G)²), generalised

@@ -24,7 +24,7 @@ export function ifLane(chain: Chain): Lane {
   };
 }
 
-/** Severity of a spur family that hits a slot (plan-format.md, spur families table). */
+/** Severity of a spur family that hits a slot (docs/plan-format.md §5.1 "Families"). */
 function spurSeverity(family: string, order: number, hits: number): Severity | null {
   if (hits === 0) return null;
   if (family === "harmonic" || family === "intermod") return order <= 3 ? "info" : null;

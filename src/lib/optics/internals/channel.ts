@@ -1,4 +1,4 @@
-/** A channel as the plan stores it (plan-format.md, `channels[]`). */
+/** A channel as the plan stores it (docs/plan-format.md §2.7 `channels[]`). */
 export interface ChannelSpec {
   centerGHz: number;
   /** d of a double-sideband channel c ± d, null for a single passband. */

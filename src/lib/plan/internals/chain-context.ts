@@ -6,7 +6,7 @@ import { lockReplicaDB } from "./lock-replica";
 
 /**
  * Everything about one channel that does not depend on the LO offset L
- * (plan-format.md, "Derived quantities (per channel)"). Frequencies in GHz.
+ * (docs/plan-format.md §3.2 "Per channel"). Frequencies in GHz.
  */
 export interface ChannelContext {
   channel: PlanChannel;
@@ -32,7 +32,7 @@ export interface ChannelContext {
 
 /**
  * Everything about one chain that does not depend on L
- * (plan-format.md, "Derived quantities (per chain)"). Frequencies in GHz,
+ * (docs/plan-format.md §3.1 "Per chain"). Frequencies in GHz,
  * powers in mW.
  */
 export interface ChainContext {

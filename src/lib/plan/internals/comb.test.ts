@@ -15,7 +15,7 @@ function bruteComb(x: number, fsr: number, delta: number, N = 20000): number {
 }
 
 describe("comb C(x) = Σₙ Mₙ(x)", () => {
-  it("closed form agrees with a brute-force sum over n (plan-format.md comb formula; common practice check)", () => {
+  it("closed form agrees with a brute-force sum over n (docs/plan-format.md §3.1 comb formula; common practice check)", () => {
     for (const [fsr, delta] of [
       [183.31, 0.01934],
       [118.75, 0.97],

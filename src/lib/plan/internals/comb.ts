@@ -1,6 +1,6 @@
 /**
  * The whole comb of resonator modes, `C(x) = Σₙ Mₙ(x)` over every integer n,
- * in closed form (plan-format.md, "Derived quantities (per chain)"):
+ * in closed form (docs/plan-format.md §3.1 "Per chain"):
  * `C(x) = π·a·sinh(2πa) / (cosh(2πa) − cos(2πx/fsr))`, `a = δ/(2·fsr)`.
  * This is the Mittag-Leffler / Poisson sum of Lorentzians (the Airy-type
  * function of a Fabry-Perot comb; see Gradshteyn & Ryzhik 1.445.2 for

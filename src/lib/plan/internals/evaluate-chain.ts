@@ -32,7 +32,7 @@ export interface EvaluateOptions {
 export interface ChainEvaluation {
   L: number;
   channels: ChannelAtOffset[];
-  /** Every finding of the chain and its channels, in contract order. */
+  /** Every finding of the chain and its channels, in the order of docs/plan-format.md §4.3. */
   findings: Finding[];
   /** Every kept spur of the chain (family in table order, then band); in map-only mode the error families only. */
   spurs: Spur[];
@@ -44,7 +44,7 @@ export interface ChainEvaluation {
  *
  * The geometry at L is worked out once (`offsetState`); each rule family
  * (`rules/`) reads it and adds its findings to one `FindingsCollector`,
- * which puts them in contract order.
+ * which puts them in the order of docs/plan-format.md §4.3 "Order of findings".
  */
 export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOptions = {}): ChainEvaluation {
   const at = offsetState(ctx, L, options.mapOnly === true);

@@ -24,8 +24,8 @@ const byRule = (a: Finding, b: Finding) => ruleRank(a.code) - ruleRank(b.code);
  * The one place the rule families of `evaluateChain` hand their findings
  * to. It owns what every finding shares: the chain and channel ids, the
  * default severity of each code (`RULE_SEVERITY`), JSON-safe data, and the
- * contract order (plan-format.md, "Rules"): chain-level findings first,
- * then per channel in input order, codes in rules-table order, stable
+ * order of docs/plan-format.md §4.3 "Order of findings": chain-level
+ * findings first, then per channel in input order, codes in rules-table order, stable
  * within a code (so a family adds the findings of one code in the order
  * they are to be listed; the order of the families does not matter).
  */
@@ -66,7 +66,7 @@ export class FindingsCollector {
     else (this.#perChannel[channelIndex] as Finding[]).push(f);
   }
 
-  /** Every finding added so far, in contract order (sorts the collected lists in place). */
+  /** Every finding added so far, in the order of §4.3 (sorts the collected lists in place). */
   ordered(): Finding[] {
     const findings = [...this.#chain.sort(byRule)];
     for (const list of this.#perChannel) findings.push(...list.sort(byRule));

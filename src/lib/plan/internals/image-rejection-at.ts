@@ -4,7 +4,7 @@ import { imageAt, slotAt } from "./slot";
 
 /**
  * Image rejection `R = 10·log10(∫W/∫Wᵢ)` in dB of one SSB channel with the
- * chain's LO at `L` (plan-format.md, "Image"). Returns `+Infinity` when
+ * chain's LO at `L` (docs/plan-format.md §3.2 "Per channel", Image). Returns `+Infinity` when
  * `∫Wᵢ = 0` (nothing of the image gets in), and null when the channel has
  * no image figure at L (DSB channel, or the LO lies inside its band).
  *

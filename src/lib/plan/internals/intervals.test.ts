@@ -16,7 +16,7 @@ const iv = fc
   .tuple(fc.double({ min: -50, max: 50, noNaN: true }), fc.double({ min: 0, max: 20, noNaN: true }))
   .map(([a, w]): Interval => [a, a + w]);
 
-describe("interval arithmetic (plan-format.md)", () => {
+describe("interval arithmetic (docs/plan-format.md §1.3 and §5.5)", () => {
   it("gap is negative for overlapping intervals and the distance otherwise", () => {
     expect(gap([1, 2], [3, 5])).toBe(1);
     expect(gap([1, 4], [3, 5])).toBe(-1);
@@ -57,7 +57,7 @@ describe("interval arithmetic (plan-format.md)", () => {
     );
   });
 
-  it("IM3 of 1.0 and 1.1 GHz tones: 2f1 − f2 = 0.9 GHz, 2f2 − f1 = 1.2 GHz (domain-reference.md §8, derived check)", () => {
+  it("IM3 of 1.0 and 1.1 GHz tones: 2f1 − f2 = 0.9 GHz, 2f2 − f1 = 1.2 GHz (derived check, docs/calculations.md)", () => {
     const f1: Interval = [1.0, 1.0];
     const f2: Interval = [1.1, 1.1];
     expect(absInterval(subScaled(2, f1, 1, f2))[0]).toBeCloseTo(0.9, 12);
@@ -89,7 +89,7 @@ describe("interval arithmetic (plan-format.md)", () => {
 });
 
 describe("Nyquist folding", () => {
-  it("1.2 GHz sampled at 1 GHz aliases to 0.2 GHz in zone 3, upright (domain-reference.md §8 item 12, sampling theorem)", () => {
+  it("1.2 GHz sampled at 1 GHz aliases to 0.2 GHz in zone 3, upright (sampling theorem; derived in docs/plan-format.md §5.4)", () => {
     expect(foldFrequency(1.2, 1)).toBeCloseTo(0.2, 12);
     expect(nyquistZone(1.2, 1) + 1).toBe(3); // 1-based zone number
     // zone 3 (odd, 1-based) is upright: a rising frequency folds to a rising alias

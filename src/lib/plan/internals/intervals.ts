@@ -1,6 +1,6 @@
 import { TOL } from "./tolerance";
 
-/** A closed interval `[lo, hi]` (plan-format.md: intervals are closed). */
+/** A closed interval `[lo, hi]` (docs/plan-format.md §1.3: intervals are closed). */
 export type Interval = readonly [number, number];
 
 export function interval(lo: number, hi: number): Interval {
@@ -9,7 +9,7 @@ export function interval(lo: number, hi: number): Interval {
 
 /**
  * The gap between two intervals, `max(a.lo, b.lo) − min(a.hi, b.hi)`;
- * negative when they overlap (plan-format.md).
+ * negative when they overlap (docs/plan-format.md §1.3 "Intervals, gap and guard").
  */
 export function gap(a: Interval, b: Interval): number {
   return Math.max(a[0], b[0]) - Math.min(a[1], b[1]);
@@ -75,7 +75,7 @@ export function intersect(a: Interval, b: Interval): Interval | null {
   return lo <= hi ? [lo, hi] : null;
 }
 
-/** Sort and merge intervals that overlap or touch (plan-format.md: reach intervals). */
+/** Sort and merge intervals that overlap or touch (docs/plan-format.md §1.3: reach intervals). */
 export function mergeIntervals(list: readonly Interval[]): Interval[] {
   const sorted = [...list].sort((p, q) => p[0] - q[0] || p[1] - q[1]);
   const out: [number, number][] = [];

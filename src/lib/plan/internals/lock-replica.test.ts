@@ -3,8 +3,8 @@ import { describe, expect, it } from "vitest";
 import { besselJ } from "./bessel";
 import { lockOrderWeightDB, lockReplicaDB } from "./lock-replica";
 
-describe("lock replica share (plan-format.md, Lock replica)", () => {
-  it("matches the contract formula written out directly (example 1: −24.715 dB)", () => {
+describe("lock replica share (docs/plan-format.md §3.2 'Per channel', Lock replica)", () => {
+  it("matches the format's formula written out directly (example 1: −24.715 dB)", () => {
     // fm = 60 MHz, β = 0.5, 2 orders, δ = 19.34 MHz, B = 10 MHz
     const fm = 0.06;
     const delta = 0.01934;

@@ -1,7 +1,7 @@
 import { besselJLog10Parts } from "./bessel";
 
 /**
- * Weight of lock order m in dB (plan-format.md, "Lock replica"; phase
+ * Weight of lock order m in dB (docs/plan-format.md §3.2 "Per channel", Lock replica; phase
  * modulation sidebands `J_m(β)`, e.g. Black, Am. J. Phys. 69, 79 (2001)):
  * `w_m = 20·log10|J_m(β)/J_0(β)| − 10·log10(1 + (2·m·fm/δ)²)`.
  */

@@ -1,6 +1,6 @@
 /**
  * Lorentzian mode response and its closed-form integrals
- * (plan-format.md, "Derived quantities"; the Lorentzian line shape of a
+ * (docs/plan-format.md §3.1 and §3.2; the Lorentzian line shape of a
  * resonator mode, e.g. Saleh & Teich, Fundamentals of Photonics, ch. 10).
  *
  * `M(x) = 1 / (1 + (2(x − x0)/δ)²)` with FWHM δ. With `u = 2(x − x0)/δ`,

@@ -1,6 +1,6 @@
 /**
  * Nyquist folding of the piecewise-linear interval functions of
- * `map-linear.ts` (plan-format.md, "Spur families"), and the L set where
+ * `map-linear.ts` (docs/plan-format.md §5.4 "Folding with a sample rate"), and the L set where
  * a band straddles a zone edge. The zone edges met on a piece are
  * enumerated up to `MAX_ZONE_CROSSINGS`; each edge tried is one work step.
  */
@@ -61,7 +61,7 @@ function widerThan(p: Piece, w: number): boolean {
 }
 
 /**
- * Nyquist folding into `[0, h]`, h = fs/2 (plan-format.md, "Spur families"):
+ * Nyquist folding into `[0, h]`, h = fs/2 (docs/plan-format.md §5.4):
  * zone `z = floor(f/h)`, even zones shift down, odd zones mirror; a band
  * crossing one zone edge `K·h` reaches 0 (K even) or h (K odd), one holding a
  * whole zone becomes `[0, h]`. Input edges must be ≥ 0. Each zone edge

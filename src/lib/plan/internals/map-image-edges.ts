@@ -4,7 +4,7 @@ import { type WorkCounter, countSteps } from "./work-counter";
 
 /**
  * The edges of the image rule's firing set for the feasibility map
- * (plan-format.md, "Feasibility map and place"): the fast grid search the
+ * (docs/plan-format.md §6.3 "The image rule"): the fast grid search the
  * map uses and, beside it, the plain scan of the same grid it is tested
  * against. The comb and the rule itself are in `map-image.ts`.
  */
@@ -19,14 +19,14 @@ export const MAX_GRID_POINTS = 2_000_000;
 /**
  * Bisection bracket width for an image-rule map edge (GHz). Where doubles
  * near L are spaced wider than this, the bisection ends when the midpoint
- * rounds to an end (ADR 005).
+ * rounds to an end (ADR 018).
  */
 export const IMAGE_EDGE_BRACKET = 1e-6;
 
 /**
  * The L intervals inside `[lo, hi]` (a piece of the reach outside the
  * channel's band) where the image rule fires for an SSB channel, by the
- * contract's procedure (plan-format.md, "Feasibility map and place"): only
+ * procedure of docs/plan-format.md §6.3 "The image rule": only
  * the windows where `X'` comes within `r` of a mode centre are searched;
  * each window is split at the kinks where `X'` crosses a `±rfInput` edge;
  * on each piece the rule is evaluated on a grid of step ≤ min(δ, B)/16, and

@@ -3,9 +3,9 @@ import type { MapChannel, MapModel } from "./map-model";
 import { type WorkCounter, countSteps } from "./work-counter";
 
 /**
- * The image rule for the feasibility map (plan-format.md, "Derived
- * quantities (per channel)", Image, and "Feasibility map and place"). The
- * comb integrals and the comb's inverse are the engine's closed forms
+ * The image rule for the feasibility map (docs/plan-format.md §3.2 "Per
+ * channel", Image, and §6.3 "The image rule"). The comb integrals and the
+ * comb's inverse are the engine's closed forms
  * (internals/comb.ts), so the map and the per-offset findings use the
  * same numbers. The search for the rule's edges is in `map-image-edges.ts`.
  */

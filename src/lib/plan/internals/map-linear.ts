@@ -1,6 +1,6 @@
 /**
  * Exact piecewise-linear interval functions of the LO offset `L`, for the
- * feasibility map (plan-format.md, "Feasibility map and place": every slot
+ * feasibility map (docs/plan-format.md §6.2 "Exact edges": every slot
  * edge and spur edge is piecewise linear in L).
  *
  * A `Lin` is `a + b·L`. A `Piece` is an interval-valued function
@@ -80,8 +80,8 @@ export function absFn(fn: IFn): IFn {
 
 /**
  * Intersection with `[min, max]`; where it is empty the piece is dropped
- * (plan-format.md: a spur with an empty intersection with the detector band
- * is dropped).
+ * (docs/plan-format.md §5.2 "Building a spur band": a spur with an empty
+ * intersection with the detector band is dropped).
  */
 export function clipFn(fn: IFn, min: number, max: number): IFn {
   const out: IFn = [];
@@ -115,7 +115,7 @@ export function pushInterval(out: LSet, lo: number, hi: number): void {
   } else out.push([lo, hi]);
 }
 
-/** The rounding allowance of threshold comparisons (plan-format.md), in GHz. */
+/** The rounding allowance of threshold comparisons (docs/plan-format.md §1.4 "The 1e-9 allowance"), in GHz. */
 const TOL = 1e-9;
 
 /**

@@ -8,7 +8,7 @@ export type MapCode = LDependentErrorCode;
 /**
  * The codes that shape the feasibility map: the engine's
  * `L_DEPENDENT_ERROR_CODES`, taken in rules-table order (`RULE_ORDER`) so
- * that a mask's codes come out in the order the contract lists them.
+ * that a mask's codes come out in the order docs/plan-format.md §4.1 lists them.
  */
 export const MAP_CODES: readonly MapCode[] = RULE_ORDER.filter((c): c is MapCode =>
   L_DEPENDENT_ERROR_CODES.includes(c),
@@ -73,7 +73,7 @@ export interface MapModel {
   channels: MapChannel[];
 }
 
-/** Merge intervals that overlap or touch (plan-format.md: reach intervals). */
+/** Merge intervals that overlap or touch (docs/plan-format.md §1.3: reach intervals). */
 export function mergeTouching(list: readonly (readonly [number, number])[]): [number, number][] {
   const sorted = list.map((r) => [r[0], r[1]] as [number, number]).sort((p, q) => p[0] - q[0] || p[1] - q[1]);
   const out: [number, number][] = [];

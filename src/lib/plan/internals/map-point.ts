@@ -4,7 +4,7 @@ import { MAX_LOCK_ORDER_ENUMERATED } from "./spurs";
 
 /**
  * The L-dependent error codes of one chain at one LO offset, evaluated
- * directly from the rules (plan-format.md, "Rules" and "Spur families"),
+ * directly from the rules (docs/plan-format.md §4.1 "The rules" and §5 "Spur families"),
  * as a code-set mask (`CODE_BIT`). This is the lean per-offset check: it
  * skips every rule that cannot produce an error (harmonic and intermod
  * spurs, warnings, L-independent rules) and stops looking for a code once
@@ -55,7 +55,7 @@ export function makePointEvaluator(m: MapModel): (L: number) => number {
   const zone = new Float64Array(n); // −1: straddles (left out of alias-overlap)
   const tmp: [number, number] = [0, 0];
   // image rule: it cannot fire unless X' comes within r of a mode centre
-  // (plan-format.md, "Feasibility map and place": ∫Wᵢ ≤ B·max C over X')
+  // (docs/plan-format.md §6.3 "The image rule": ∫Wᵢ ≤ B·max C over X')
   const imageRadius = m.channels.map((ch) =>
     ch.ssb ? combRadius(comb, Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / ch.widthGHz)) : -1,
   );

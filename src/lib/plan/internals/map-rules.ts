@@ -23,7 +23,7 @@ import { type WorkCounter, countSteps } from "./work-counter";
  * intervals where it fires (unsorted, possibly overlapping). Every edge is
  * the solution of a limiting equality (gap = guard, edge = detector bound,
  * edge = k·fs/2, …) except those of `image-response`, which are bisected to
- * 1e-6 GHz (plan-format.md, "Feasibility map and place").
+ * 1e-6 GHz (docs/plan-format.md §6.2 "Exact edges" and §6.3 "The image rule").
  */
 export type FiringSets = Record<MapCode, LSet>;
 

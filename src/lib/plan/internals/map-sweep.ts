@@ -3,7 +3,7 @@ import { MAP_CODES } from "./map-model";
 import { firingSets } from "./map-rules";
 import type { WorkCounter } from "./work-counter";
 
-/** Breakpoints closer than this (GHz) are merged (plan-format.md). */
+/** Breakpoints closer than this (GHz) are merged (docs/plan-format.md §6.2 "Exact edges"). */
 export const MERGE_GHZ = 1e-9;
 
 /** One piece of the reach union with the constant set of firing codes (`CODE_BIT` mask). */

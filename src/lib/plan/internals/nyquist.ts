@@ -2,10 +2,10 @@ import type { Interval } from "./intervals";
 import { TOL } from "./tolerance";
 
 /**
- * Nyquist folding of a sampled IF (plan-format.md, "Spur families"): with
- * `h = fs/2`, zone `z = floor(f/h)`; even zones shift down by `z·h`, odd
- * zones mirror to `(z+1)·h − f`. Zones are numbered from 0 here (the
- * 1-based numbering of domain-reference.md §4 #16 is `z + 1`).
+ * Nyquist folding of a sampled IF (docs/plan-format.md §5.4 "Folding with
+ * a sample rate"): with `h = fs/2`, zone `z = floor(f/h)`; even zones shift
+ * down by `z·h`, odd zones mirror to `(z+1)·h − f`. Zones are numbered from
+ * 0 here (findings report the 1-based zone `z + 1`, as in §5.4).
  */
 export function nyquistZone(f: number, sampleRateGHz: number): number {
   return Math.floor(f / (sampleRateGHz / 2));

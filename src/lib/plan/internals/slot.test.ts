@@ -107,7 +107,7 @@ describe("IF slot and image geometry", () => {
     expect(edge.slot[1]).toBeCloseTo(0.01, 12);
   });
 
-  it("a DSB channel with a centred LO has the slot [d − B/2, d + B/2] (plan-format.md)", () => {
+  it("a DSB channel with a centred LO has the slot [d − B/2, d + B/2] (docs/plan-format.md §3.2 'Per channel')", () => {
     const ctx = ctxWith(1e5);
     const ch = channelContext(ctx, channel({ centerGHz: 183.311, bandwidthMHz: 1000, dsbOffsetGHz: 3 }), 0);
     const geo = slotAt(ch, 183.311, ctx.D)!;

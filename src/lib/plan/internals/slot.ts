@@ -22,7 +22,7 @@ export interface SlotGeometry {
   occupied: Interval;
 }
 
-/** The optical band that L lies strictly inside, or null (plan-format.md: `lo-in-band`). */
+/** The optical band that L lies strictly inside, or null (docs/plan-format.md §3.2 "Per channel": `lo-in-band`). */
 export function bandHoldingLo(ch: ChannelContext, L: number): Interval | null {
   for (const x of ch.optical) if (strictlyInside(L, x)) return x;
   return null;
@@ -43,7 +43,7 @@ export function slotAt(ch: ChannelContext, L: number, D: number): SlotGeometry |
   return { images, slot, occupied: [slot[0] - D, slot[1] + D] };
 }
 
-/** Sensitivity figures of a channel at L (plan-format.md, "Sensitivity"). */
+/** Sensitivity figures of a channel at L (docs/plan-format.md §3.2 "Per channel", Sensitivity). */
 export interface Sensitivity {
   /** ∫W dy, ∫W² dy and the length of the union of the band images, in GHz. */
   intW: number;
@@ -89,7 +89,7 @@ export function sensitivityAt(ctx: ChainContext, ch: ChannelContext, geo: SlotGe
   return { intW: ch.intW, intW2, unionGHz, intS, intS2, nedtK, radiometricBandwidthMHz };
 }
 
-/** Image band of an SSB channel at L (plan-format.md, "Image"). */
+/** Image band of an SSB channel at L (docs/plan-format.md §3.2 "Per channel", Image). */
 export interface ImageFigures {
   /** Optical image band `X' = 2L − X`. */
   opticalImage: Interval;

@@ -6,7 +6,7 @@ import { evaluateChain } from "./evaluate-chain";
 import { errorSpursAt, infoSpurs } from "./spurs";
 import { slotAt } from "./slot";
 
-describe("spur families (plan-format.md, Spur families)", () => {
+describe("spur families (docs/plan-format.md §5 'Spur families')", () => {
   it("carrier-beat |L| and lock-lo |L ± m·fm| are widened by D and dropped outside the detector band", () => {
     // example 1 with a wide detector so the carrier beat near 184.81 GHz is kept
     const ctx = chainContext(

@@ -5,7 +5,7 @@ import type { SlotGeometry } from "./slot";
 import { type WorkCounter, countSteps } from "./work-counter";
 
 /**
- * One spur band of a chain at a given L (plan-format.md, "Spur families"):
+ * One spur band of a chain at a given L (docs/plan-format.md §5.2 "Building a spur band"):
  * already widened for drift, folded to `|·|` and intersected with the
  * detector band.
  */
@@ -19,7 +19,7 @@ export interface SpurBand {
 /**
  * Enumeration limit for the lock families: orders above this are not
  * listed (the schema accepts any integer `orders`; physically only the
- * first few carry power). See docs/decisions/004-plan-contract-readings.md.
+ * first few carry power). See docs/decisions/017-plan-contract-readings.md.
  */
 export const MAX_LOCK_ORDER_ENUMERATED = 10_000;
 
@@ -139,7 +139,7 @@ export function infoSpurs(ctx: ChainContext, slots: readonly (SlotGeometry | nul
       for (let a = 1; a < N; a++) {
         for (let b = 1; a + b <= N; b++) {
           const w = (a + b) * D;
-          // a·[li,hi] + b·[lj,hj] and a·[li,hi] − b·[lj,hj] (plan-format.md interval arithmetic), widened by (a+b)·D
+          // a·[li,hi] + b·[lj,hj] and a·[li,hi] − b·[lj,hj] (docs/plan-format.md §5.5 "Interval arithmetic"), widened by (a+b)·D
           const sum = keepRaw("intermod", a + b, a * li + b * lj - w, a * hi + b * hj + w, det, intermod);
           if (sum) sum.source = `${a}·${pi.id}+${b}·${pj.id}`;
           const diff = keepRaw("intermod", a + b, a * li - b * hj - w, a * hi - b * lj + w, det, intermod);

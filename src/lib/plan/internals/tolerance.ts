@@ -1,7 +1,7 @@
 /**
- * The rounding allowance of every threshold comparison (plan-format.md,
- * "Units and conventions"): 1e-9 in the unit of the quantity (GHz, dB, K,
- * mW), always in favour of passing.
+ * The rounding allowance of every threshold comparison
+ * (docs/plan-format.md §1.4 "The 1e-9 allowance"): 1e-9 in the unit of the
+ * quantity (GHz, dB, K, mW), always in favour of passing.
  */
 export const TOL = 1e-9;
 

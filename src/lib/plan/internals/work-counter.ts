@@ -8,7 +8,7 @@
  * channels, bands, reach intervals, `spurMaxOrder`): a lock order of a lock
  * spur family, a zone edge `k·fs/2` of a Nyquist fold or straddle, a mode
  * window or an image-rule evaluation of the image search. These are the
- * loops ADR 005 bounds with the engine's limits (`MAX_LOCK_ORDER_ENUMERATED`,
+ * loops ADR 018 bounds with the engine's limits (`MAX_LOCK_ORDER_ENUMERATED`,
  * `MAX_ZONE_CROSSINGS`, `MAX_WINDOWS`, `MAX_GRID_POINTS`); the structural
  * loops around them are not counted.
  */

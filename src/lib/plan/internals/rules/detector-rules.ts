@@ -3,7 +3,7 @@ import { fBand, fMHz, pair } from "../format";
 import { insideOf, outsideBy } from "../intervals";
 import type { OffsetState } from "../offset-state";
 
-/** The detector rule (plan-format.md, "Rules"): `if-outside-detector`, per channel with a slot. */
+/** The detector rule (docs/plan-format.md §4.1 "The rules"): `if-outside-detector`, per channel with a slot. */
 export function detectorRules(at: OffsetState, out: FindingsCollector): void {
   const { ctx } = at;
   at.channels.forEach(({ ch, geo }, i) => {

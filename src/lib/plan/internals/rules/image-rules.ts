@@ -3,7 +3,7 @@ import { fBand, fDB, pair } from "../format";
 import type { OffsetState } from "../offset-state";
 import { fallsShort } from "../tolerance";
 
-/** The image rule (plan-format.md, "Rules"): `image-response`, per SSB channel with a slot. */
+/** The image rule (docs/plan-format.md §4.1 "The rules"): `image-response`, per SSB channel with a slot. */
 export function imageRules(at: OffsetState, out: FindingsCollector): void {
   const required = at.ctx.plan.settings.imageRejectionDB;
   at.channels.forEach(({ ch, image }, i) => {

@@ -6,7 +6,7 @@ import { bandHoldingLo } from "../slot";
 import { TOL, exceeds } from "../tolerance";
 
 /**
- * The LO rules (plan-format.md, "Rules"): `lo-uncovered` and `lo-off-step`
+ * The LO rules (docs/plan-format.md §4.1 "The rules"): `lo-uncovered` and `lo-off-step`
  * for the chain, `lo-in-band` and `dsb-lo-off-centre` per channel.
  */
 export function loRules(at: OffsetState, out: FindingsCollector): void {

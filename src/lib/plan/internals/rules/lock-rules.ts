@@ -4,7 +4,7 @@ import type { OffsetState } from "../offset-state";
 import { exceeds, fallsShort } from "../tolerance";
 
 /**
- * The lock rules, neither of which depends on L (plan-format.md, "Rules"):
+ * The lock rules, neither of which depends on L (docs/plan-format.md §4.1 "The rules"):
  * `lock-inside-mode` for the chain and `lock-replica` per channel. Skipped
  * in map-only mode.
  */

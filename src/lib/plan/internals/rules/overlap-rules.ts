@@ -4,7 +4,7 @@ import { gap, withinGuard } from "../intervals";
 import type { ChannelAtOffset, OffsetState } from "../offset-state";
 
 /**
- * The pair rule `slot-overlap` (plan-format.md, "Rules"): occupied IF
+ * The pair rule `slot-overlap` (docs/plan-format.md §4.1 "The rules"): occupied IF
  * bands of two channels within guard, listed under the first of the pair.
  * A warning when the chain has `sharedIf` (then skipped in map-only mode,
  * where only errors count).

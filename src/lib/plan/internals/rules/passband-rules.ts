@@ -5,8 +5,8 @@ import type { OffsetState } from "../offset-state";
 import { exceeds } from "../tolerance";
 
 /**
- * The passband rules, none of which depends on L (plan-format.md,
- * "Rules"): `band-outside-rf-input`, `mode-detuned` and
+ * The passband rules, none of which depends on L (docs/plan-format.md
+ * §4.1 "The rules"): `band-outside-rf-input`, `mode-detuned` and
  * `band-wider-than-mode`, per channel. Skipped in map-only mode.
  */
 export function passbandRules(at: OffsetState, out: FindingsCollector): void {

@@ -5,7 +5,7 @@ import { exceeds } from "../tolerance";
 
 /**
  * The optical power rules of the chain, neither of which depends on L
- * (plan-format.md, "Rules"): `carrier-dominates-lo` and `pd-overload`.
+ * (docs/plan-format.md §4.1 "The rules"): `carrier-dominates-lo` and `pd-overload`.
  * Skipped in map-only mode.
  */
 export function powerRules(at: OffsetState, out: FindingsCollector): void {

@@ -5,7 +5,7 @@ import { interiorNyquistEdge, nyquistZone } from "../nyquist";
 import type { ChannelAtOffset, OffsetState } from "../offset-state";
 
 /**
- * The rules of a sampled IF (plan-format.md, "Rules"): `noise-folding` for
+ * The rules of a sampled IF (docs/plan-format.md §4.1 "The rules"): `noise-folding` for
  * the chain (L-independent, skipped in map-only mode), `nyquist-straddle`
  * per channel and the pair rule `alias-overlap`. Nothing without a sample
  * rate.
@@ -27,7 +27,7 @@ export function samplingRules(at: OffsetState, out: FindingsCollector): void {
       );
     }
   }
-  // the interior of O itself (plan-format.md); folding below uses |O|
+  // the interior of O itself (docs/plan-format.md §5.4); folding below uses |O|
   const straddles = channels.map((c) => (c.geo ? interiorNyquistEdge(c.geo.occupied, fs) : null));
   channels.forEach((c, i) => {
     const edge = straddles[i];

@@ -4,7 +4,7 @@ import type { OffsetState } from "../offset-state";
 import { exceeds } from "../tolerance";
 
 /**
- * The sensitivity rule (plan-format.md, "Rules"): `nedt-unmet`, per
+ * The sensitivity rule (docs/plan-format.md §4.1 "The rules"): `nedt-unmet`, per
  * channel with a slot and a required NEΔT. Skipped in map-only mode (no
  * sensitivity is worked out there).
  */

@@ -31,7 +31,7 @@ const spurText = (b: SpurBand) =>
     : `${b.family} spur ${b.source} at ${fBand(b.band)}`;
 
 /**
- * The spur rule `spur-in-slot` (plan-format.md, "Spur families"): every
+ * The spur rule `spur-in-slot` (docs/plan-format.md §5 "Spur families"): every
  * spur band of the chain at L (the error families, and in the full check
  * the harmonic and intermodulation families of the slots), the channels
  * each comes within guard of (directly or after folding), one error per
