@@ -4,7 +4,7 @@ import type { ChainInput, ChannelInput, DetectorInput, LaserInput, ResonatorInpu
 
 /**
  * Row ↔ API entity mapping. API entities mirror the plan document fields
- * (docs: plan-format.md) plus id, key, version and timestamps; chains name
+ * (docs/plan-format.md §2 "The plan document") plus id, key, version and timestamps; chains name
  * hardware by row id and channels their chain by row id.
  */
 
