@@ -218,6 +218,9 @@ export type TuningMapQuery = z.infer<typeof tuningMapQuerySchema>;
 
 export const channelsUploadQuerySchema = z.object({ apply: flag });
 
+/** POST …/plan: `baseRevision`, when given, is the revision the document was read at (stale → 409). */
+export const planImportQuerySchema = z.object({ baseRevision: numberParam(r.count(1)).optional() });
+
 export const detectorResponseQuerySchema = z.object({
   detectorId: rowIdSchema,
   dropDB: numberParam(r.positive()).default(3),

@@ -3,7 +3,7 @@ import type { z } from "zod";
 import type { Permission } from "@/lib/permissions";
 import { zodIssues, type Issue } from "@/schemas/issues";
 import type { Actor } from "@/server/auth/actor";
-import { requireActor } from "@/server/auth/guard";
+import { requireRouteActor } from "@/server/auth/guard";
 import { errorResponse, invalidInput, readJsonBody } from "./http";
 
 /** Any member of the active team, whatever their role. */
@@ -47,8 +47,10 @@ export type RouteArgs = { params?: Promise<Record<string, string | string[]>> };
  * The one route guard. Every handler under app/api (except better-auth's
  * catch-all and the health probe) is `guarded(access, spec, handler)`:
  *
- * 1. loads the caller once and checks `access` — 401 signed out, 403 with no
- *    active team or a role that may not act — before any other work;
+ * 1. loads the caller once (the session, or on /api/v1 an API token:
+ *    `readRouteCaller`) and checks `access` — 401 signed out or with a bad
+ *    token, 403 with no active team or a role that may not act — before any
+ *    other work;
  * 2. parses the query and the JSON body with the spec's zod schemas and
  *    answers 400 `invalid-input` with every issue of both (413 for a body
  *    above its limit, 400 `invalid-json` for malformed JSON);
@@ -62,7 +64,7 @@ export function guarded<K extends string = never, B extends Schema = undefined, 
 ) {
   return async (request: Request, args?: RouteArgs): Promise<Response> => {
     try {
-      const actor = await requireActor(request.headers, access === ANY_MEMBER ? undefined : access, spec.what);
+      const actor = await requireRouteActor(request, access === ANY_MEMBER ? undefined : access, spec.what);
       const params = await routeParams<K>(args, spec.params ?? []);
       const { body, query } = await parseInput(request, spec);
       return await handler({

@@ -10,6 +10,7 @@ import { getMissionRow, lockMission } from "@/server/core/mission-scope";
 import { assemblePlan } from "./assemble";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { channelFigures } from "./mappers";
+import { getLatestRevision } from "./queries";
 
 /**
  * The `heterolane.plan/1` document of the mission's current draft. No team
@@ -31,17 +32,32 @@ export async function exportPlanDocument(actor: Actor, missionId: string) {
  * an invalid document answers 400 `invalid-plan` with every issue and
  * changes nothing) and stores the result as a new revision. The plan's
  * name becomes the mission's name, so exporting gives the same document.
+ * With `baseRevision` (the revision the document was read at), a mission
+ * whose latest revision is another answers 409 `stale-version` naming the
+ * current revision, and nothing is imported.
  */
 export async function importPlanDocument(
   actor: Actor,
   missionId: string,
   body: unknown,
+  opts: { baseRevision?: number } = {},
 ): Promise<{ revision: RevisionInfo }> {
   const parsed = parsePlan(body);
   if (!parsed.ok)
     throw new HttpError(400, "invalid-plan", "The plan document is not valid; nothing was imported.", parsed.issues);
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
+    if (opts.baseRevision !== undefined) {
+      const latest = (await getLatestRevision(missionId, tx))?.number ?? 0;
+      if (latest !== opts.baseRevision)
+        throw new HttpError(
+          409,
+          "stale-version",
+          `The plan changed since revision ${opts.baseRevision}: the current revision is ${latest}; nothing was imported. Pull it and apply your change again.`,
+          undefined,
+          { current: { revision: latest } },
+        );
+    }
     await replaceDraft(tx, missionId, parsed.plan);
     const p = parsed.plan;
     const revision = await saveAndCheck(tx, missionId, actor, {

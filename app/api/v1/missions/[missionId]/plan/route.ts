@@ -1,3 +1,4 @@
+import { planImportQuerySchema } from "@/schemas/workspace";
 import { guarded, json, readJsonBody } from "@/server/core";
 import { CAN, exportPlanDocument, importPlanDocument } from "@/server/workspace";
 
@@ -7,7 +8,18 @@ export const GET = guarded(CAN.export, { what: "export the plan", params }, asyn
   json(await exportPlanDocument(actor, params.missionId)),
 );
 
-/** Imports a plan document; it is validated by `parsePlan` (400 `invalid-plan` with every issue), not by a zod body schema. */
-export const POST = guarded(CAN.import, { what: "import plans", params }, async ({ request, actor, params }) =>
-  json(await importPlanDocument(actor, params.missionId, await readJsonBody(request, 5_000_000)), 201),
+/**
+ * Imports a plan document; it is validated by `parsePlan` (400 `invalid-plan` with every issue), not by a zod body schema.
+ * `?baseRevision=N`: only when the latest revision is still N (409 `stale-version` otherwise).
+ */
+export const POST = guarded(
+  CAN.import,
+  { what: "import plans", params, query: planImportQuerySchema, input: "query" },
+  async ({ request, actor, params, query }) =>
+    json(
+      await importPlanDocument(actor, params.missionId, await readJsonBody(request, 5_000_000), {
+        baseRevision: query.baseRevision,
+      }),
+      201,
+    ),
 );
