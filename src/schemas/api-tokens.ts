@@ -29,9 +29,7 @@ export const createTokenSchema = z
       .max(TOKEN_LIMITS.nameMax, { error: `The name must be at most ${TOKEN_LIMITS.nameMax} characters.` }),
     teamId: z.string({ error: "Choose a team." }).min(1, { error: "Choose a team." }),
     role: z.enum(TEAM_ROLES, { error: "Choose a role: owner, lead, engineer or viewer." }),
-    expiresInDays: whole("Days until expiry", TOKEN_LIMITS.expiresInDays).default(
-      TOKEN_LIMITS.expiresInDays.default,
-    ),
+    expiresInDays: whole("Days until expiry", TOKEN_LIMITS.expiresInDays).default(TOKEN_LIMITS.expiresInDays.default),
     requestsPerMinute: whole("Requests per minute", TOKEN_LIMITS.requestsPerMinute).default(
       TOKEN_LIMITS.requestsPerMinute.default,
     ),

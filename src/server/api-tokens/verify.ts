@@ -36,7 +36,10 @@ export const malformedToken = () =>
     "The Authorization header must be `Bearer <token>` with a Heterolane API token (hl_ and 64 letters).",
   );
 const invalidToken = () =>
-  refuse("invalid-token", "This API token is not valid: it may be mistyped or revoked. Make a new one on the account page.");
+  refuse(
+    "invalid-token",
+    "This API token is not valid: it may be mistyped or revoked. Make a new one on the account page.",
+  );
 const expiredToken = () => refuse("token-expired", "This API token has expired. Make a new one on the account page.");
 
 /** The token of an `Authorization: Bearer …` header, or a 401 for anything else. */

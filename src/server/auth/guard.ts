@@ -70,7 +70,11 @@ export async function readRouteCaller(request: Request): Promise<SessionAndActor
   const authorization = request.headers.get("authorization");
   if (authorization === null) return readActor(request.headers);
   if (!/^\/api\/v1(\/|$)/.test(url.pathname))
-    throw new HttpError(401, "token-not-accepted", "API tokens are accepted by the /api/v1 routes only; sign in instead.");
+    throw new HttpError(
+      401,
+      "token-not-accepted",
+      "API tokens are accepted by the /api/v1 routes only; sign in instead.",
+    );
   // Loaded on first use, so that session-only callers never load the token code.
   const { readTokenCaller } = await import("@/server/api-tokens/verify");
   const { actor, token } = await readTokenCaller(request);
