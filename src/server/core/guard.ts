@@ -40,6 +40,18 @@ export interface RouteContext<K extends string, B extends Schema, Q extends Sche
   query: Parsed<Q, Record<string, string>>;
 }
 
+/** What the OpenAPI description reads from a guarded handler: its access and spec (the same zod schemas it parses with). */
+export interface RouteMeta {
+  access: Access;
+  spec: RouteSpec<string, Schema, Schema>;
+}
+const ROUTE_META = Symbol.for("heterolane.route-meta");
+
+/** The access and spec of a handler made by `guarded`, or undefined for any other function. */
+export function routeMeta(handler: unknown): RouteMeta | undefined {
+  return (handler as { [ROUTE_META]?: RouteMeta } | null)?.[ROUTE_META];
+}
+
 /** The second argument Next passes to a route handler. */
 export type RouteArgs = { params?: Promise<Record<string, string | string[]>> };
 
@@ -62,7 +74,7 @@ export function guarded<K extends string = never, B extends Schema = undefined, 
   spec: RouteSpec<K, B, Q>,
   handler: (ctx: RouteContext<K, B, Q>) => Promise<Response>,
 ) {
-  return async (request: Request, args?: RouteArgs): Promise<Response> => {
+  const route = async (request: Request, args?: RouteArgs): Promise<Response> => {
     try {
       const actor = await requireRouteActor(request, access === ANY_MEMBER ? undefined : access, spec.what);
       const params = await routeParams<K>(args, spec.params ?? []);
@@ -78,6 +90,7 @@ export function guarded<K extends string = never, B extends Schema = undefined, 
       return errorResponse(err);
     }
   };
+  return Object.assign(route, { [ROUTE_META]: { access, spec } as RouteMeta });
 }
 
 async function routeParams<K extends string>(args: RouteArgs | undefined, names: readonly K[]) {
