@@ -1,3 +1,4 @@
+// Longer than 300 lines on purpose: one row per operation of /api/v1, all in one table.
 import {
   activityListSchema,
   commentListSchema,
@@ -63,8 +64,9 @@ import * as tuningUpload from "../missions/[missionId]/uploads/tuning-map/route"
 /**
  * Every operation of /api/v1 with the handler that serves it (whose guard
  * carries its access and input schemas) and the schema of its answer. A test
- * (tests/integration/openapi.test.ts) checks that this table names every
- * route file and exported method under app/api/v1.
+ * (src/server/api-docs/openapi.test.ts) checks that this table names every
+ * route file and exported method under app/api/v1; tests/integration/openapi.test.ts
+ * checks real answers against it.
  */
 
 const M = "/missions/{missionId}";
