@@ -20,22 +20,23 @@ const whole = (what: string, lim: { min: number; max: number }) =>
     .min(lim.min, { error: `${what} must be at least ${lim.min}` })
     .max(lim.max, { error: `${what} must be at most ${lim.max}` });
 
-export const createTokenSchema = z
-  .object({
-    name: z
-      .string({ error: "Give the token a name." })
-      .trim()
-      .min(1, { error: "Give the token a name." })
-      .max(TOKEN_LIMITS.nameMax, { error: `The name must be at most ${TOKEN_LIMITS.nameMax} characters.` }),
-    teamId: z.string({ error: "Choose a team." }).min(1, { error: "Choose a team." }),
-    role: z.enum(TEAM_ROLES, { error: "Choose a role: owner, lead, engineer or viewer." }),
-    expiresInDays: whole("Days until expiry", TOKEN_LIMITS.expiresInDays).default(TOKEN_LIMITS.expiresInDays.default),
-    requestsPerMinute: whole("Requests per minute", TOKEN_LIMITS.requestsPerMinute).default(
-      TOKEN_LIMITS.requestsPerMinute.default,
-    ),
-  })
-  .strict();
+export const createTokenSchema = z.object({
+  name: z
+    .string({ error: "Give the token a name." })
+    .trim()
+    .min(1, { error: "Give the token a name." })
+    .max(TOKEN_LIMITS.nameMax, { error: `The name must be at most ${TOKEN_LIMITS.nameMax} characters.` }),
+  teamId: z.string({ error: "Choose a team." }).min(1, { error: "Choose a team." }),
+  role: z.enum(TEAM_ROLES, { error: "Choose a role: owner, lead, engineer or viewer." }),
+  expiresInDays: whole("Days until expiry", TOKEN_LIMITS.expiresInDays).default(TOKEN_LIMITS.expiresInDays.default),
+  requestsPerMinute: whole("Requests per minute", TOKEN_LIMITS.requestsPerMinute).default(
+    TOKEN_LIMITS.requestsPerMinute.default,
+  ),
+});
 export type CreateTokenInput = z.infer<typeof createTokenSchema>;
+
+/** The JSON body of `POST /api/account/tokens`: the same fields, and no others (a form also sends React's own fields). */
+export const createTokenRequestSchema = createTokenSchema.strict();
 
 export const tokenIdSchema = z.object({
   tokenId: z.string({ error: "The token is missing." }).min(1, { error: "The token is missing." }),

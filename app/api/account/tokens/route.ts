@@ -1,4 +1,4 @@
-import { createTokenSchema } from "@/schemas/api-tokens";
+import { createTokenRequestSchema } from "@/schemas/api-tokens";
 import { ANY_MEMBER, guarded, json } from "@/server/core";
 import { createToken, listTokens } from "@/server/api-tokens/service";
 
@@ -14,6 +14,6 @@ export const GET = guarded(ANY_MEMBER, { what: "list tokens" }, async ({ actor }
 /** Makes a token; the answer holds the secret, once. */
 export const POST = guarded(
   ANY_MEMBER,
-  { what: "make tokens", body: createTokenSchema, bodyLimit: 10_000, input: "token" },
+  { what: "make tokens", body: createTokenRequestSchema, bodyLimit: 10_000, input: "token" },
   async ({ actor, body }) => json(await createToken(actor, body), 201, { "cache-control": "no-store" }),
 );
