@@ -50,6 +50,10 @@ describe("createTokenSchema", () => {
     expect(createTokenSchema.safeParse({ ...ok, $ACTION_KEY: "k" }).success).toBe(true);
     const r = createTokenRequestSchema.safeParse({ ...ok, colour: "red" });
     expect(r.success).toBe(false);
-    expect(zodIssues(r.error!).map((i) => i.message).join(" ")).toMatch(/colour/);
+    expect(
+      zodIssues(r.error!)
+        .map((i) => i.message)
+        .join(" "),
+    ).toMatch(/colour/);
   });
 });

@@ -31,7 +31,6 @@ import { makeToken, OpenApiChecker, TokenClient } from "./support/tokens";
 
 type Role = "owner" | "lead" | "engineer" | "viewer";
 const ROLES: Role[] = ["owner", "lead", "engineer", "viewer"];
-const ALL: Role[] = ROLES;
 const EDIT: Role[] = ["owner", "lead", "engineer"];
 const DECIDE: Role[] = ["owner", "lead"];
 const KINDS = ["lasers", "resonators", "detectors", "chains", "channels"] as const;

@@ -9,7 +9,7 @@
 import { existsSync, readFileSync } from "node:fs";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { closeTestPool, makeTeamWithRoles, TestClient, testPool, type TeamWithRoles } from "../setup/auth-helpers";
-import { call, missionWithPlan } from "../setup/workspace-helpers";
+import { call, missionWithPlan, type Reply } from "../setup/workspace-helpers";
 import { validPlanInput } from "../fixtures/valid-plan";
 import { makeToken, OpenApiChecker, TokenClient } from "./support/tokens";
 
@@ -18,7 +18,7 @@ let missionId = "";
 const answers: string[] = [];
 
 /** Every answer body, kept to check that none holds a token. */
-async function seen(r: Promise<{ status: number; text: string; body: any }>) {
+async function seen(r: Promise<Reply>) {
   const x = await r;
   answers.push(x.text);
   return x;
@@ -195,7 +195,7 @@ describe("rate limit per token", () => {
     const slow = await makeToken(team.viewer, { teamId: team.teamId, role: "viewer", requestsPerMinute: 3 });
     const other = await makeToken(team.viewer, { teamId: team.teamId, role: "viewer" });
     const statuses: number[] = [];
-    let last: { status: number; body: any } | undefined;
+    let last: Reply | undefined;
     for (let i = 0; i < 4; i++) {
       last = await seen(call(slow.client, "GET", "/api/v1/missions"));
       statuses.push(last.status);
