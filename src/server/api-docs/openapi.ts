@@ -146,7 +146,6 @@ export function openApiDocument(operations: readonly Operation[], version: strin
         "in the URL. Errors are `{ error: { code, message, issues? } }`. See docs/automation.md.",
     },
     servers: [{ url: "/api/v1" }],
-    jsonSchemaDialect: "https://json-schema.org/draft/2020-12/schema",
     tags: [...new Set(operations.map((o) => o.tag))].map((name) => ({ name })),
     paths,
     components: {
