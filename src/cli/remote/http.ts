@@ -72,7 +72,8 @@ async function refusal(res: Response): Promise<CliError> {
     body = {};
   }
   const e = body.error ?? {};
-  const code: ExitCode = BY_STATUS[res.status] ?? (res.status >= 500 ? EXIT.server : EXIT.internal);
+  // Anything else (a redirect, a 5xx, an unexpected status) is the server failing us.
+  const code: ExitCode = BY_STATUS[res.status] ?? EXIT.server;
   const message = e.message ?? `The server answered ${res.status}.`;
   const details = (e.issues ?? []).map((i) => `${i.path === "" ? "(document)" : i.path}: ${i.message}`);
   const error = new CliError(code, `${message} (HTTP ${res.status}${e.code ? ` ${e.code}` : ""})`, details);

@@ -93,7 +93,7 @@ const CREDENTIAL_PARAMS = new Set(["access_token", "token", "api_key", "apikey",
 export function tokenInQuery(params: URLSearchParams): boolean {
   for (const [name, value] of params) {
     if (CREDENTIAL_PARAMS.has(name.toLowerCase())) return true;
-    if (/\bhl_[A-Za-z]{16,}/.test(value)) return true;
+    if (/\bhl_[A-Za-z]{32,}/.test(value)) return true;
   }
   return false;
 }
