@@ -32,7 +32,7 @@ describe("heterolane check (valid documents)", { timeout: 60_000 }, () => {
     expect(r.stderr).toBe("");
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);
-    expect(out.format).toBe("heterolane.result/1");
+    expect(out.format).toBe("heterolane.result/2");
     expect(out).toEqual(expectedResult("docs/examples/clean.plan.json"));
   });
   it("a plan with error findings from stdin: still exit 0 (findings are not input errors)", () => {

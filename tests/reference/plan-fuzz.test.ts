@@ -17,7 +17,7 @@ function nonFinitePaths(v: unknown, path = "", out: string[] = []): string[] {
 }
 
 function expectWellFormed(plan: Plan, result: ResultDocument) {
-  expect(result.format).toBe("heterolane.result/1");
+  expect(result.format).toBe("heterolane.result/2");
   expect(nonFinitePaths(result)).toEqual([]);
   expect(result.chains.map((c) => c.id)).toEqual(plan.chains.map((c) => c.id));
   expect(result.channels.map((c) => c.id)).toEqual(plan.channels.map((c) => c.id));

@@ -6,7 +6,7 @@ import { checkChainAtOffset } from "./check-chain-at-offset";
 import { SPUR_FAMILIES, type ResultDocument } from "./types";
 
 function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], planChainIds: string[]): void {
-  expect(doc.format).toBe("heterolane.result/1");
+  expect(doc.format).toBe("heterolane.result/2");
   expect(Object.keys(doc)).toEqual(["format", "chains", "channels", "spurs", "findings"]);
   expect(doc.chains.map((c) => c.id)).toEqual(planChainIds);
   expect(doc.channels.map((c) => c.id)).toEqual(planChannelIds);
@@ -19,6 +19,9 @@ function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], plan
       "excludedGHz",
       "placeGHz",
       "placeReason",
+      // version 2 (docs/plan-format.md §12.7)
+      "temperatureWindowK",
+      "temperatureMarginK",
     ]);
   for (const c of doc.channels) {
     expect(Object.keys(c)).toEqual([
@@ -30,6 +33,8 @@ function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], plan
       "radiometricBandwidthMHz",
       "nedtK",
       "lockReplicaDB",
+      // version 2 (docs/plan-format.md §12.7)
+      "envelope",
     ]);
     if (c.ifSlotGHz === null) {
       expect(c.occupiedGHz).toBeNull();
