@@ -103,9 +103,19 @@ function result(p: ImageProblem, L: number, d: number, t: number, value: number)
  * ±rfInput (nothing gets in anywhere).
  */
 export function imageRate(p: ImageProblem, L: number): number {
+  return imageTravel(p, L).rate;
+}
+
+/**
+ * The image band's travel over the box at L: the rate of `imageRate`, and
+ * whether an rfInput edge lies inside it (then `∫Wᵢ` also changes on the
+ * scale of the band's own width, where the band crosses that edge).
+ */
+function imageTravel(p: ImageProblem, L: number): { rate: number; edgeInside: boolean } {
   const zLo = 2 * L - p.box.D - p.xh;
   const zHi = 2 * L + p.box.D - p.xl;
   let rate = -1;
+  let edgeInside = false;
   for (let w = 0; w < 2; w++) {
     const e1 = w === 0 ? p.rfMin : -p.rfMax;
     const e2 = w === 0 ? p.rfMax : -p.rfMin;
@@ -115,10 +125,14 @@ export function imageRate(p: ImageProblem, L: number): number {
     const nLo = Math.round(a / p.fsr);
     const nHi = Math.round(b / p.fsr);
     rate = Math.max(rate, Math.abs(p.box.phi) * Math.max(Math.abs(nLo - p.nStar), Math.abs(nHi - p.nStar)));
-    if (e1 > zLo && e1 < zHi) rate = Math.max(rate, Math.abs(p.box.k));
-    if (e2 > zLo && e2 < zHi) rate = Math.max(rate, Math.abs(p.box.k));
+    for (const e of [e1, e2]) {
+      if (e > zLo && e < zHi) {
+        rate = Math.max(rate, Math.abs(p.box.k));
+        edgeInside = true;
+      }
+    }
   }
-  return rate;
+  return { rate, edgeInside };
 }
 
 /**
@@ -130,20 +144,23 @@ export function worstImage(p: ImageProblem, L: number, stopBelow = -Infinity): I
   const box = p.box;
   const k = box.k;
   const cache: CombCache = { t: 0, fsr: p.fsr, K: combK(p.fsr, p.delta) };
-  const rate = imageRate(p, L);
+  const travel = imageTravel(p, L);
+  const rate = travel.rate;
   if (rate < 0) return result(p, L, 0, pointAt(box, 0).t, Infinity);
   const opts = { stopBelow };
+  // where the band crosses an rfInput edge its integral changes on the scale of its width too
+  const step = travel.edgeInside ? Math.min(p.step, (p.xh - p.xl) / 16) : p.step;
 
   if (box.tLo === box.tHi || box.phi === 0) {
     const t0 = box.phi === 0 ? pointAt(box, 0).t : box.tLo;
-    const r = minimise((d) => rejection(p, cache, L, d, t0), -box.D - k * t0, box.D - k * t0, p.step, opts);
+    const r = minimise((d) => rejection(p, cache, L, d, t0), -box.D - k * t0, box.D - k * t0, step, opts);
     return result(p, L, r.x, t0, r.fx);
   }
 
   if (rate === 0) {
     // R depends on t only through modes half an FSR or more away: search d, then polish t and d
     const [dMin, dMax] = detuningRange(box);
-    let best = minimise((d) => rejection(p, cache, L, d, pointAt(box, d).t), dMin, dMax, p.step, opts);
+    let best = minimise((d) => rejection(p, cache, L, d, pointAt(box, d).t), dMin, dMax, step, opts);
     let d = best.x;
     let t = pointAt(box, d).t;
     for (let round = 0; round < 2 && !(best.fx < stopBelow); round++) {
@@ -158,9 +175,9 @@ export function worstImage(p: ImageProblem, L: number, stopBelow = -Infinity): I
       const tt = t;
       const rd = minimise(
         (x) => rejection(p, cache, L, x, tt),
-        Math.max(-box.D - k * tt, d - p.step),
-        Math.min(box.D - k * tt, d + p.step),
-        p.step,
+        Math.max(-box.D - k * tt, d - step),
+        Math.min(box.D - k * tt, d + step),
+        step,
         opts,
       );
       if (rd.fx < best.fx) {
@@ -172,13 +189,13 @@ export function worstImage(p: ImageProblem, L: number, stopBelow = -Infinity): I
   }
 
   // nested: the minimum over d at each t, minimised over t
-  const tStep = Math.max((box.tHi - box.tLo) / MAX_T_SAMPLES, p.step / rate);
+  const tStep = Math.max((box.tHi - box.tLo) / MAX_T_SAMPLES, step / rate);
   let bestD = 0;
   let bestT = box.tLo;
   let bestV = Infinity;
   minimise(
     (t) => {
-      const r = minimise((d) => rejection(p, cache, L, d, t), -box.D - k * t, box.D - k * t, p.step, opts);
+      const r = minimise((d) => rejection(p, cache, L, d, t), -box.D - k * t, box.D - k * t, step, opts);
       if (r.fx < bestV || (r.fx === bestV && t < bestT)) {
         bestV = r.fx;
         bestD = r.x;

@@ -30,6 +30,8 @@ export interface Extremum {
 const TIE = 1e-12;
 
 function better(a: Extremum, b: Extremum): Extremum {
+  if (a.fx === b.fx) return a.x <= b.x ? a : b;
+  if (!Number.isFinite(a.fx) || !Number.isFinite(b.fx)) return a.fx < b.fx ? a : b;
   const scale = Math.max(Math.abs(a.fx), Math.abs(b.fx));
   if (Math.abs(a.fx - b.fx) <= TIE * scale) return a.x <= b.x ? a : b;
   return a.fx < b.fx ? a : b;

@@ -131,7 +131,7 @@ export function imageFiringIntervals(
   const windows = imageWindows(c, m, ch, g.lo, g.hi, work, box);
   const step = Math.min(m.linewidth, B) / 16;
   const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
-  const firesAt = box === undefined ? makeImageFires(c, m, ch) : makeEnvelopeImageFires(c, m, ch, box);
+  const firesAt = box === undefined ? makeImageFires(c, m, ch) : makeEnvelopeImageFires(c, m, ch, box, true);
   let steps = 0;
   // evaluations are counted only when a counter is passed (the map's hot path stays a direct call)
   const fires =
@@ -264,7 +264,7 @@ export function imageFiringIntervalsByScan(
   const windows = imageWindows(c, m, ch, g.lo, g.hi, undefined, box);
   const step = Math.min(m.linewidth, B) / 16;
   const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
-  const fires = box === undefined ? (L: number) => imageFires(c, m, ch, L) : makeEnvelopeImageFires(c, m, ch, box);
+  const fires = box === undefined ? (L: number) => imageFires(c, m, ch, L) : makeEnvelopeImageFires(c, m, ch, box, true);
   const out: [number, number][] = [];
   const push = (a: number, b: number) => {
     if (!(b > a)) return;

@@ -129,9 +129,17 @@ export function combRadius(c: Comb, level: number): number {
  * soon as the answer is known). An occupied-band filter that cannot be
  * built (its slot starts within D of 0 GHz) has no image figure, so the
  * rule does not fire there. A box of one point is the nominal rule
- * (`makeImageFires`).
+ * (`makeImageFires`). `withinPossible` leaves out the check for an
+ * impossible filter, for a search that already keeps to where the filter
+ * can be built (its ends then take the rule's limit from inside).
  */
-export function makeEnvelopeImageFires(c: Comb, m: MapModel, ch: MapChannel, box: EnvelopeBox): (L: number) => boolean {
+export function makeEnvelopeImageFires(
+  c: Comb,
+  m: MapModel,
+  ch: MapChannel,
+  box: EnvelopeBox,
+  withinPossible = false,
+): (L: number) => boolean {
   if (isPointBox(box)) return makeImageFires(c, m, ch);
   const band = ch.bands[0];
   const problem = ch.imageProblem ? { ...ch.imageProblem, box } : null;
@@ -140,7 +148,7 @@ export function makeEnvelopeImageFires(c: Comb, m: MapModel, ch: MapChannel, box
   const D = box.D;
   const [xl, xh] = band;
   return (L: number): boolean => {
-    if (ch.occupied && D > 0 && (L <= xl ? xl - L : L - xh) <= D) return false;
+    if (!withinPossible && ch.occupied && D > 0 && (L <= xl ? xl - L : L - xh) <= D) return false;
     return worstImage(problem, L, threshold).rejectionDB < threshold;
   };
 }
