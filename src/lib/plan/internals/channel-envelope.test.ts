@@ -181,7 +181,10 @@ describe("properties of the envelope", () => {
   const arb = fc.record({
     driftMHz: dbl(0.001, 40),
     te: dbl(0.001, 3),
-    phi: fc.oneof(dbl(0.01, 20), dbl(0.01, 20).map((v) => -v)),
+    phi: fc.oneof(
+      dbl(0.01, 20),
+      dbl(0.01, 20).map((v) => -v),
+    ),
     offsetMHz: fc.double({ min: -15, max: 15, noNaN: true }),
     bwMHz: fc.double({ min: 1, max: 60, noNaN: true }),
     occupied: fc.boolean(),

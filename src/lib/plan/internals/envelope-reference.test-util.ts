@@ -47,7 +47,8 @@ function setup(plan: Plan, channelId: string): Setup {
   const res = plan.resonators.find((x) => x.id === chain.resonator)!;
   const s = chain.sideband === "upper" ? 1 : -1;
   const B = ch.bandwidthMHz / 1000;
-  const rfCentres = ch.dsbOffsetGHz === null ? [ch.centerGHz] : [ch.centerGHz - ch.dsbOffsetGHz, ch.centerGHz + ch.dsbOffsetGHz];
+  const rfCentres =
+    ch.dsbOffsetGHz === null ? [ch.centerGHz] : [ch.centerGHz - ch.dsbOffsetGHz, ch.centerGHz + ch.dsbOffsetGHz];
   const bands = rfCentres
     .map((f) => {
       const a = s * (f - B / 2);
@@ -102,7 +103,8 @@ export function figuresAt(plan: Plan, channelId: string, L: number, u: number, t
     else union.push(iv);
   }
   const cuts = [Math.abs(m - lo)];
-  const integ = (f: (y: number) => number) => union.reduce((acc, [a, b]) => acc + integratePiecewise(f, a, b, cuts, 1e-12), 0);
+  const integ = (f: (y: number) => number) =>
+    union.reduce((acc, [a, b]) => acc + integratePiecewise(f, a, b, cuts, 1e-12), 0);
   const Hz = 1e9;
   const intW = integ(W) * Hz;
   const intS = integ((y) => p.Ta * W(y) + p.Tr) * Hz;
@@ -180,7 +182,8 @@ export function worstByGrid(
   nt = 21,
 ): ReferenceWorst {
   const { D } = setup(plan, channelId);
-  const us = (a: number, b: number, n: number) => (n <= 1 || b === a ? [a] : Array.from({ length: n }, (_, i) => a + ((b - a) * i) / (n - 1)));
+  const us = (a: number, b: number, n: number) =>
+    n <= 1 || b === a ? [a] : Array.from({ length: n }, (_, i) => a + ((b - a) * i) / (n - 1));
   type Key = keyof ReferenceFigures;
   const sign: Record<Key, 1 | -1> = { nedtK: 1, bandwidthMHz: -1, imageDB: -1, modeResponse: -1, centreErrorMHz: 1 };
   const best: Partial<Record<Key, { v: number; u: number; t: number }>> = {};

@@ -264,7 +264,8 @@ export function imageFiringIntervalsByScan(
   const windows = imageWindows(c, m, ch, g.lo, g.hi, undefined, box);
   const step = Math.min(m.linewidth, B) / 16;
   const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
-  const fires = box === undefined ? (L: number) => imageFires(c, m, ch, L) : makeEnvelopeImageFires(c, m, ch, box, true);
+  const fires =
+    box === undefined ? (L: number) => imageFires(c, m, ch, L) : makeEnvelopeImageFires(c, m, ch, box, true);
   const out: [number, number][] = [];
   const push = (a: number, b: number) => {
     if (!(b > a)) return;
