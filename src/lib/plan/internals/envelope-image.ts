@@ -91,6 +91,12 @@ function rejection(p: ImageProblem, cache: CombCache, L: number, d: number, t: n
   return wi > 0 ? 10 * Math.log10(W / wi) : Infinity;
 }
 
+/** The image rejection (dB) of the problem at one point (u, t) of the box, LO at L (+∞ when nothing of the image gets in). */
+export function imageRejectionAtPoint(p: ImageProblem, L: number, u: number, t: number): number {
+  const cache: CombCache = { t: 0, fsr: p.fsr, K: combK(p.fsr, p.delta) };
+  return rejection(p, cache, L, u - p.box.k * t, t);
+}
+
 function result(p: ImageProblem, L: number, d: number, t: number, value: number): ImageWorst {
   const u = Math.min(p.box.D, Math.max(-p.box.D, d + p.box.k * t)) + 0;
   return { rejectionDB: value, u, t: t + 0, opticalImage: [2 * L + u - p.xh, 2 * L + u - p.xl] };

@@ -97,8 +97,10 @@ export function mergeTouching(list: readonly (readonly [number, number])[]): [nu
 /**
  * Reduce a chain of a parsed plan to the quantities the L-dependent rules use.
  * Throws when the chain id does not exist (the caller passes ids from the plan).
+ * `temperatureK` replaces the chain's temperature excursion by one
+ * temperature offset (a row of the temperature map).
  */
-export function buildMapModel(plan: Plan, chainId: string): MapModel {
+export function buildMapModel(plan: Plan, chainId: string, temperatureK?: number): MapModel {
   const chain = plan.chains.find((c) => c.id === chainId);
   if (!chain) throw new Error(`no chain with id "${chainId}"`);
   const laser = plan.lasers.find((l) => l.id === chain.laser);
@@ -113,8 +115,8 @@ export function buildMapModel(plan: Plan, chainId: string): MapModel {
   const D = laser.driftMHz / 1000;
   const box = envelopeBox(
     D,
-    -chain.temperatureExcursionK,
-    chain.temperatureExcursionK,
+    temperatureK ?? -chain.temperatureExcursionK,
+    temperatureK ?? chain.temperatureExcursionK,
     resonator.fsrShiftMHzPerK / 1000,
     nStar,
   );
