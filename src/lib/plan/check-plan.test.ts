@@ -1,3 +1,4 @@
+import { resultDocumentSchema } from "@/schemas/result";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { arbitraryPlan, example2 } from "../../../tests/fixtures/plans/builders";
@@ -7,6 +8,8 @@ import { SPUR_FAMILIES, type ResultDocument } from "./types";
 
 function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], planChainIds: string[]): void {
   expect(doc.format).toBe("heterolane.result/2");
+  // and, strictly, the result document's schema (src/schemas/result.ts)
+  expect(resultDocumentSchema.safeParse(JSON.parse(JSON.stringify(doc))).success).toBe(true);
   expect(Object.keys(doc)).toEqual(["format", "chains", "channels", "spurs", "findings"]);
   expect(doc.chains.map((c) => c.id)).toEqual(planChainIds);
   expect(doc.channels.map((c) => c.id)).toEqual(planChannelIds);

@@ -16,7 +16,14 @@ import {
   settingsShape,
 } from "../fields";
 import { crossFieldIssues } from "./cross-field";
-import { PLAN_FORMAT, PLAN_FORMATS, VERSION_2_FIELDS, versionIssues, withVersion2Fields } from "./versions";
+import {
+  PLAN_FORMAT,
+  PLAN_FORMAT_V1,
+  PLAN_FORMATS,
+  VERSION_2_FIELDS,
+  versionIssues,
+  withVersion2Fields,
+} from "./versions";
 
 /**
  * The zod schema of the plan document, versions `heterolane.plan/1` and
@@ -57,13 +64,20 @@ const laserSchema = z.strictObject({
 });
 
 /** A version 2 field: optional in the document (its default is filled in after the version check). */
-const optionalV2 = <T extends z.ZodType>(schema: T, value: unknown) => schema.optional().meta({ default: value });
+const optionalV2 = <T extends z.ZodType>(schema: T, value: unknown, description: string) =>
+  schema
+    .optional()
+    .meta({ default: value, description: `${description} (version 2; default ${JSON.stringify(value)})` });
 
 const resonatorV2 = resonatorV2Shape(r);
 const resonatorSchema = z.strictObject({
   id: id(),
   ...resonatorShape(r),
-  fsrShiftMHzPerK: optionalV2(resonatorV2.fsrShiftMHzPerK, VERSION_2_FIELDS.resonators.fsrShiftMHzPerK),
+  fsrShiftMHzPerK: optionalV2(
+    resonatorV2.fsrShiftMHzPerK,
+    VERSION_2_FIELDS.resonators.fsrShiftMHzPerK,
+    "change of the FSR per kelvin of resonator temperature, MHz/K, signed",
+  ),
 });
 
 const detector = detectorShape(r);
@@ -91,6 +105,7 @@ const chainSchema = z.strictObject({
   temperatureExcursionK: optionalV2(
     chainV2Shape(r).temperatureExcursionK,
     VERSION_2_FIELDS.chains.temperatureExcursionK,
+    "± excursion of the resonator temperature about its set point while observing, K",
   ),
 });
 
@@ -102,8 +117,16 @@ const channelSchema = z.strictObject({
   ...channel,
   dsbOffsetGHz: channel.dsbOffsetGHz.default(FIELD_DEFAULTS.channel.dsbOffsetGHz),
   requiredNedtK: channel.requiredNedtK.default(FIELD_DEFAULTS.channel.requiredNedtK),
-  ifFilter: optionalV2(channelV2Shape(r).ifFilter, VERSION_2_FIELDS.channels.ifFilter),
-  centreToleranceMHz: optionalV2(channelV2Shape(r).centreToleranceMHz, VERSION_2_FIELDS.channels.centreToleranceMHz),
+  ifFilter: optionalV2(
+    channelV2Shape(r).ifFilter,
+    VERSION_2_FIELDS.channels.ifFilter,
+    '"slot": the IF filter passes the nominal slot; "occupied": the slot widened by the LO drift',
+  ),
+  centreToleranceMHz: optionalV2(
+    channelV2Shape(r).centreToleranceMHz,
+    VERSION_2_FIELDS.channels.centreToleranceMHz,
+    "allowed error of the effective centre of each passband, MHz, or null",
+  ),
 });
 
 /** The field rules of the whole document, without the cross-field rules. */
@@ -139,11 +162,44 @@ export const planSchema = planFieldsSchema
     channels: plan.channels.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.channels)),
   }));
 
+/** An entity schema without the fields version 2 added to it (a version 1 document's entity). */
+function versionOne<S extends z.ZodObject>(schema: S, added: Record<string, unknown>) {
+  const mask = Object.fromEntries(Object.keys(added).map((k) => [k, true])) as Record<string, true>;
+  return schema.omit(mask as never);
+}
+
 /**
- * The schema of the document as written (no defaults filled in, no version
- * upgrade), for the JSON Schema of the format (`docs/schema/plan.schema.json`).
+ * The two versions of the document as written (no defaults filled in, no
+ * version upgrade, no cross-field rules), for the JSON Schema of the format
+ * (`docs/schema/plan.schema.json`): a `heterolane.plan/2` document, or a
+ * `heterolane.plan/1` document, which has none of the fields of
+ * `VERSION_2_FIELDS`.
  */
-export const planDocumentSchema = planFieldsSchema;
+export const planDocumentSchema = z
+  .union([
+    planFieldsSchema
+      .extend({ format: z.literal(PLAN_FORMAT) })
+      .meta({
+        title: "heterolane.plan/2",
+        description: "A plan document of version 2 (docs/plan-format.md §2 and §12).",
+      }),
+    planFieldsSchema
+      .extend({
+        format: z.literal(PLAN_FORMAT_V1),
+        resonators: z.array(versionOne(resonatorSchema, VERSION_2_FIELDS.resonators)).max(PLAN_LIMITS.resonators),
+        chains: z.array(versionOne(chainSchema, VERSION_2_FIELDS.chains)).max(PLAN_LIMITS.chains),
+        channels: z.array(versionOne(channelSchema, VERSION_2_FIELDS.channels)).max(PLAN_LIMITS.channels),
+      })
+      .meta({
+        title: "heterolane.plan/1",
+        description: "A plan document of version 1 (docs/plan-format.md §2); read with the defaults of version 2.",
+      }),
+  ])
+  .meta({
+    title: "Heterolane plan document",
+    description:
+      "A frequency plan of a microwave-photonic radiometer (docs/plan-format.md). Rules between fields (§2.8) are not expressed here.",
+  });
 
 /** The parsed plan: defaults applied, omitted nullable fields set to null, version 2 fields filled in. */
 export type Plan = z.output<typeof planSchema>;
