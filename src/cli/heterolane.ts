@@ -1,8 +1,10 @@
 /**
  * Command line: `npm run --silent heterolane -- check <file.json|->`.
  *
- * Reads a plan document (`heterolane.plan/1`) from a file or stdin and
- * writes the result document (`heterolane.result/1`) as JSON to stdout.
+ * Reads a plan document (`heterolane.plan/1` or `heterolane.plan/2`) from a
+ * file or stdin and writes the result document (`heterolane.result/2`, with
+ * each channel's figures over the operating envelope and each chain's
+ * temperature window) as JSON to stdout.
  * Exit status: 0 for any valid document whatever its findings, 2 for invalid
  * input (one `path: message` line per error on stderr, also for unreadable
  * files and malformed JSON), 1 for an internal fault.
@@ -13,9 +15,11 @@ import { runCheck, type CheckOutcome } from "./run-check";
 
 const USAGE = `Usage: heterolane check <plan.json | ->
 
-Checks a plan document (format heterolane.plan/1) and writes the result
-document (heterolane.result/1: chains with feasibility map and place,
-channels, spurs, findings) as JSON to stdout. Use "-" to read stdin.
+Checks a plan document (format heterolane.plan/1 or heterolane.plan/2) and
+writes the result document (heterolane.result/2: chains with feasibility
+map, place and temperature window; channels with their nominal figures and
+their worst figures over the operating envelope; spurs; findings) as JSON
+to stdout. Use "-" to read stdin.
 
 Exit status:
   0  the document is valid (whatever its findings)

@@ -12,7 +12,12 @@ export {
   type EnvelopeCurveOptions,
   type EnvelopeCurvePoint,
 } from "./envelope-curves";
-export { temperatureMap, type TemperatureMap, type TemperatureMapOptions, type TemperatureMapRow } from "./temperature-map";
+export {
+  temperatureMap,
+  type TemperatureMap,
+  type TemperatureMapOptions,
+  type TemperatureMapRow,
+} from "./temperature-map";
 export { temperatureWindow, type TemperatureWindow } from "./temperature-window";
 export type { WorkCounter } from "./internals/work-counter";
 // The engine's enumeration limits (docs/decisions/017 and 018), for the tests that bound its work.

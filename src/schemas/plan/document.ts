@@ -177,12 +177,10 @@ function versionOne<S extends z.ZodObject>(schema: S, added: Record<string, unkn
  */
 export const planDocumentSchema = z
   .union([
-    planFieldsSchema
-      .extend({ format: z.literal(PLAN_FORMAT) })
-      .meta({
-        title: "heterolane.plan/2",
-        description: "A plan document of version 2 (docs/plan-format.md §2 and §12).",
-      }),
+    planFieldsSchema.extend({ format: z.literal(PLAN_FORMAT) }).meta({
+      title: "heterolane.plan/2",
+      description: "A plan document of version 2 (docs/plan-format.md §2 and §12).",
+    }),
     planFieldsSchema
       .extend({
         format: z.literal(PLAN_FORMAT_V1),

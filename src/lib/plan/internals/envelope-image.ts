@@ -27,7 +27,7 @@ import { lorentzianIntegral } from "./lorentz";
  *   than the wanted one is the nearest mode to the image band and no
  *   rfInput edge lies inside the band's travel: then R depends on t only
  *   through modes at least half an FSR away, and a final search over t at
- *   the best d (then over d again) picks up that dependence;
+ *   the best d (then over d again around it) picks up that dependence;
  * - otherwise nested: the minimum over d at each t (`minimise`), minimised
  *   over t on a scan whose step moves the image band by at most the scan
  *   step against every comb mode near it and the rfInput edges.
@@ -169,7 +169,7 @@ export function worstImage(p: ImageProblem, L: number, stopBelow = -Infinity): I
     let best = minimise((d) => rejection(p, cache, L, d, pointAt(box, d).t), dMin, dMax, step, opts);
     let d = best.x;
     let t = pointAt(box, d).t;
-    for (let round = 0; round < 2 && !(best.fx < stopBelow); round++) {
+    for (let round = 0; round < 1 && !(best.fx < stopBelow); round++) {
       const [t1, t2] = temperaturesAt(box, d);
       const dd = d;
       const rt = minimise((tt) => rejection(p, cache, L, dd, tt), t1, t2, (t2 - t1) / 2, opts);

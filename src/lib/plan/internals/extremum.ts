@@ -143,8 +143,9 @@ export function minimise(
     return { x: a, fx: fa };
   }
   const n = Math.min(MAX_SCAN_SAMPLES, Math.max(1, Math.ceil((b - a) / step)));
-  const xs = new Float64Array(n + 1);
-  const fs = new Float64Array(n + 1);
+  // (short scans are the common case: plain arrays allocate less than typed ones)
+  const xs: number[] | Float64Array = n < 64 ? new Array<number>(n + 1) : new Float64Array(n + 1);
+  const fs: number[] | Float64Array = n < 64 ? new Array<number>(n + 1) : new Float64Array(n + 1);
   for (let i = 0; i <= n; i++) {
     const x = i === n ? b : a + ((b - a) * i) / n;
     xs[i] = x;
@@ -152,8 +153,16 @@ export function minimise(
     fs[i] = fx;
     if (fx < stop) return { x, fx };
   }
-  let best: Extremum = { x: xs[0]!, fx: fs[0]! };
-  for (let i = 1; i <= n; i++) best = better(best, { x: xs[i]!, fx: fs[i]! });
+  let bi = 0;
+  for (let i = 1; i <= n; i++) {
+    const fi = fs[i]!;
+    const fb = fs[bi]!;
+    if (fi === fb) continue; // equal: the smaller argument (the earlier sample) stays
+    if (!Number.isFinite(fi) || !Number.isFinite(fb)) {
+      if (fi < fb) bi = i;
+    } else if (Math.abs(fi - fb) > TIE * Math.max(Math.abs(fi), Math.abs(fb)) && fi < fb) bi = i;
+  }
+  let best: Extremum = { x: xs[bi]!, fx: fs[bi]! };
   for (let i = 0; i <= n; i++) {
     const fi = fs[i]!;
     const left = i > 0 ? fs[i - 1]! : Infinity;
