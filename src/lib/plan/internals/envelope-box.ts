@@ -61,9 +61,23 @@ export function temperaturesAt(box: EnvelopeBox, d: number): [number, number] {
  * to the box's range first.
  */
 export function pointAt(box: EnvelopeBox, d: number): BoxPoint {
-  const [dMin, dMax] = detuningRange(box);
+  // (called once per evaluation of the searches: no arrays)
+  const a = -box.k * box.tLo;
+  const b = -box.k * box.tHi;
+  const dMin = -box.D + Math.min(a, b);
+  const dMax = box.D + Math.max(a, b);
   const dd = Math.min(dMax, Math.max(dMin, d));
-  const [lo, hi] = temperaturesAt(box, dd);
+  let lo: number;
+  let hi: number;
+  if (box.k === 0) {
+    lo = box.tLo;
+    hi = box.tHi;
+  } else {
+    const p = (-box.D - dd) / box.k;
+    const q = (box.D - dd) / box.k;
+    lo = Math.max(box.tLo, Math.min(p, q));
+    hi = Math.min(box.tHi, Math.max(p, q));
+  }
   const t = lo > hi ? (Math.abs(lo) < Math.abs(hi) ? lo : hi) : Math.min(hi, Math.max(lo, 0));
   const u = Math.min(box.D, Math.max(-box.D, dd + box.k * t));
   return { u: u + 0, t: t + 0 };

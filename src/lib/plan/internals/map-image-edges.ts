@@ -150,38 +150,43 @@ export function imageFiringIntervals(
   };
   const quarter = c.fsr / 4;
   const centreSum = (g.xl + g.xh) / 4;
+  // the piece being searched and the grid on it (the helpers below are made once, not per piece)
+  let p = 0;
+  let q = 0;
+  let n = 1;
+  const gridL = (j: number) => (j === n ? q : p + ((q - p) * j) / n);
+  // the last two grid states are remembered (run ends are read twice)
+  let j1 = -1;
+  let v1 = false;
+  let j2 = -1;
+  let v2 = false;
+  const state = (j: number): boolean => {
+    if (j === j1) return v1;
+    if (j === j2) return v2;
+    const v = fires(gridL(j));
+    j2 = j1;
+    v2 = v1;
+    j1 = j;
+    v1 = v;
+    return v;
+  };
+  const indexOf = (L: number) => Math.min(n - 1, Math.floor(((L - p) / (q - p)) * n));
   for (const [wlo, whi] of windows) {
-    for (const { p, q, inZone } of windowPieces(g, wlo, whi)) {
-      const n = gridCount(p, q);
-      const gridL = (j: number) => (j === n ? q : p + ((q - p) * j) / n);
-      // the last two grid states are remembered (run ends are read twice)
-      let j1 = -1;
-      let v1 = false;
-      let j2 = -1;
-      let v2 = false;
-      const state = (j: number): boolean => {
-        if (j === j1) return v1;
-        if (j === j2) return v2;
-        const v = fires(gridL(j));
-        j2 = j1;
-        v2 = v1;
-        j1 = j;
-        v1 = v;
-        return v;
-      };
+    for (const piece of windowPieces(g, wlo, whi)) {
+      p = piece.p;
+      q = piece.q;
+      n = gridCount(p, q);
+      j1 = -1;
+      j2 = -1;
       // runs of grid indices between the monotone split points (every grid point of a split zone,
       // and of a piece inside a kink zone, is its own run)
       const splits: number[] = [];
-      const indexOf = (L: number) => Math.min(n - 1, Math.floor(((L - p) / (q - p)) * n));
-      const addSplit = (j: number) => {
-        if (splits[splits.length - 1] !== j) splits.push(j);
-      };
       const widest = g.moving
         ? g.splitHalfWidth(Math.ceil((Math.max(Math.abs(p), Math.abs(q)) + Math.abs(centreSum)) / quarter) + 1)
         : 0;
       const kFirst = Math.ceil((p - widest - centreSum) / quarter);
       const kLast = Math.floor((q + widest - centreSum) / quarter);
-      if (inZone || !(kLast - kFirst < n)) {
+      if (piece.inZone || !(kLast - kFirst < n)) {
         // more monotone runs than grid points (fsr far below the grid step), or inside a kink zone:
         // every grid point is its own run
         steps += n;
@@ -191,14 +196,19 @@ export function imageFiringIntervals(
         for (let k = kFirst; k <= kLast; k++) {
           const Lk = k * quarter + centreSum;
           if (!g.moving) {
-            if (Lk > p && Lk < q) addSplit(indexOf(Lk));
+            if (Lk > p && Lk < q) {
+              const j = indexOf(Lk);
+              if (splits[splits.length - 1] !== j) splits.push(j);
+            }
             continue;
           }
           const hw = g.splitHalfWidth(k);
           const zl = Math.max(p, Lk - hw);
           const zh = Math.min(q, Lk + hw);
           if (!(zh >= zl) || zh <= p || zl >= q) continue;
-          for (let j = Math.max(0, indexOf(zl)); j <= indexOf(zh); j++) addSplit(j);
+          for (let j = Math.max(0, indexOf(zl)); j <= indexOf(zh); j++) {
+            if (splits[splits.length - 1] !== j) splits.push(j);
+          }
         }
       }
       const changes: number[] = []; // t: state(t) ≠ state(t + 1)

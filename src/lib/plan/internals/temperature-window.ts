@@ -28,7 +28,7 @@ import { TOL } from "./tolerance";
  *   requirement are found once (scan and bisection) and mapped to t;
  * - `centre-drift` and `image-response`: sampled in t on a step over which
  *   the received band moves by at most the scan step against the mode and
- *   the comb (no shorter than 1 mK, no longer than 1 K) and every change
+ *   the comb (no shorter than 1 mK, no longer than 2 K) and every change
  *   bisected to half a millikelvin.
  *
  * Edges are rounded to 1 mK; intervals shorter than that are left out.
@@ -40,9 +40,14 @@ export const WINDOW_SPAN_K = 50;
 const EDGE_K = 1e-3;
 /** Every change of a sampled rule is bisected to this bracket (K). */
 const BRACKET_K = 5e-4;
-/** Sampling steps in t, K. */
+/**
+ * Sampling steps in t, K: the step over which the band moves by the scan
+ * step against the mode and the comb, no shorter than 1 mK and no longer
+ * than 2 K (a cap for resonators that hardly move: every sampled rule is
+ * smooth on the scale the step is derived from).
+ */
 const MIN_STEP_K = 1e-3;
-const MAX_STEP_K = 1;
+const MAX_STEP_K = 2;
 /** Most samples of the detuning scan for NEΔT (absurd inputs only). */
 const MAX_SAMPLES = 200_000;
 
@@ -108,7 +113,7 @@ function sampledSet(holds: (t: number) => boolean, lo: number, hi: number, step:
   return out;
 }
 
-/** A step in t over which something moving at `rate` GHz/K moves by `scan` GHz, clamped to [1 mK, 1 K]. */
+/** A step in t over which something moving at `rate` GHz/K moves by `scan` GHz, clamped to [1 mK, 2 K]. */
 function stepFor(scan: number, rate: number): number {
   if (!(rate > 0)) return MAX_STEP_K;
   return Math.min(MAX_STEP_K, Math.max(MIN_STEP_K, scan / rate));
