@@ -102,6 +102,7 @@ describe("temperatureWindow", () => {
         // the margin: ±Te fits inside one interval exactly when the plan as written passes (1 mK edges)
         if (errorFree) expect(w.marginK).not.toBeNull();
         if (errorFree) expect(w.marginK!).toBeGreaterThanOrEqual(-1e-3);
+        if (errorFree) expect(w.intervalsK.some(([a, b]) => a <= -Te + 1e-3 && b >= Te - 1e-3)).toBe(true);
         if (w.marginK !== null && w.marginK > 2e-3) expect(errorFree).toBe(true);
         for (const [a, b] of w.intervalsK) {
           if (b - a > 5e-3) {
