@@ -3,6 +3,7 @@ import { type Comb, imageFires, imageWindows, makeEnvelopeImageFires, makeImageF
 import type { MapChannel, MapModel } from "./map-model";
 import { type WorkCounter, countSteps } from "./work-counter";
 
+// (Longer than most files: the fast search and the plain scan it is tested against share their geometry and are kept side by side.)
 /**
  * The edges of the image rule's firing set for the feasibility map
  * (docs/plan-format.md §6.3 "The image rule"): the fast grid search the

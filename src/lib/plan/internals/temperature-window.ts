@@ -10,6 +10,7 @@ import { centroidOffset } from "./received-band";
 import { receivedSensitivity } from "./slot";
 import { TOL } from "./tolerance";
 
+// (Longer than most files: the four temperature-dependent rules each need their own way to the set of temperatures where they hold, and they are kept together because the window is their intersection.)
 /**
  * The temperature window of a chain (docs/plan-format.md §12.6): the
  * temperature offsets t within ±50 K at which, with the LO at the chain's
