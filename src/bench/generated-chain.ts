@@ -1,11 +1,20 @@
 import type { PlanInput } from "@/schemas/plan";
 
+/** An operating envelope for the generated chain: LO drift, resonator temperature excursion and FSR shift. */
+export interface GeneratedEnvelope {
+  driftMHz: number;
+  temperatureExcursionK: number;
+  fsrShiftMHzPerK: number;
+}
+
 /**
  * A 64-channel upper-sideband chain cut from one broad mode at 183.31 GHz
  * (invented demo data): 20 MHz channels every 60 MHz, an antenna box that
- * keeps the image out above L ≈ 185.9 GHz, a 40 GS/s digitised IF.
+ * keeps the image out above L ≈ 185.9 GHz, a 40 GS/s digitised IF. With
+ * `envelope`, a version 2 document with that drift, temperature excursion
+ * and FSR shift (else ±5 MHz of drift, version 1).
  */
-export function generatedChainPlan(): PlanInput {
+export function generatedChainPlan(envelope?: GeneratedEnvelope): PlanInput {
   const channels = Array.from({ length: 64 }, (_, k) => ({
     id: `c${k + 1}`,
     name: `demo channel ${k + 1}`,
@@ -20,7 +29,7 @@ export function generatedChainPlan(): PlanInput {
     requiredNedtK: null,
   }));
   return {
-    format: "heterolane.plan/1",
+    format: envelope ? "heterolane.plan/2" : "heterolane.plan/1",
     name: "Demo data: generated 64-channel chain for the benchmark",
     settings: { guardMHz: 20, imageRejectionDB: 20, spurMaxOrder: 7, replicaLimitDB: -20 },
     lasers: [
@@ -31,11 +40,13 @@ export function generatedChainPlan(): PlanInput {
         loPowerMW: 5,
         reach: [{ minGHz: 40, maxGHz: 340 }],
         stepMHz: 1,
-        driftMHz: 5,
+        driftMHz: envelope?.driftMHz ?? 5,
         lock: { modulationMHz: 80, modulationIndex: 0.6, orders: 3 },
       },
     ],
-    resonators: [{ id: "RG", fsrGHz: 183.31, loadedQ: 5e4 }],
+    resonators: [
+      { id: "RG", fsrGHz: 183.31, loadedQ: 5e4, ...(envelope ? { fsrShiftMHzPerK: envelope.fsrShiftMHzPerK } : {}) },
+    ],
     detectors: [{ id: "DG", minGHz: 0.1, maxGHz: 19.5, maxInputMW: 10, sampleRateGHz: 40 }],
     chains: [
       {
@@ -51,6 +62,7 @@ export function generatedChainPlan(): PlanInput {
         pathLossDB: 3,
         carrierRejectionDB: 0,
         sharedIf: false,
+        ...(envelope ? { temperatureExcursionK: envelope.temperatureExcursionK } : {}),
       },
     ],
     channels,

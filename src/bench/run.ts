@@ -8,12 +8,16 @@
  *    the load average beside it (the machine may be shared and loaded).
  *    Extra lines: the clean example `docs/examples/clean.plan.json` and a
  *    4-chain, 16-channel plan (four renamed copies of example 2).
+ *    And the demo plan with ±1 K of resonator temperature on every chain
+ *    (an FSR shift of −6.28 MHz/K): a nonzero operating envelope in both
+ *    directions (target also under 2 ms).
  * 2. For a generated 64-channel chain (spurMaxOrder 7, a 300 GHz reach,
  *    a sampled IF so that folding and aliasing are exercised): the
  *    feasibility map computed exactly, and by a 1 MHz grid that evaluates
  *    the L-dependent error codes at every grid point with the lean
  *    per-offset evaluation; their times, the ratio, and whether they agree
- *    at every grid point.
+ *    at every grid point. Once with ±5 MHz of drift, once over the
+ *    envelope D = 10 MHz, Te = 1 K (target ≥ 100× either way).
  *
  * All data here is invented demo data.
  */
@@ -23,7 +27,7 @@ import { fileURLToPath } from "node:url";
 import { demoPlan } from "@db/seed/mission-demo-plan";
 import { type Plan, parsePlan } from "@/schemas/plan";
 import { checkPlan, feasibilityMap, mapDiagnostics, placeLo } from "@/lib/plan";
-import { generatedChainPlan } from "./generated-chain";
+import { type GeneratedEnvelope, generatedChainPlan } from "./generated-chain";
 
 const root = fileURLToPath(new URL("../../", import.meta.url));
 
@@ -83,8 +87,20 @@ function report(label: string, fn: () => unknown, runs: number, warm: number): v
 function demoSection(): void {
   const plan = mustParse(demoPlan(), "demo plan");
   report(
-    `full checkPlan of the demo plan, demoPlan() in db/seed/mission-demo-plan.ts (${plan.chains.length} chains, ${plan.channels.length} channels):`,
+    `full checkPlan of the demo plan, demoPlan() in db/seed/mission-demo-plan.ts (${plan.chains.length} chains, ${plan.channels.length} channels; its envelope: ±20–25 MHz of LO drift):`,
     () => checkPlan(plan),
+    400,
+    100,
+  );
+  // the same plan as a version 2 document with a resonator temperature envelope on every chain
+  const warm = demoPlan();
+  warm.format = "heterolane.plan/2";
+  for (const r of warm.resonators) r.fsrShiftMHzPerK = -6.28;
+  for (const c of warm.chains) c.temperatureExcursionK = 1;
+  const warmPlan = mustParse(warm, "demo plan with a temperature envelope");
+  report(
+    "full checkPlan of the demo plan with ±1 K of resonator temperature at −6.28 MHz/K on every chain (the LO drift as above):",
+    () => checkPlan(warmPlan),
     400,
     100,
   );
@@ -148,8 +164,8 @@ function fourChainSection(): void {
   );
 }
 
-function mapSection(): void {
-  const plan = mustParse(generatedChainPlan(), "generated chain");
+function mapSection(envelope?: GeneratedEnvelope): void {
+  const plan = mustParse(generatedChainPlan(envelope), "generated chain");
   const diag = mapDiagnostics(plan, "G");
   const exact = timeMedians(() => feasibilityMap(plan, "G"), 15, 3);
   const exactMs = exact.wall;
@@ -202,8 +218,10 @@ function mapSection(): void {
   }
 
   const feasibleGHz = map.feasibleGHz.reduce((s, iv) => s + iv[1] - iv[0], 0);
+  const laser = plan.lasers[0]!;
+  const env = `D = ${laser.driftMHz} MHz, Te = ${plan.chains[0]!.temperatureExcursionK} K, FSR shift ${plan.resonators[0]!.fsrShiftMHzPerK} MHz/K`;
   console.log(
-    `generated chain: ${diag.channelCount} channels, spurMaxOrder ${plan.settings.spurMaxOrder}, reach [${r0}, ${r1}] GHz, fs ${diag.sampleRateGHz ?? "none"} GHz`,
+    `generated chain: ${diag.channelCount} channels, spurMaxOrder ${plan.settings.spurMaxOrder}, reach [${r0}, ${r1}] GHz, fs ${diag.sampleRateGHz ?? "none"} GHz; ${env}`,
   );
   const place = placeLo(plan, "G", map.feasibleGHz);
   console.log(
@@ -229,3 +247,5 @@ demoSection();
 fullCheckSection();
 fourChainSection();
 mapSection();
+// the speed case of the operating envelope (issue 11): D = 10 MHz, Te = 1 K
+mapSection({ driftMHz: 10, temperatureExcursionK: 1, fsrShiftMHzPerK: -6.28 });

@@ -1,9 +1,11 @@
 /**
  * Command line: `npm run --silent heterolane -- <command>`.
  *
- * `check FILE` reads a plan document (`heterolane.plan/1`) from a file or
- * stdin and writes the result document (`heterolane.result/1`) as JSON to
- * stdout: exit 0 for any valid document whatever its findings, 2 for invalid
+ * `check FILE` reads a plan document (`heterolane.plan/1` or
+ * `heterolane.plan/2`) from a file or stdin and writes the result document
+ * (`heterolane.result/2`, with each channel's figures over the operating
+ * envelope and each chain's temperature window) as JSON to stdout: exit 0
+ * for any valid document whatever its findings, 2 for invalid
  * input (one `path: message` line per error on stderr, also for unreadable
  * files and malformed JSON), 1 for an internal fault.
  *
@@ -25,10 +27,12 @@ const USAGE = `Usage: heterolane check <plan.json | ->
        heterolane push MISSION FILE [--base N | --force] [--table]
        heterolane report MISSION > report.html
 
-check FILE     checks a plan document (format heterolane.plan/1) on this
-               machine and writes the result document (heterolane.result/1:
-               chains with feasibility map and place, channels, spurs,
-               findings) as JSON to stdout. Use "-" to read stdin.
+check FILE     checks a plan document (format heterolane.plan/1 or /2) on
+               this machine and writes the result document
+               (heterolane.result/2: chains with feasibility map, place and
+               temperature window; channels with nominal and worst figures
+               over the operating envelope; spurs; findings) as JSON to
+               stdout. Use "-" to read stdin.
 check --remote the stored result of the mission's latest revision.
 login          checks the server address and API token (made on the account
                page) and keeps them in ~/.config/heterolane/config.json, mode

@@ -41,6 +41,10 @@ export interface FieldRules {
   flag(): z.ZodBoolean;
   /** `upper` or `lower`. */
   sideband(): z.ZodEnum<{ upper: "upper"; lower: "lower" }>;
+  /** A temperature excursion in K: 0 up to `MAX_TEMPERATURE_EXCURSION_K`. */
+  temperatureExcursion(): z.ZodNumber;
+  /** `slot` or `occupied`: which IF band a channel's filter passes. */
+  ifFilter(): z.ZodEnum<{ slot: "slot"; occupied: "occupied" }>;
 }
 
 /** The largest modulation index accepted: just below the first zero of J0 (2.405), so the carrier keeps power. */
@@ -48,6 +52,10 @@ export const MAX_MODULATION_INDEX = 2.4;
 /** Most reach intervals one laser pair may list (docs/plan-format.md §2.10 "List limits"). */
 export const MAX_REACH_INTERVALS = 64;
 export const SIDEBANDS = ["upper", "lower"] as const;
+/** The IF filter of a channel passes its nominal slot, or the occupied band (the slot widened by the LO drift). */
+export const IF_FILTERS = ["slot", "occupied"] as const;
+/** The largest resonator temperature excursion a chain may state (K): well beyond any controlled resonator. */
+export const MAX_TEMPERATURE_EXCURSION_K = 50;
 
 function buildRules(dialect: "document" | "form"): FieldRules {
   const form = dialect === "form";
@@ -76,6 +84,11 @@ function buildRules(dialect: "document" | "form"): FieldRules {
         .lt(MAX_MODULATION_INDEX, say(`must be below ${MAX_MODULATION_INDEX} (the first zero of J0)`)),
     flag: () => (form ? z.boolean({ error: "must be true or false" }) : z.boolean()),
     sideband: () => (form ? z.enum(SIDEBANDS, { error: "must be upper or lower" }) : z.enum(SIDEBANDS)),
+    temperatureExcursion: () =>
+      number()
+        .gte(0, say("must be 0 or more"))
+        .lte(MAX_TEMPERATURE_EXCURSION_K, say(`must be ${MAX_TEMPERATURE_EXCURSION_K} or less`)),
+    ifFilter: () => (form ? z.enum(IF_FILTERS, { error: "must be slot or occupied" }) : z.enum(IF_FILTERS)),
   };
 }
 
@@ -187,9 +200,29 @@ export const channelShape = (r: FieldRules) => ({
   requiredNedtK: r.nonNegative().nullable(),
 });
 
+// ---------------------------------------------------------------- fields of version 2 (the operating envelope)
+
+/**
+ * The fields `heterolane.plan/2` adds (docs/plan-format.md §12 "Version 2:
+ * the operating envelope"), per entity, in document order. Which fields are
+ * version-2-only, and the value a document without them is read with, is
+ * listed once in `plan/versions.ts`.
+ */
+export const resonatorV2Shape = (r: FieldRules) => ({
+  fsrShiftMHzPerK: r.number(),
+});
+export const chainV2Shape = (r: FieldRules) => ({
+  temperatureExcursionK: r.temperatureExcursion(),
+});
+export const channelV2Shape = (r: FieldRules) => ({
+  ifFilter: r.ifFilter(),
+  centreToleranceMHz: r.positive().nullable(),
+});
+
 /** The values a complete entity takes for a field left out (the "if omitted" column of docs/plan-format.md §2.5–§2.7; the forms send partial updates without them). */
 export const FIELD_DEFAULTS = {
+  resonator: { fsrShiftMHzPerK: 0 },
   detector: { sampleRateGHz: null },
-  chain: { carrierRejectionDB: 0, sharedIf: false },
-  channel: { dsbOffsetGHz: null, requiredNedtK: null },
+  chain: { carrierRejectionDB: 0, sharedIf: false, temperatureExcursionK: 0 },
+  channel: { dsbOffsetGHz: null, requiredNedtK: null, ifFilter: "slot", centreToleranceMHz: null },
 } as const;

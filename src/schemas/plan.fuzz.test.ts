@@ -12,7 +12,7 @@ const PATH_RE = /^(?:[A-Za-z_$][\w$]*|\["(?:[^"\\]|\\.)*"\])(?:\.[A-Za-z_$][\w$]
 
 function wellFormed(r: ParsePlanResult) {
   if (r.ok) {
-    expect(r.plan.format).toBe("heterolane.plan/1");
+    expect(r.plan.format).toBe("heterolane.plan/2"); // every version is read as the current one (docs/plan-format.md §12.6)
     return;
   }
   expect(r.issues.length).toBeGreaterThan(0);

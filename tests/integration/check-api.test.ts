@@ -58,7 +58,7 @@ describe("POST /api/v1/check", () => {
       expect(r.status).toBe(200);
       expect(r.body).toEqual(expected);
     }
-    expect(expected.format).toBe("heterolane.result/1");
+    expect(expected.format).toBe("heterolane.result/2");
   });
 
   it("200 also for a valid plan full of error findings (findings are not input errors)", async () => {
@@ -122,6 +122,6 @@ describe("POST /api/v1/check", () => {
     doc.name = `Demo data ${"x".repeat(990_000)}`;
     const r = await postRaw(team.owner, JSON.stringify(doc));
     expect(r.status).toBe(200);
-    expect(r.body.format).toBe("heterolane.result/1");
+    expect(r.body.format).toBe("heterolane.result/2");
   });
 });

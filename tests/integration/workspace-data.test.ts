@@ -285,7 +285,7 @@ describe("revisions, findings and activity", () => {
     expect(revs[0]).toMatchObject({ status: "draft", authorName: expect.any(String), summary: expect.any(String) });
     const r1 = (await call(team.viewer, "GET", `${M()}/revisions/1`)).body;
     expect(r1.plan.channels).toEqual([]);
-    expect(r1.result.format).toBe("heterolane.result/1");
+    expect(r1.result.format).toBe("heterolane.result/2");
     const latest = (await call(team.viewer, "GET", `${M()}/revisions/${numbers[0]}`)).body;
     expect(latest.plan).toEqual((await call(team.viewer, "GET", `${M()}/plan`)).body);
     expect((await call(team.viewer, "GET", `${M()}/revisions/999999`)).status).toBe(404);

@@ -32,7 +32,7 @@ describe("heterolane check (valid documents)", { timeout: 60_000 }, () => {
     expect(r.stderr).toBe("");
     expect(r.code).toBe(0);
     const out = JSON.parse(r.stdout);
-    expect(out.format).toBe("heterolane.result/1");
+    expect(out.format).toBe("heterolane.result/2");
     expect(out).toEqual(expectedResult("docs/examples/clean.plan.json"));
   });
   it("a plan with error findings from stdin: still exit 0 (findings are not input errors)", () => {
@@ -62,5 +62,29 @@ describe("heterolane check (valid documents)", { timeout: 60_000 }, () => {
     expect(r.code).toBe(2);
     expect(r.stdout).toBe("");
     expect(r.stderr).toBe(expected.map((i) => `${i.path}: ${i.message}\n`).join(""));
+  });
+  it("a version 2 document: the result carries the envelope, the same document as checkPlan", () => {
+    const doc = JSON.parse(readFileSync(join(ROOT, "tests/fixtures/plans/ex1-single-channel.plan.json"), "utf8"));
+    doc.format = "heterolane.plan/2";
+    doc.resonators[0].fsrShiftMHzPerK = -6.28;
+    doc.chains[0].temperatureExcursionK = 0.5;
+    doc.channels[0].ifFilter = "occupied";
+    doc.channels[0].centreToleranceMHz = 2;
+    const r = cli(["check", "-"], JSON.stringify(doc));
+    expect(r.stderr).toBe("");
+    expect(r.code).toBe(0);
+    const out = JSON.parse(r.stdout);
+    const parsed = parsePlanText(JSON.stringify(doc));
+    if (!parsed.ok) throw new Error("the edited example must be valid");
+    expect(out).toEqual(JSON.parse(JSON.stringify(checkPlan(parsed.plan))));
+    expect(out.channels[0].envelope.worstNedtK).toBeGreaterThan(out.channels[0].nedtK);
+    expect(Array.isArray(out.chains[0].temperatureWindowK)).toBe(true);
+  });
+  it("a version 1 document with a version 2 field: exit 2, the field named and the format line to change", () => {
+    const r = cli(["check", "tests/fixtures/invalid/version-2-fields-in-version-1.plan.json"]);
+    expect(r.code).toBe(2);
+    expect(r.stderr).toContain(
+      'channels[0].ifFilter: is a field of heterolane.plan/2: change "format" to "heterolane.plan/2" to use it\n',
+    );
   });
 });

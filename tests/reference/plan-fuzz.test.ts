@@ -1,3 +1,4 @@
+import { resultDocumentSchema } from "@/schemas/result";
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { checkPlan, type ResultDocument } from "@/lib/plan";
@@ -17,7 +18,8 @@ function nonFinitePaths(v: unknown, path = "", out: string[] = []): string[] {
 }
 
 function expectWellFormed(plan: Plan, result: ResultDocument) {
-  expect(result.format).toBe("heterolane.result/1");
+  expect(result.format).toBe("heterolane.result/2");
+  expect(resultDocumentSchema.safeParse(JSON.parse(JSON.stringify(result))).success).toBe(true);
   expect(nonFinitePaths(result)).toEqual([]);
   expect(result.chains.map((c) => c.id)).toEqual(plan.chains.map((c) => c.id));
   expect(result.channels.map((c) => c.id)).toEqual(plan.channels.map((c) => c.id));

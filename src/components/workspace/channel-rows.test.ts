@@ -48,7 +48,7 @@ describe("rfBands", () => {
 
 describe("buildChannelRows", () => {
   const result: PlanResult = {
-    format: "heterolane.result/1",
+    format: "heterolane.result/2",
     chains: [],
     spurs: [],
     channels: [
@@ -61,6 +61,18 @@ describe("buildChannelRows", () => {
         radiometricBandwidthMHz: 9.9999,
         nedtK: 17.92,
         lockReplicaDB: -24.72,
+        envelope: {
+          worstNedtK: 81.12,
+          worstNedtAt: { loShiftMHz: -20, temperatureOffsetK: 0 },
+          worstRadiometricBandwidthMHz: 9.99,
+          worstRadiometricBandwidthAt: { loShiftMHz: -20, temperatureOffsetK: 0 },
+          worstImageRejectionDB: 42.71,
+          worstImageRejectionAt: { loShiftMHz: -20, temperatureOffsetK: 0 },
+          worstModeResponse: 0.1895,
+          worstModeResponseAt: { loShiftMHz: -20, temperatureOffsetK: 0 },
+          centreErrorMHz: 19.32,
+          centreErrorAt: { loShiftMHz: -20, temperatureOffsetK: 0 },
+        },
       },
     ],
     findings: [

@@ -12,6 +12,8 @@ const TEXT: Readonly<Record<FindingCode, string>> = {
   "lo-off-step": "The LO offset is not a multiple of the laser pair's tuning step.",
   "band-outside-rf-input": "A passband is not inside the chain's RF input passband.",
   "mode-detuned": "A passband centre lies more than half a linewidth from the wanted resonator mode.",
+  "centre-drift":
+    "Over the operating envelope, the effective centre of a passband strays further than its centre tolerance.",
   "band-wider-than-mode": "The passband is wider than the mode: the mode, not the channel filter, shapes the response.",
   "if-outside-detector": "The occupied IF band (slot ± drift) is not inside the detector's usable band.",
   "slot-overlap": "Two channels of the chain have occupied IF bands closer than the guard band.",

@@ -8,13 +8,36 @@ const codes = (fs: Finding[]) => fs.map((f) => f.code);
 const find = (fs: Finding[], code: FindingCode, channel: string | null = null) =>
   fs.filter((f) => f.code === code && (channel === null || f.channel === channel));
 
+/**
+ * Example 1 with its LO drift set to 0: the operating envelope is then the
+ * nominal point, where the rules that now take their worst value over the
+ * envelope (mode-detuned, image-response, nedt-unmet: docs/plan-format.md
+ * §12.5) work on the nominal figures, as they did before version 2.
+ */
+const nominal1 = (mutate?: Parameters<typeof example1>[0]) =>
+  example1((p) => {
+    p.lasers[0]!.driftMHz = 0;
+    mutate?.(p);
+  });
+
 describe("checkChainAtOffset: one rule at a time on example 1 (δ = 19.34 MHz, guard 50 MHz, drift 20 MHz)", () => {
-  it("the plan as written has only the carrier and protected-band notes", () => {
-    const f = checkChainAtOffset(example1(), "A", 184.81);
+  it("the plan without its drift has only the carrier and protected-band notes", () => {
+    const f = checkChainAtOffset(nominal1(), "A", 184.81);
     expect(codes(f)).toEqual(["carrier-dominates-lo", "in-protected-band"]);
     expect(f[0]!.data).toEqual({ carrierMW: expect.closeTo(4.96175, 4), loMW: 2 });
     expect(f[0]!.channel).toBeNull();
     expect(f[1]!.severity).toBe("info");
+  });
+
+  it("the plan as written: its ±20 MHz LO drift detunes the 10 MHz channel (issue 11's known answer: mode-detuned and nedt-unmet)", () => {
+    const f = checkChainAtOffset(example1(), "A", 184.81);
+    expect(codes(f)).toEqual(["carrier-dominates-lo", "mode-detuned", "nedt-unmet", "in-protected-band"]);
+    // worst NEΔT 81.123 K at u = ±20 MHz (issue 11, computed independently from its model)
+    expect(find(f, "nedt-unmet")[0]!.data.nedtK).toBeCloseTo(81.123, 3);
+    // the received centre 20 MHz from the mode: response 1/(1 + (2·20/19.34)²) = 0.18948 (−7.22 dB)
+    expect(find(f, "mode-detuned")[0]!.data.detuningMHz).toBeCloseTo(20, 9);
+    expect(find(f, "mode-detuned")[0]!.data.responseDB).toBeCloseTo(10 * Math.log10(1 / (1 + (40 / 19.34) ** 2)), 9);
+    expect(find(f, "mode-detuned")[0]!.message).toContain("at an LO shift of −20 MHz");
   });
 
   it("lo-uncovered: the drift window must sit inside one reach interval (edge exact, 1e-9 allowance)", () => {
@@ -61,7 +84,7 @@ describe("checkChainAtOffset: one rule at a time on example 1 (δ = 19.34 MHz, g
   it("image-response: 49.48 dB against a 50 dB requirement", () => {
     const f = find(
       checkChainAtOffset(
-        example1((p) => (p.settings.imageRejectionDB = 50)),
+        nominal1((p) => (p.settings.imageRejectionDB = 50)),
         "A",
         184.81,
       ),
@@ -73,7 +96,7 @@ describe("checkChainAtOffset: one rule at a time on example 1 (δ = 19.34 MHz, g
   });
 
   it("band-outside-rf-input, mode-detuned, band-wider-than-mode", () => {
-    const plan = example1((p) => {
+    const plan = nominal1((p) => {
       p.channels[0]!.centerGHz = 183.34; // 30 MHz from the mode centre
       p.channels[0]!.bandwidthMHz = 30; // wider than δ
       p.chains[0]!.rfInput.maxGHz = 183.35;
@@ -84,7 +107,7 @@ describe("checkChainAtOffset: one rule at a time on example 1 (δ = 19.34 MHz, g
   });
 
   it("pd-overload and nedt-unmet", () => {
-    const plan = example1((p) => {
+    const plan = nominal1((p) => {
       p.detectors[0]!.maxInputMW = 3;
       p.channels[0]!.requiredNedtK = 17;
     });

@@ -13,6 +13,7 @@ function lockOnlyPlan(orders: number): PlanInput {
   d.channels = d.channels.filter((c) => c.chain === "A");
   d.channels[0]!.dsbOffsetGHz = 1;
   d.lasers[0]!.lock.orders = orders;
+  d.lasers[0]!.driftMHz = 20; // D = 0.02 GHz, as the hand count below assumes
   return d;
 }
 

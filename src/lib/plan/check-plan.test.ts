@@ -1,3 +1,4 @@
+import { resultDocumentSchema } from "@/schemas/result";
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { arbitraryPlan, example2 } from "../../../tests/fixtures/plans/builders";
@@ -6,7 +7,9 @@ import { checkChainAtOffset } from "./check-chain-at-offset";
 import { SPUR_FAMILIES, type ResultDocument } from "./types";
 
 function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], planChainIds: string[]): void {
-  expect(doc.format).toBe("heterolane.result/1");
+  expect(doc.format).toBe("heterolane.result/2");
+  // and, strictly, the result document's schema (src/schemas/result.ts)
+  expect(resultDocumentSchema.safeParse(JSON.parse(JSON.stringify(doc))).success).toBe(true);
   expect(Object.keys(doc)).toEqual(["format", "chains", "channels", "spurs", "findings"]);
   expect(doc.chains.map((c) => c.id)).toEqual(planChainIds);
   expect(doc.channels.map((c) => c.id)).toEqual(planChannelIds);
@@ -19,6 +22,9 @@ function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], plan
       "excludedGHz",
       "placeGHz",
       "placeReason",
+      // version 2 (docs/plan-format.md §12.7)
+      "temperatureWindowK",
+      "temperatureMarginK",
     ]);
   for (const c of doc.channels) {
     expect(Object.keys(c)).toEqual([
@@ -30,6 +36,8 @@ function assertDocumentShape(doc: ResultDocument, planChannelIds: string[], plan
       "radiometricBandwidthMHz",
       "nedtK",
       "lockReplicaDB",
+      // version 2 (docs/plan-format.md §12.7)
+      "envelope",
     ]);
     if (c.ifSlotGHz === null) {
       expect(c.occupiedGHz).toBeNull();

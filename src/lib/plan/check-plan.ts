@@ -2,6 +2,7 @@ import type { Plan } from "@/schemas/plan";
 import { chainContext } from "./internals/chain-context";
 import { channelResult } from "./internals/channel-result";
 import { evaluateChain } from "./internals/evaluate-chain";
+import { temperatureWindowAt } from "./internals/temperature-window";
 import type { WorkCounter } from "./internals/work-counter";
 import { feasibilityMap } from "./feasibility-map";
 import { placeLo } from "./place-lo";
@@ -24,10 +25,11 @@ export interface CheckOptions {
 }
 
 /**
- * Check a parsed plan and build the whole `heterolane.result/1` document
- * (docs/plan-format.md §7 "The result document"): per chain the linewidth,
- * photodiode power, feasibility map and place; per channel the IF figures;
- * every kept spur; every finding in the order of §4.3.
+ * Check a parsed plan and build the whole `heterolane.result/2` document
+ * (docs/plan-format.md §7 "The result document" and §12.7): per chain the
+ * linewidth, photodiode power, feasibility map, place and temperature
+ * window; per channel the nominal IF figures and the figures over the
+ * operating envelope; every kept spur; every finding in the order of §4.3.
  */
 export function checkPlan(plan: Plan, options: CheckOptions = {}): ResultDocument {
   const { work } = options;
@@ -40,6 +42,7 @@ export function checkPlan(plan: Plan, options: CheckOptions = {}): ResultDocumen
     const evaluation = evaluateChain(ctx, chain.loOffsetGHz, { work });
     const map = feasibilityMap(plan, chain.id, { work });
     const place = placeLo(plan, chain.id, map.feasibleGHz);
+    const window = temperatureWindowAt(ctx, chain.loOffsetGHz, evaluation.findings, evaluation.channels);
     chains.push({
       id: chain.id,
       linewidthMHz: ctx.delta * 1000,
@@ -49,6 +52,8 @@ export function checkPlan(plan: Plan, options: CheckOptions = {}): ResultDocumen
       excludedGHz: map.excludedGHz,
       placeGHz: place.placeGHz,
       placeReason: place.placeReason,
+      temperatureWindowK: window.intervalsK,
+      temperatureMarginK: window.marginK,
     });
     for (const c of evaluation.channels) byChannelId.set(c.ch.channel.id, channelResult(c));
     spurs.push(...evaluation.spurs);

@@ -122,6 +122,38 @@ export function arbitrarySmallPlanInput(opts: SmallPlanOptions = {}): fc.Arbitra
     });
 }
 
+/**
+ * The small plans of `arbitrarySmallPlanInput` as version 2 documents with
+ * an operating envelope: an LO drift of 0.5–40 MHz, a temperature
+ * excursion of 0 or up to 2 K, an FSR shift of up to ±20 MHz per kelvin
+ * and either IF filter per channel (invented demo data).
+ */
+export function arbitraryEnvelopePlanInput(opts: SmallPlanOptions = {}): fc.Arbitrary<PlanInput> {
+  return fc
+    .tuple(
+      arbitrarySmallPlanInput(opts),
+      fc.record({
+        driftMHz: dbl(0.5, 40),
+        te: fc.oneof(fc.constant(0), dbl(0.001, 2)),
+        phi: dbl(-20, 20),
+        occupied: fc.array(fc.boolean(), { minLength: 8, maxLength: 8 }),
+      }),
+    )
+    .map(([p, e]) => {
+      const q = structuredClone(p);
+      q.format = "heterolane.plan/2";
+      q.lasers[0]!.driftMHz = kHz(e.driftMHz / 1000) * 1000;
+      q.chains[0]!.temperatureExcursionK = kHz(e.te / 1000) * 1000;
+      q.resonators[0]!.fsrShiftMHzPerK = kHz(e.phi / 1000) * 1000;
+      q.channels.forEach((c, i) => (c.ifFilter = e.occupied[i % 8] ? "occupied" : "slot"));
+      return q;
+    });
+}
+
+export function arbitraryEnvelopePlan(opts: SmallPlanOptions = {}): fc.Arbitrary<Plan> {
+  return arbitraryEnvelopePlanInput(opts).map(parseOrThrow);
+}
+
 export function parseOrThrow(input: unknown): Plan {
   const r = parsePlan(input);
   if (!r.ok) throw new Error(`invalid generated plan: ${r.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);

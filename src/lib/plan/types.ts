@@ -1,9 +1,11 @@
 /**
- * Types of the result document `heterolane.result/1`
- * (docs/plan-format.md §7 "The result document" and §4 "Rules and findings").
+ * Types of the result document `heterolane.result/2`
+ * (docs/plan-format.md §7 "The result document", §4 "Rules and findings"
+ * and §12.7 "The result document of version 2"). Its zod schema is
+ * `src/schemas/result.ts`.
  */
 
-export const RESULT_FORMAT = "heterolane.result/1" as const;
+export const RESULT_FORMAT = "heterolane.result/2" as const;
 
 /** The severities of findings, worst first. */
 export const SEVERITIES = ["error", "warning", "info"] as const;
@@ -17,6 +19,7 @@ export const RULE_ORDER = [
   "lo-off-step",
   "band-outside-rf-input",
   "mode-detuned",
+  "centre-drift",
   "band-wider-than-mode",
   "if-outside-detector",
   "slot-overlap",
@@ -52,6 +55,7 @@ export const RULE_SEVERITY: Readonly<Record<FindingCode, Severity>> = {
   "lo-off-step": "warning",
   "band-outside-rf-input": "error",
   "mode-detuned": "error",
+  "centre-drift": "error",
   "band-wider-than-mode": "warning",
   "if-outside-detector": "error",
   "slot-overlap": "error",
@@ -139,6 +143,47 @@ export interface ChainResult {
   excludedGHz: { bandGHz: [number, number]; codes: FindingCode[] }[];
   placeGHz: number | null;
   placeReason: PlaceReason;
+  /**
+   * The temperature offsets (K, within ±50 K, edges to 1 mK) at which every
+   * error rule of the chain holds at its LO for every LO shift within ±D,
+   * as increasing intervals; empty when a rule that does not depend on the
+   * temperature fails (docs/plan-format.md §12.6).
+   */
+  temperatureWindowK: [number, number][];
+  /**
+   * How far ±Te could grow (positive) or must shrink (negative) to fit in
+   * one interval of the window (K, to 1 mK); null when the window is empty.
+   */
+  temperatureMarginK: number | null;
+}
+
+/** A point of the operating envelope: LO shift u in MHz and resonator temperature offset t in K. */
+export interface EnvelopePoint {
+  loShiftMHz: number;
+  temperatureOffsetK: number;
+}
+
+/**
+ * A channel's figures over the operating envelope of its chain (LO shifts
+ * within ±D, temperature offsets within ±Te), each with the point where it
+ * occurs (docs/plan-format.md §12.7).
+ */
+export interface ChannelEnvelopeResult {
+  /** Largest NEΔT; null without a slot, with an impossible occupied-band filter, or when not finite. */
+  worstNedtK: number | null;
+  worstNedtAt: EnvelopePoint | null;
+  /** Smallest radiometric bandwidth; null as NEΔT, or when S ≡ 0. */
+  worstRadiometricBandwidthMHz: number | null;
+  worstRadiometricBandwidthAt: EnvelopePoint | null;
+  /** Lowest image rejection; null for DSB, without a slot, with an impossible filter, or when nothing of the image gets in. */
+  worstImageRejectionDB: number | null;
+  worstImageRejectionAt: EnvelopePoint | null;
+  /** Lowest response of the wanted mode at a received passband centre (linear, 0..1); given with or without a slot. */
+  worstModeResponse: number;
+  worstModeResponseAt: EnvelopePoint;
+  /** Largest error of the effective centre of a passband (MHz); null with an impossible occupied-band filter. */
+  centreErrorMHz: number | null;
+  centreErrorAt: EnvelopePoint | null;
 }
 
 export interface ChannelResult {
@@ -150,6 +195,8 @@ export interface ChannelResult {
   radiometricBandwidthMHz: number | null;
   nedtK: number | null;
   lockReplicaDB: number;
+  /** The channel over the operating envelope (version 2). */
+  envelope: ChannelEnvelopeResult;
 }
 
 export interface ResultDocument {

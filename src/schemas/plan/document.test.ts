@@ -27,9 +27,11 @@ describe("the valid base plan", () => {
 });
 
 describe("format and name", () => {
-  it("format must be exactly heterolane.plan/1", () => {
-    expectOnly((d) => (d.format = "heterolane.plan/2"), "format", 'must be "heterolane.plan/1"');
-    expectOnly((d) => (d.format = "Heterolane.plan/1"), "format", 'must be "heterolane.plan/1"');
+  it("format must be exactly heterolane.plan/1 or heterolane.plan/2", () => {
+    expectValid((d) => (d.format = "heterolane.plan/2"));
+    const both = 'must be "heterolane.plan/1" or "heterolane.plan/2"';
+    expectOnly((d) => (d.format = "heterolane.plan/3"), "format", both);
+    expectOnly((d) => (d.format = "Heterolane.plan/1"), "format", both);
     expectOnly((d) => delete d.format, "format", "is required");
   });
   it("name must be a non-empty string", () => {

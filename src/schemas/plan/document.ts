@@ -1,7 +1,9 @@
 import { z } from "zod";
 import {
   channelShape,
+  channelV2Shape,
   chainShape,
+  chainV2Shape,
   detectorShape,
   documentRules as r,
   FIELD_DEFAULTS,
@@ -10,19 +12,31 @@ import {
   MAX_REACH_INTERVALS,
   planIdSchema as id,
   resonatorShape,
+  resonatorV2Shape,
   settingsShape,
 } from "../fields";
 import { crossFieldIssues } from "./cross-field";
+import {
+  PLAN_FORMAT,
+  PLAN_FORMAT_V1,
+  PLAN_FORMATS,
+  VERSION_2_FIELDS,
+  versionIssues,
+  withVersion2Fields,
+} from "./versions";
 
 /**
- * The zod schema of the plan document `heterolane.plan/1`
- * (docs/plan-format.md §2 "The plan document"): types, signs, ranges,
- * strict objects and list limits. The numeric rules come from the shared field rules
- * (`../fields.ts`) in their document dialect; the rules that relate several
- * fields are `crossFieldIssues` (`cross-field.ts`).
+ * The zod schema of the plan document, versions `heterolane.plan/1` and
+ * `heterolane.plan/2` (docs/plan-format.md §2 "The plan document" and §12
+ * "Version 2"): types, signs, ranges, strict objects and list limits. The
+ * numeric rules come from the shared field rules (`../fields.ts`) in their
+ * document dialect; the rules that relate several fields are
+ * `crossFieldIssues` (`cross-field.ts`); which fields belong to version 2,
+ * and their defaults, is `versions.ts`. Every document parses to a plan of
+ * the current version with every field written out.
  */
 
-export const PLAN_FORMAT = "heterolane.plan/1" as const;
+export { PLAN_FORMAT, PLAN_FORMAT_V1, PLAN_FORMATS } from "./versions";
 
 /** List limits (docs/plan-format.md §2.10 "List limits"). */
 export const PLAN_LIMITS = {
@@ -49,9 +63,21 @@ const laserSchema = z.strictObject({
   }),
 });
 
+/** A version 2 field: optional in the document (its default is filled in after the version check). */
+const optionalV2 = <T extends z.ZodType>(schema: T, value: unknown, description: string) =>
+  schema
+    .optional()
+    .meta({ default: value, description: `${description} (version 2; default ${JSON.stringify(value)})` });
+
+const resonatorV2 = resonatorV2Shape(r);
 const resonatorSchema = z.strictObject({
   id: id(),
   ...resonatorShape(r),
+  fsrShiftMHzPerK: optionalV2(
+    resonatorV2.fsrShiftMHzPerK,
+    VERSION_2_FIELDS.resonators.fsrShiftMHzPerK,
+    "change of the FSR per kelvin of resonator temperature, MHz/K, signed",
+  ),
 });
 
 const detector = detectorShape(r);
@@ -76,6 +102,11 @@ const chainSchema = z.strictObject({
   ...chain,
   carrierRejectionDB: chain.carrierRejectionDB.default(FIELD_DEFAULTS.chain.carrierRejectionDB),
   sharedIf: chain.sharedIf.default(FIELD_DEFAULTS.chain.sharedIf),
+  temperatureExcursionK: optionalV2(
+    chainV2Shape(r).temperatureExcursionK,
+    VERSION_2_FIELDS.chains.temperatureExcursionK,
+    "± excursion of the resonator temperature about its set point while observing, K",
+  ),
 });
 
 const channel = channelShape(r);
@@ -86,11 +117,21 @@ const channelSchema = z.strictObject({
   ...channel,
   dsbOffsetGHz: channel.dsbOffsetGHz.default(FIELD_DEFAULTS.channel.dsbOffsetGHz),
   requiredNedtK: channel.requiredNedtK.default(FIELD_DEFAULTS.channel.requiredNedtK),
+  ifFilter: optionalV2(
+    channelV2Shape(r).ifFilter,
+    VERSION_2_FIELDS.channels.ifFilter,
+    '"slot": the IF filter passes the nominal slot; "occupied": the slot widened by the LO drift',
+  ),
+  centreToleranceMHz: optionalV2(
+    channelV2Shape(r).centreToleranceMHz,
+    VERSION_2_FIELDS.channels.centreToleranceMHz,
+    "allowed error of the effective centre of each passband, MHz, or null",
+  ),
 });
 
 /** The field rules of the whole document, without the cross-field rules. */
 const planFieldsSchema = z.strictObject({
-  format: z.literal(PLAN_FORMAT),
+  format: z.enum(PLAN_FORMATS),
   name: z.string().min(1),
   settings: settingsSchema,
   lasers: z.array(laserSchema).max(PLAN_LIMITS.lasers),
@@ -101,17 +142,64 @@ const planFieldsSchema = z.strictObject({
 });
 
 /**
- * The complete schema of `heterolane.plan/1`, cross-field rules included.
+ * The complete schema of the plan document, cross-field rules and the
+ * version check included; its output is a plan of the current version
+ * (`format` is `heterolane.plan/2`, every version 2 field filled in).
  * Prefer `parsePlan`: it also reports the cross-field rules when other
  * fields are invalid, and formats paths and messages.
  */
-export const planSchema = planFieldsSchema.superRefine((plan, ctx) => {
-  for (const issue of crossFieldIssues(plan)) {
-    ctx.addIssue({ code: "custom", path: issue.path, message: issue.message });
-  }
-});
+export const planSchema = planFieldsSchema
+  .superRefine((plan, ctx) => {
+    for (const issue of [...crossFieldIssues(plan), ...versionIssues(plan)]) {
+      ctx.addIssue({ code: "custom", path: issue.path, message: issue.message });
+    }
+  })
+  .transform((plan) => ({
+    ...plan,
+    format: PLAN_FORMAT,
+    resonators: plan.resonators.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.resonators)),
+    chains: plan.chains.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.chains)),
+    channels: plan.channels.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.channels)),
+  }));
 
-/** The parsed plan: defaults applied, omitted nullable fields set to null. */
+/** An entity schema without the fields version 2 added to it (a version 1 document's entity). */
+function versionOne<S extends z.ZodObject>(schema: S, added: Record<string, unknown>) {
+  const mask = Object.fromEntries(Object.keys(added).map((k) => [k, true])) as Record<string, true>;
+  return schema.omit(mask as never);
+}
+
+/**
+ * The two versions of the document as written (no defaults filled in, no
+ * version upgrade, no cross-field rules), for the JSON Schema of the format
+ * (`docs/schema/plan.schema.json`): a `heterolane.plan/2` document, or a
+ * `heterolane.plan/1` document, which has none of the fields of
+ * `VERSION_2_FIELDS`.
+ */
+export const planDocumentSchema = z
+  .union([
+    planFieldsSchema.extend({ format: z.literal(PLAN_FORMAT) }).meta({
+      title: "heterolane.plan/2",
+      description: "A plan document of version 2 (docs/plan-format.md §2 and §12).",
+    }),
+    planFieldsSchema
+      .extend({
+        format: z.literal(PLAN_FORMAT_V1),
+        resonators: z.array(versionOne(resonatorSchema, VERSION_2_FIELDS.resonators)).max(PLAN_LIMITS.resonators),
+        chains: z.array(versionOne(chainSchema, VERSION_2_FIELDS.chains)).max(PLAN_LIMITS.chains),
+        channels: z.array(versionOne(channelSchema, VERSION_2_FIELDS.channels)).max(PLAN_LIMITS.channels),
+      })
+      .meta({
+        title: "heterolane.plan/1",
+        description: "A plan document of version 1 (docs/plan-format.md §2); read with the defaults of version 2.",
+      }),
+  ])
+  .meta({
+    title: "Heterolane plan document",
+    description:
+      "A frequency plan of a microwave-photonic radiometer (docs/plan-format.md). Rules between fields (§2.8) are not expressed here.",
+  });
+
+/** The parsed plan: defaults applied, omitted nullable fields set to null, version 2 fields filled in. */
 export type Plan = z.output<typeof planSchema>;
 /** The plan as written in JSON (optional fields may be omitted). */
 export type PlanInput = z.input<typeof planSchema>;

@@ -20,7 +20,7 @@ describe("all errors are reported, in document order", () => {
       delete d.channels[2].antennaK;
     });
     expect(found).toEqual([
-      { path: "format", message: 'must be "heterolane.plan/1"' },
+      { path: "format", message: 'must be "heterolane.plan/1" or "heterolane.plan/2"' },
       { path: "settings.spurMaxOrder", message: "must be at most 9" },
       { path: "lasers[0].reach[1].minGHz", message: "must be below maxGHz (1)" },
       { path: "lasers[0].lock.modulationIndex", message: "must be below 2.4" },

@@ -99,6 +99,7 @@ const KEY_ORDER = [
   "orders",
   "fsrGHz",
   "loadedQ",
+  "fsrShiftMHzPerK",
   "minGHz",
   "maxGHz",
   "maxInputMW",
@@ -114,6 +115,7 @@ const KEY_ORDER = [
   "pathLossDB",
   "carrierRejectionDB",
   "sharedIf",
+  "temperatureExcursionK",
   "chain",
   "centerGHz",
   "bandwidthMHz",
@@ -123,6 +125,8 @@ const KEY_ORDER = [
   "receiverK",
   "gainStability",
   "requiredNedtK",
+  "ifFilter",
+  "centreToleranceMHz",
 ];
 const KEY_RANK = new Map(KEY_ORDER.map((k, i) => [k, i]));
 

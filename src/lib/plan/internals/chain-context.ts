@@ -1,5 +1,6 @@
 import type { Plan, PlanChain, PlanChannel, PlanDetector, PlanLaser, PlanResonator } from "@/schemas/plan";
 import type { Comb } from "./comb";
+import { type EnvelopeBox, envelopeBox } from "./envelope-box";
 import { type Interval, mergeIntervals } from "./intervals";
 import { lorentzianIntegral, lorentzianSquaredIntegral } from "./lorentz";
 import { lockReplicaDB } from "./lock-replica";
@@ -28,6 +29,17 @@ export interface ChannelContext {
   intW2Self: number;
   /** Lock-replica share `lockReplicaDB` (dB). */
   lockReplicaDB: number;
+  /** The channel's IF filter passes its slot, or the occupied band (docs/plan-format.md §12.3). */
+  occupiedFilter: boolean;
+  /** Allowed error of the effective centre (GHz), or null. */
+  centreToleranceGHz: number | null;
+  /**
+   * Scan step of the envelope's searches in the detuning, δ/16 (GHz): every
+   * figure the searches look at is the wanted mode (or the comb) integrated
+   * over a band, a Lorentzian convolved with a box, which is smooth on the
+   * scale of the linewidth whatever the band's width.
+   */
+  envelopeStep: number;
 }
 
 /**
@@ -53,6 +65,12 @@ export interface ChainContext {
   comb: Comb;
   /** Drift `D = driftMHz/1000`. */
   D: number;
+  /** FSR change per kelvin φ = fsrShiftMHzPerK/1000 (GHz/K). */
+  phi: number;
+  /** Temperature excursion Te (K). */
+  Te: number;
+  /** The chain's operating envelope: u ∈ [−D, D], t ∈ [−Te, Te] (docs/plan-format.md §12.2). */
+  box: EnvelopeBox;
   /** Tuning step in GHz (0: any offset). */
   step: number;
   /** Guard in GHz. */
@@ -107,6 +125,15 @@ export function chainContext(plan: Plan, chainId: string): ChainContext {
     delta,
     comb: { fsr, delta },
     D: laser.driftMHz / 1000,
+    phi: resonator.fsrShiftMHzPerK / 1000,
+    Te: chain.temperatureExcursionK,
+    box: envelopeBox(
+      laser.driftMHz / 1000,
+      -chain.temperatureExcursionK,
+      chain.temperatureExcursionK,
+      resonator.fsrShiftMHzPerK / 1000,
+      nStar,
+    ),
     step: laser.stepMHz / 1000,
     guard: plan.settings.guardMHz / 1000,
     fm,
@@ -158,5 +185,8 @@ export function channelContext(
     intW,
     intW2Self,
     lockReplicaDB: lockReplicaDB(ctx.fm, ctx.beta, ctx.lockOrders, ctx.delta, B),
+    occupiedFilter: channel.ifFilter === "occupied",
+    centreToleranceGHz: channel.centreToleranceMHz === null ? null : channel.centreToleranceMHz / 1000,
+    envelopeStep: ctx.delta / 16,
   };
 }

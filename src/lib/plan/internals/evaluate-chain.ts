@@ -1,5 +1,6 @@
 import type { Finding, Spur } from "../types";
 import type { ChainContext } from "./chain-context";
+import type { EnvelopeBox } from "./envelope-box";
 import { FindingsCollector } from "./findings-collector";
 import { type ChannelAtOffset, offsetState } from "./offset-state";
 import { detectorRules } from "./rules/detector-rules";
@@ -9,6 +10,7 @@ import { loRules } from "./rules/lo-rules";
 import { overlapRules } from "./rules/overlap-rules";
 import { passbandRules } from "./rules/passband-rules";
 import { powerRules } from "./rules/power-rules";
+import { centreRules } from "./rules/centre-rules";
 import { regulatoryRules } from "./rules/regulatory-rules";
 import { samplingRules } from "./rules/sampling-rules";
 import { sensitivityRules } from "./rules/sensitivity-rules";
@@ -27,6 +29,8 @@ export interface EvaluateOptions {
   mapOnly?: boolean;
   /** Counts the work steps of the evaluation (see `WorkCounter`). */
   work?: WorkCounter;
+  /** The operating envelope the worst values are taken over; the chain's own (±D, ±Te) unless told. */
+  box?: EnvelopeBox;
 }
 
 export interface ChainEvaluation {
@@ -47,7 +51,7 @@ export interface ChainEvaluation {
  * which puts them in the order of docs/plan-format.md §4.3 "Order of findings".
  */
 export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOptions = {}): ChainEvaluation {
-  const at = offsetState(ctx, L, options.mapOnly === true);
+  const at = offsetState(ctx, L, options.mapOnly === true, options.box ?? ctx.box);
   const out = new FindingsCollector(
     ctx.chain.id,
     ctx.channels.map((ch) => ch.channel.id),
@@ -57,6 +61,7 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
   lockRules(at, out);
   powerRules(at, out);
   passbandRules(at, out);
+  centreRules(at, out);
   detectorRules(at, out);
   overlapRules(at, out);
   imageRules(at, out);

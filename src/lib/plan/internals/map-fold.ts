@@ -5,6 +5,7 @@
  * enumerated up to `MAX_ZONE_CROSSINGS`; each edge tried is one work step.
  */
 import { type IFn, type LSet, type Lin, type Piece, above, at, below, crossing, cutsOf, lin, sub } from "./map-linear";
+import { TOL } from "./tolerance";
 import { type WorkCounter, countSteps } from "./work-counter";
 
 /** Multiples `k·h` (k ≥ 0) met by the edge `f` on (from, to), as L values; each multiple tried is one work step. */
@@ -21,6 +22,15 @@ function multipleCrossings(f: Lin, h: number, from: number, to: number, out: num
   for (let k = kLo; k <= kHi; k++) {
     const L = crossing(f, k * h, from, to);
     if (L === L) out.push(L);
+    // an edge that reaches k·h within 1e-9 GHz of a joint of two pieces only touches it there:
+    // cut where it is the allowance away, so the tie is decided as the per-offset check decides it
+    const exact = (k * h - f.a) / f.b;
+    if (Math.abs(exact - from) <= TOL || Math.abs(exact - to) <= TOL) {
+      for (const c of [k * h - TOL, k * h + TOL]) {
+        const Lt = crossing(f, c, from, to);
+        if (Lt === Lt) out.push(Lt);
+      }
+    }
   }
 }
 
@@ -95,8 +105,13 @@ export function foldFn(fn: IFn, h: number, work?: WorkCounter): FoldedPiece[] {
       // interior multiples of h: floor(l/h)+1 .. ceil(hv/h)−1
       const kFirst = zl + 1;
       const kLast = Math.ceil(hv / h) - 1;
+      // a multiple within the allowance of an edge does not make a straddle (as in the per-offset
+      // check, docs/plan-format.md §1.4); such a band keeps the zone of its midpoint
+      const kTol = Math.max(1, Math.floor((l + TOL) / h) + 1);
+      const straddles = kTol * h > l + TOL && kTol * h < hv - TOL;
+      const tieZone = straddles ? -1 : Math.floor((l + hv) / 2 / h);
       if (kLast - kFirst >= 1) {
-        out.push({ from, to, lo: lin(0, 0), hi: lin(h, 0), zone: -1 });
+        out.push({ from, to, lo: lin(0, 0), hi: lin(h, 0), zone: straddles ? -1 : tieZone });
       } else if (kLast === kFirst) {
         const fl = foldLin(p.lo, zl, h);
         const fh = foldLin(p.hi, zh, h);
@@ -110,8 +125,9 @@ export function foldFn(fn: IFn, h: number, work?: WorkCounter): FoldedPiece[] {
           const upper = at(fl, m2) <= at(fh, m2) ? fh : fl;
           // a band crossing only 0 (lower edge below 0, e.g. an occupied band
           // widened by drift) is not a Nyquist straddle (k ≥ 1): it keeps zone 0
-          if (kFirst % 2 === 0) out.push({ from: f2, to: t2, lo: lin(0, 0), hi: upper, zone: kFirst === 0 ? 0 : -1 });
-          else out.push({ from: f2, to: t2, lo: lower, hi: lin(h, 0), zone: -1 });
+          if (kFirst % 2 === 0)
+            out.push({ from: f2, to: t2, lo: lin(0, 0), hi: upper, zone: kFirst === 0 ? 0 : tieZone });
+          else out.push({ from: f2, to: t2, lo: lower, hi: lin(h, 0), zone: tieZone });
         }
       } else {
         const fl = foldLin(p.lo, zl, h);

@@ -1,7 +1,9 @@
-import { type Comb, imageFires, imageWindows, makeImageFires } from "./map-image";
+import { type EnvelopeBox, isPointBox } from "./envelope-box";
+import { type Comb, imageFires, imageWindows, makeEnvelopeImageFires, makeImageFires } from "./map-image";
 import type { MapChannel, MapModel } from "./map-model";
 import { type WorkCounter, countSteps } from "./work-counter";
 
+// (Longer than most files: the fast search and the plain scan it is tested against share their geometry and are kept side by side.)
 /**
  * The edges of the image rule's firing set for the feasibility map
  * (docs/plan-format.md §6.3 "The image rule"): the fast grid search the
@@ -22,6 +24,72 @@ export const MAX_GRID_POINTS = 2_000_000;
  * rounds to an end (ADR 018).
  */
 export const IMAGE_EDGE_BRACKET = 1e-6;
+
+/**
+ * Where the search looks, for a channel over an envelope box (the nominal
+ * point when `box` is left out): the received band, the piece of `[lo, hi]`
+ * the rule can apply on (an occupied-band filter is impossible within D of
+ * the band), the kinks where an edge of the image band crosses an rfInput
+ * edge (zones of half-width D/2 in L: the image band moves with the LO
+ * shift), and the half-width of the zones around the points where the
+ * centre of the image band is a multiple of fsr/2 (D/2, and the comb's
+ * motion `|k·φ|·max|t|/4` for the k-th such point).
+ */
+interface SearchGeometry {
+  xl: number;
+  xh: number;
+  lo: number;
+  hi: number;
+  /** Kink zones [from, to] (points for the nominal rule). */
+  kinks: [number, number][];
+  /** Half-width of the split zone of the k-th monotone split point. */
+  splitHalfWidth: (k: number) => number;
+  moving: boolean;
+}
+
+function searchGeometry(m: MapModel, ch: MapChannel, lo: number, hi: number, box?: EnvelopeBox): SearchGeometry {
+  const band = ch.bands[0] as [number, number];
+  const moving = box !== undefined && !isPointBox(box);
+  const D = moving ? box.D : 0;
+  const w = moving && ch.occupied ? D : 0;
+  const xl = w === 0 ? band[0] : band[0] - w;
+  const xh = w === 0 ? band[1] : band[1] + w;
+  let a = lo;
+  let b = hi;
+  if (w > 0) {
+    // no image figure where the occupied band would reach 0 GHz (slot.lo ≤ D)
+    if (hi <= band[0]) b = Math.min(hi, band[0] - D);
+    else if (lo >= band[1]) a = Math.max(lo, band[1] + D);
+  }
+  const kinks: [number, number][] = [];
+  for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) {
+    kinks.push([(e + xh - D) / 2, (e + xh + D) / 2], [(e + xl - D) / 2, (e + xl + D) / 2]);
+  }
+  const tMax = moving ? Math.max(Math.abs(box.tLo), Math.abs(box.tHi)) : 0;
+  const phi = moving ? Math.abs(box.phi) : 0;
+  return { xl, xh, lo: a, hi: b, kinks, splitHalfWidth: (k) => D / 2 + (Math.abs(k) * phi * tMax) / 4, moving };
+}
+
+/** The cuts of a window at the kink zones' ends (increasing, without repeats), and whether each piece lies in a zone. */
+function windowPieces(g: SearchGeometry, wlo: number, whi: number): { p: number; q: number; inZone: boolean }[] {
+  const pts: number[] = [];
+  for (const [k1, k2] of g.kinks) {
+    if (k1 > wlo && k1 < whi) pts.push(k1);
+    if (k2 !== k1 && k2 > wlo && k2 < whi) pts.push(k2);
+  }
+  pts.sort((x, y) => x - y);
+  const cuts = [wlo];
+  for (const x of pts) if (x !== cuts[cuts.length - 1]) cuts.push(x);
+  if (whi !== cuts[cuts.length - 1]) cuts.push(whi);
+  const out: { p: number; q: number; inZone: boolean }[] = [];
+  for (let i = 0; i + 1 < cuts.length; i++) {
+    const p = cuts[i] as number;
+    const q = cuts[i + 1] as number;
+    const mid = (p + q) / 2;
+    out.push({ p, q, inZone: g.moving && g.kinks.some(([k1, k2]) => mid > k1 && mid < k2) });
+  }
+  return out;
+}
 
 /**
  * The L intervals inside `[lo, hi]` (a piece of the reach outside the
@@ -54,17 +122,17 @@ export function imageFiringIntervals(
   lo: number,
   hi: number,
   work?: WorkCounter,
+  box?: EnvelopeBox,
 ): [number, number][] {
   const band = ch.bands[0];
   if (!band || !ch.ssb || !(hi > lo)) return [];
-  const [xl, xh] = band;
+  const g = searchGeometry(m, ch, lo, hi, box);
+  if (!(g.hi > g.lo)) return [];
   const B = ch.widthGHz;
-  const windows = imageWindows(c, m, ch, lo, hi, work);
-  const kinks: number[] = [];
-  for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) kinks.push((e + xh) / 2, (e + xl) / 2);
+  const windows = imageWindows(c, m, ch, g.lo, g.hi, work, box);
   const step = Math.min(m.linewidth, B) / 16;
   const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
-  const firesAt = makeImageFires(c, m, ch);
+  const firesAt = box === undefined ? makeImageFires(c, m, ch) : makeEnvelopeImageFires(c, m, ch, box, true);
   let steps = 0;
   // evaluations are counted only when a counter is passed (the map's hot path stays a direct call)
   const fires =
@@ -82,43 +150,64 @@ export function imageFiringIntervals(
     else out.push([a, b]);
   };
   const quarter = c.fsr / 4;
-  const centreSum = (xl + xh) / 4;
+  const centreSum = (g.xl + g.xh) / 4;
+  // the piece being searched and the grid on it (the helpers below are made once, not per piece)
+  let p = 0;
+  let q = 0;
+  let n = 1;
+  const gridL = (j: number) => (j === n ? q : p + ((q - p) * j) / n);
+  // the last two grid states are remembered (run ends are read twice)
+  let j1 = -1;
+  let v1 = false;
+  let j2 = -1;
+  let v2 = false;
+  const state = (j: number): boolean => {
+    if (j === j1) return v1;
+    if (j === j2) return v2;
+    const v = fires(gridL(j));
+    j2 = j1;
+    v2 = v1;
+    j1 = j;
+    v1 = v;
+    return v;
+  };
+  const indexOf = (L: number) => Math.min(n - 1, Math.floor(((L - p) / (q - p)) * n));
   for (const [wlo, whi] of windows) {
-    const cuts = [wlo, ...kinks.filter((k) => k > wlo && k < whi).sort((p, q) => p - q), whi];
-    for (let i = 0; i + 1 < cuts.length; i++) {
-      const p = cuts[i] as number;
-      const q = cuts[i + 1] as number;
-      const n = gridCount(p, q);
-      const gridL = (j: number) => (j === n ? q : p + ((q - p) * j) / n);
-      // the last two grid states are remembered (run ends are read twice)
-      let j1 = -1;
-      let v1 = false;
-      let j2 = -1;
-      let v2 = false;
-      const state = (j: number): boolean => {
-        if (j === j1) return v1;
-        if (j === j2) return v2;
-        const v = fires(gridL(j));
-        j2 = j1;
-        v2 = v1;
-        j1 = j;
-        v1 = v;
-        return v;
-      };
-      // runs of grid indices between the monotone split points
+    for (const piece of windowPieces(g, wlo, whi)) {
+      p = piece.p;
+      q = piece.q;
+      n = gridCount(p, q);
+      j1 = -1;
+      j2 = -1;
+      // runs of grid indices between the monotone split points (every grid point of a split zone,
+      // and of a piece inside a kink zone, is its own run)
       const splits: number[] = [];
-      const kFirst = Math.ceil((p - centreSum) / quarter);
-      const kLast = Math.floor((q - centreSum) / quarter);
-      if (!(kLast - kFirst < n)) {
-        // more monotone runs than grid points (fsr far below the grid step): every grid point is its own run
+      const widest = g.moving
+        ? g.splitHalfWidth(Math.ceil((Math.max(Math.abs(p), Math.abs(q)) + Math.abs(centreSum)) / quarter) + 1)
+        : 0;
+      const kFirst = Math.ceil((p - widest - centreSum) / quarter);
+      const kLast = Math.floor((q + widest - centreSum) / quarter);
+      if (piece.inZone || !(kLast - kFirst < n)) {
+        // more monotone runs than grid points (fsr far below the grid step), or inside a kink zone:
+        // every grid point is its own run
         steps += n;
         for (let j = 0; j < n; j++) splits.push(j);
       } else {
         if (kLast >= kFirst) steps += kLast - kFirst + 1;
         for (let k = kFirst; k <= kLast; k++) {
           const Lk = k * quarter + centreSum;
-          if (Lk > p && Lk < q) {
-            const j = Math.min(n - 1, Math.floor(((Lk - p) / (q - p)) * n));
+          if (!g.moving) {
+            if (Lk > p && Lk < q) {
+              const j = indexOf(Lk);
+              if (splits[splits.length - 1] !== j) splits.push(j);
+            }
+            continue;
+          }
+          const hw = g.splitHalfWidth(k);
+          const zl = Math.max(p, Lk - hw);
+          const zh = Math.min(q, Lk + hw);
+          if (!(zh >= zl) || zh <= p || zl >= q) continue;
+          for (let j = Math.max(0, indexOf(zl)); j <= indexOf(zh); j++) {
             if (splits[splits.length - 1] !== j) splits.push(j);
           }
         }
@@ -176,17 +265,18 @@ export function imageFiringIntervalsByScan(
   ch: MapChannel,
   lo: number,
   hi: number,
+  box?: EnvelopeBox,
 ): [number, number][] {
   const band = ch.bands[0];
   if (!band || !ch.ssb || !(hi > lo)) return [];
-  const [xl, xh] = band;
+  const g = searchGeometry(m, ch, lo, hi, box);
+  if (!(g.hi > g.lo)) return [];
   const B = ch.widthGHz;
-  const windows = imageWindows(c, m, ch, lo, hi);
-  const kinks: number[] = [];
-  for (const e of [m.rfMin, m.rfMax, -m.rfMin, -m.rfMax]) kinks.push((e + xh) / 2, (e + xl) / 2);
+  const windows = imageWindows(c, m, ch, g.lo, g.hi, undefined, box);
   const step = Math.min(m.linewidth, B) / 16;
   const gridCount = (p: number, q: number) => Math.min(MAX_GRID_POINTS, Math.max(1, Math.ceil((q - p) / step)));
-  const fires = (L: number) => imageFires(c, m, ch, L);
+  const fires =
+    box === undefined ? (L: number) => imageFires(c, m, ch, L) : makeEnvelopeImageFires(c, m, ch, box, true);
   const out: [number, number][] = [];
   const push = (a: number, b: number) => {
     if (!(b > a)) return;
@@ -195,10 +285,7 @@ export function imageFiringIntervalsByScan(
     else out.push([a, b]);
   };
   for (const [wlo, whi] of windows) {
-    const cuts = [wlo, ...kinks.filter((k) => k > wlo && k < whi).sort((p, q) => p - q), whi];
-    for (let i = 0; i + 1 < cuts.length; i++) {
-      const p = cuts[i] as number;
-      const q = cuts[i + 1] as number;
+    for (const { p, q } of windowPieces(g, wlo, whi)) {
       const n = gridCount(p, q);
       let prevL = p;
       let prev = fires(p);

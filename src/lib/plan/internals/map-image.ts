@@ -1,4 +1,7 @@
 import { combDistanceAtLevel, combIntegralK, combK, combResponse } from "./comb";
+import { type EnvelopeBox, detuningRange, isPointBox } from "./envelope-box";
+import { worstImage } from "./envelope-image";
+import { lorentzianIntegral } from "./lorentz";
 import type { MapChannel, MapModel } from "./map-model";
 import { type WorkCounter, countSteps } from "./work-counter";
 
@@ -118,6 +121,49 @@ export function combRadius(c: Comb, level: number): number {
   return Math.min(r, c.fsr / 2);
 }
 
+/**
+ * The image rule over an operating envelope for one channel, as a function
+ * of L (docs/plan-format.md §12.5): it fires when the lowest rejection over
+ * the box falls short of the requirement (with the 1e-9 dB allowance), by
+ * the same evaluation as the per-offset check (`worstImage`, which stops as
+ * soon as the answer is known). An occupied-band filter that cannot be
+ * built (its slot starts within D of 0 GHz) has no image figure, so the
+ * rule does not fire there. A box of one point is the nominal rule
+ * (`makeImageFires`). `withinPossible` leaves out the check for an
+ * impossible filter, for a search that already keeps to where the filter
+ * can be built (its ends then take the rule's limit from inside).
+ */
+export function makeEnvelopeImageFires(
+  c: Comb,
+  m: MapModel,
+  ch: MapChannel,
+  box: EnvelopeBox,
+  withinPossible = false,
+): (L: number) => boolean {
+  if (isPointBox(box)) return makeImageFires(c, m, ch);
+  const band = ch.bands[0];
+  const problem = ch.imageProblem ? { ...ch.imageProblem, box } : null;
+  if (!band || !problem) return () => false;
+  const threshold = m.imageRejectionDB - 1e-9;
+  const D = box.D;
+  const [xl, xh] = band;
+  return (L: number): boolean => {
+    if (!withinPossible && ch.occupied && D > 0 && (L <= xl ? xl - L : L - xh) <= D) return false;
+    return worstImage(problem, L, threshold).rejectionDB < threshold;
+  };
+}
+
+/** The lowest `∫W` of an SSB channel over the box (the wanted band slides against the mode; the integral is largest when centred, so lowest at an end). */
+export function lowestWantedIntegral(m: MapModel, ch: MapChannel, box: EnvelopeBox): number {
+  const p = ch.imageProblem;
+  if (!p || isPointBox(box)) return ch.wantedIntegral;
+  const [dMin, dMax] = detuningRange(box);
+  return Math.min(
+    lorentzianIntegral(p.xl + dMin, p.xh + dMin, p.modeCentre, p.delta),
+    lorentzianIntegral(p.xl + dMax, p.xh + dMax, p.modeCentre, p.delta),
+  );
+}
+
 /** Most mode windows enumerated; beyond it the whole range is searched. */
 const MAX_WINDOWS = 10_000;
 
@@ -127,6 +173,11 @@ const MAX_WINDOWS = 10_000;
  * `r` of a mode centre, where `C(r) = 10^(−threshold/10)·∫W/B`
  * (since `∫Wᵢ ≤ B·max C` over `X'`). Sorted and merged. Each mode window
  * enumerated is one work step (`work`).
+ *
+ * Over an operating envelope (`box`), `∫W` is its lowest over the box, B
+ * and X are the received band's (widened by D for the occupied-band
+ * filter), the image band moves by the LO shift u (so each window widens
+ * by D/2 in L) and mode n moves by `n·φ·t` (by `|n·φ|·max|t|/2` in L).
  */
 export function imageWindows(
   c: Comb,
@@ -135,42 +186,53 @@ export function imageWindows(
   lo: number,
   hi: number,
   work?: WorkCounter,
+  box?: EnvelopeBox,
 ): [number, number][] {
   const band = ch.bands[0];
   if (!band) return [];
-  const [xl, xh] = band;
-  const level = Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / ch.widthGHz);
-  const r = combRadius(c, level);
-  if (r < 0) return [];
+  const moving = box !== undefined && !isPointBox(box);
+  const w = moving && ch.occupied ? box.D : 0;
+  const xl = w === 0 ? band[0] : band[0] - w;
+  const xh = w === 0 ? band[1] : band[1] + w;
+  const D = moving ? box.D : 0;
+  const tMax = moving ? Math.max(Math.abs(box.tLo), Math.abs(box.tHi)) : 0;
+  const phi = moving ? Math.abs(box.phi) : 0;
+  const wanted = moving ? lowestWantedIntegral(m, ch, box) : ch.wantedIntegral;
+  const level = Math.pow(10, -m.imageRejectionDB / 10) * (wanted / (ch.widthGHz + 2 * w));
+  const r0 = combRadius(c, level);
+  if (r0 < 0) return [];
+  // the comb's period, hence its shape, changes a little with t: a 1 % wider radius covers it
+  const r = moving ? Math.min(c.fsr / 2, r0 * 1.01) : r0;
   const out: [number, number][] = [];
   for (const [e1, e2] of [
     [-m.rfMax, -m.rfMin],
     [m.rfMin, m.rfMax],
   ] as const) {
-    // X' = [2L − xh, 2L − xl] meets [e1, e2]
-    const a = Math.max(lo, (e1 + xl) / 2);
-    const b = Math.min(hi, (e2 + xh) / 2);
+    // X' = [2L + u − xh, 2L + u − xl] meets [e1, e2] for some u within ±D
+    const a = Math.max(lo, (e1 + xl - D) / 2);
+    const b = Math.min(hi, (e2 + xh + D) / 2);
     if (!(b > a)) continue;
-    const nFirst = Math.ceil((e1 - r) / c.fsr);
-    const nLast = Math.floor((e2 + r) / c.fsr);
+    const nFirst = Math.ceil((e1 - r) / c.fsr) - (moving ? 1 : 0);
+    const nLast = Math.floor((e2 + r) / c.fsr) + (moving ? 1 : 0);
     if (r >= c.fsr / 2 || !(nLast - nFirst < MAX_WINDOWS)) {
       out.push([a, b]);
       continue;
     }
     countSteps(work, nLast - nFirst + 1);
     for (let n = nFirst; n <= nLast; n++) {
-      // X' within r of n·fsr: 2L − xh ≤ n·fsr + r and 2L − xl ≥ n·fsr − r
-      const wlo = Math.max(a, (n * c.fsr - r + xl) / 2);
-      const whi = Math.min(b, (n * c.fsr + r + xh) / 2);
+      // X' within r of n·(fsr + φ·t): 2L + u − xh ≤ n·fsr + |n·φ|·tMax + r and 2L + u − xl ≥ n·fsr − |n·φ|·tMax − r
+      const move = Math.abs(n) * phi * tMax;
+      const wlo = Math.max(a, (n * c.fsr - move - r + xl - D) / 2);
+      const whi = Math.min(b, (n * c.fsr + move + r + xh + D) / 2);
       if (whi > wlo) out.push([wlo, whi]);
     }
   }
   out.sort((p, q) => p[0] - q[0]);
   const merged: [number, number][] = [];
-  for (const w of out) {
+  for (const w2 of out) {
     const last = merged[merged.length - 1];
-    if (last && w[0] <= last[1]) last[1] = Math.max(last[1], w[1]);
-    else merged.push(w);
+    if (last && w2[0] <= last[1]) last[1] = Math.max(last[1], w2[1]);
+    else merged.push(w2);
   }
   return merged;
 }

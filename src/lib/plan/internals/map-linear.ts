@@ -123,10 +123,20 @@ const TOL = 1e-9;
  * empty: lo ≥ hi). A sloped edge meets the limit at one exact L (the edge
  * of the set); a constant one is a tie over the whole piece when it equals
  * the limit, and the 1e-9 allowance decides it in favour of passing.
+ *
+ * One tie rule with the per-offset check (docs/plan-format.md §6.2): where
+ * the set would run right up to the end of the piece (the margin reaches
+ * its limit within 1e-9 GHz of a joint of two linear pieces, as when the
+ * hull of a centred DSB channel puts a slot edge exactly on a Nyquist
+ * edge), the margin only touches its limit there, and the allowance
+ * decides that tie as the per-offset check does: the set ends where the
+ * margin is the allowance short of its limit, leaving the same hole of
+ * 2·1e-9/|slope| GHz around the joint.
  */
 export function below(f: Lin, c: number, from: number, to: number): [number, number] {
   if (f.b === 0) return f.a < c - TOL ? [from, to] : [to, from];
-  const L = (c - f.a) / f.b;
+  let L = (c - f.a) / f.b;
+  if (Math.abs(L - (f.b > 0 ? to : from)) <= TOL) L = (c - TOL - f.a) / f.b;
   return f.b > 0 ? [from, Math.min(to, L)] : [Math.max(from, L), to];
 }
 /** The sub-interval of [from, to] where `f(L) > c`. */

@@ -1,5 +1,7 @@
 import type { Plan } from "@/schemas/plan";
 import { type LDependentErrorCode, L_DEPENDENT_ERROR_CODES, RULE_ORDER } from "../types";
+import { type EnvelopeBox, envelopeBox } from "./envelope-box";
+import type { ImageProblem } from "./envelope-image";
 import { lorentzianIntegral } from "./lorentz";
 
 /** A code the feasibility map can list. */
@@ -39,6 +41,10 @@ export interface MapChannel {
   ssb: boolean;
   /** `∫W dy` over the slot: `∫_X M_{n*}(x) dx` (independent of L). */
   wantedIntegral: number;
+  /** The IF filter passes the occupied band (docs/plan-format.md §12.3). */
+  occupied: boolean;
+  /** The image rule over the chain's operating envelope (SSB channels), as the per-offset check states it. */
+  imageProblem: ImageProblem | null;
 }
 
 /** One chain, reduced to what the L-dependent rules need (all in GHz). */
@@ -48,6 +54,8 @@ export interface MapModel {
   reach: [number, number][];
   /** Drift `D`. */
   drift: number;
+  /** The chain's operating envelope (u within ±D, t within ±Te). */
+  box: EnvelopeBox;
   /** Guard `g`. */
   guard: number;
   /** Tuning step (0 = any offset). */
@@ -89,8 +97,10 @@ export function mergeTouching(list: readonly (readonly [number, number])[]): [nu
 /**
  * Reduce a chain of a parsed plan to the quantities the L-dependent rules use.
  * Throws when the chain id does not exist (the caller passes ids from the plan).
+ * `temperatureK` replaces the chain's temperature excursion by one
+ * temperature offset (a row of the temperature map).
  */
-export function buildMapModel(plan: Plan, chainId: string): MapModel {
+export function buildMapModel(plan: Plan, chainId: string, temperatureK?: number): MapModel {
   const chain = plan.chains.find((c) => c.id === chainId);
   if (!chain) throw new Error(`no chain with id "${chainId}"`);
   const laser = plan.lasers.find((l) => l.id === chain.laser);
@@ -101,6 +111,15 @@ export function buildMapModel(plan: Plan, chainId: string): MapModel {
   const s = chain.sideband === "upper" ? 1 : -1;
   const linewidth = (laser.carrierTHz * 1000) / resonator.loadedQ;
   const wantedCentre = s * chain.mode * resonator.fsrGHz;
+  const nStar = s * chain.mode;
+  const D = laser.driftMHz / 1000;
+  const box = envelopeBox(
+    D,
+    temperatureK ?? -chain.temperatureExcursionK,
+    temperatureK ?? chain.temperatureExcursionK,
+    resonator.fsrShiftMHzPerK / 1000,
+    nStar,
+  );
   const channels: MapChannel[] = [];
   for (const ch of plan.channels) {
     if (ch.chain !== chainId) continue;
@@ -116,12 +135,39 @@ export function buildMapModel(plan: Plan, chainId: string): MapModel {
       .sort((p, q) => p[0] - q[0]);
     let wantedIntegral = 0;
     for (const b of bands) wantedIntegral += lorentzianIntegral(b[0], b[1], wantedCentre, linewidth);
-    channels.push({ id: ch.id, bands, widthGHz: B, ssb: ch.dsbOffsetGHz === null, wantedIntegral });
+    const occupied = ch.ifFilter === "occupied";
+    const w = occupied ? D : 0;
+    const x = bands[0] as [number, number];
+    const imageProblem: ImageProblem | null =
+      ch.dsbOffsetGHz === null
+        ? {
+            xl: w === 0 ? x[0] : x[0] - w,
+            xh: w === 0 ? x[1] : x[1] + w,
+            modeCentre: wantedCentre,
+            delta: linewidth,
+            fsr: resonator.fsrGHz,
+            nStar,
+            rfMin: chain.rfInput.minGHz,
+            rfMax: chain.rfInput.maxGHz,
+            box,
+            step: linewidth / 16,
+          }
+        : null;
+    channels.push({
+      id: ch.id,
+      bands,
+      widthGHz: B,
+      ssb: ch.dsbOffsetGHz === null,
+      wantedIntegral,
+      occupied,
+      imageProblem,
+    });
   }
   return {
     chainId,
     reach: mergeTouching(laser.reach.map((r) => [r.minGHz, r.maxGHz] as const)),
-    drift: laser.driftMHz / 1000,
+    drift: D,
+    box,
     guard: plan.settings.guardMHz / 1000,
     step: laser.stepMHz / 1000,
     stepMHz: laser.stepMHz,

@@ -25,8 +25,10 @@ describe("lean per-offset evaluation (the benchmark's grid reference)", () => {
     expect(codesOfMask(at(184.81))).toEqual([]);
     // 183.31: the LO inside the band [183.305, 183.315]
     expect(codesOfMask(at(183.31))).toEqual(["lo-in-band"]);
-    // 183.5: O = [0.165, 0.215], the lock-self tones 0.18 and 0.24 come within the 50 MHz guard
-    expect(codesOfMask(at(183.5))).toEqual(["spur-in-slot"]);
+    // 183.5: O = [0.165, 0.215], the lock-self tones 0.18 and 0.24 come within the 50 MHz guard;
+    // and with the LO 20 MHz low (its drift) the image band 0.36 GHz above the mode is rejected
+    // by only 24.4 dB (the image rule over the operating envelope, docs/plan-format.md §12.5)
+    expect(codesOfMask(at(183.5))).toEqual(["image-response", "spur-in-slot"]);
     // 150: drift window leaves the reach; IF ≈ 33 GHz
     expect(codesOfMask(at(150))).toEqual(["lo-uncovered", "if-outside-detector"]);
     // a tie: at L = 189.285 O.hi = 6 exactly (within rounding), which passes

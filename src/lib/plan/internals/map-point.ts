@@ -1,5 +1,6 @@
 import { CODE_BIT, type MapModel } from "./map-model";
-import { combRadius, imageFires, makeComb } from "./map-image";
+import { isPointBox } from "./envelope-box";
+import { combRadius, lowestWantedIntegral, makeComb, makeEnvelopeImageFires } from "./map-image";
 import { MAX_LOCK_ORDER_ENUMERATED } from "./spurs";
 
 /**
@@ -55,21 +56,35 @@ export function makePointEvaluator(m: MapModel): (L: number) => number {
   const zone = new Float64Array(n); // −1: straddles (left out of alias-overlap)
   const tmp: [number, number] = [0, 0];
   // image rule: it cannot fire unless X' comes within r of a mode centre
-  // (docs/plan-format.md §6.3 "The image rule": ∫Wᵢ ≤ B·max C over X')
-  const imageRadius = m.channels.map((ch) =>
-    ch.ssb ? combRadius(comb, Math.pow(10, -m.imageRejectionDB / 10) * (ch.wantedIntegral / ch.widthGHz)) : -1,
-  );
+  // (docs/plan-format.md §6.3 "The image rule": ∫Wᵢ ≤ B·max C over X'); over the
+  // operating envelope X' moves by ±D and mode n by n·φ·t, and ∫W is its lowest (§12.5)
+  const box = m.box;
+  const moving = !isPointBox(box);
+  const tMax = moving ? Math.max(Math.abs(box.tLo), Math.abs(box.tHi)) : 0;
+  const phi = moving ? Math.abs(box.phi) : 0;
+  const drift = moving ? box.D : 0;
+  const widen = m.channels.map((ch) => (moving && ch.occupied ? box.D : 0));
+  const imageRadius = m.channels.map((ch, i) => {
+    if (!ch.ssb) return -1;
+    const level =
+      Math.pow(10, -m.imageRejectionDB / 10) * (lowestWantedIntegral(m, ch, box) / (ch.widthGHz + 2 * widen[i]!));
+    const r = combRadius(comb, level);
+    return moving && r >= 0 ? Math.min(m.fsr / 2, r * 1.01) : r;
+  });
+  const imageFiresAt = m.channels.map((ch) => makeEnvelopeImageFires(comb, m, ch, box));
   const imageCandidate = (i: number, L: number): boolean => {
     const r = imageRadius[i] as number;
     if (r < 0) return false;
     if (r >= m.fsr / 2) return true;
     const b = m.channels[i]!.bands[0]!;
-    const lo = 2 * L - b[1];
-    const hi = 2 * L - b[0];
+    const w = widen[i]!;
+    const lo = 2 * L - (w === 0 ? b[1] : b[1] + w) - drift;
+    const hi = 2 * L - (w === 0 ? b[0] : b[0] - w) + drift;
     const n = Math.round((lo + hi) / 2 / m.fsr);
     for (let k = n - 1; k <= n + 1; k++) {
       const c = k * m.fsr;
-      if (lo <= c + r && hi >= c - r) return true;
+      const move = Math.abs(k) * phi * tMax;
+      if (lo <= c + r + move && hi >= c - r - move) return true;
     }
     return false;
   };
@@ -137,7 +152,7 @@ export function makePointEvaluator(m: MapModel): (L: number) => number {
       oLo[i] = lo;
       oHi[i] = hi;
       if (lo < m.detMin - TOL || hi > m.detMax + TOL) mask |= CODE_BIT["if-outside-detector"];
-      if (ch.ssb && !(mask & CODE_BIT["image-response"]) && imageCandidate(i, L) && imageFires(comb, m, ch, L)) {
+      if (ch.ssb && !(mask & CODE_BIT["image-response"]) && imageCandidate(i, L) && imageFiresAt[i]!(L)) {
         mask |= CODE_BIT["image-response"];
       }
       if (h !== null) {

@@ -23,7 +23,9 @@ import { type WorkCounter, countSteps } from "./work-counter";
  * intervals where it fires (unsorted, possibly overlapping). Every edge is
  * the solution of a limiting equality (gap = guard, edge = detector bound,
  * edge = k·fs/2, …) except those of `image-response`, which are bisected to
- * 1e-6 GHz (docs/plan-format.md §6.2 "Exact edges" and §6.3 "The image rule").
+ * 1e-6 GHz (docs/plan-format.md §6.2 "Exact edges" and §6.3 "The image rule");
+ * the image rule takes the lowest rejection over the chain's operating
+ * envelope (§12.5).
  */
 export type FiringSets = Record<MapCode, LSet>;
 
@@ -157,7 +159,8 @@ export function firingSets(m: MapModel, r0: number, r1: number, work?: WorkCount
     outsideSet(O, m.detMin, m.detMax, sets["if-outside-detector"]);
     if (ch.ssb) {
       const image = sets["image-response"];
-      for (const p of slot) for (const iv of imageFiringIntervals(comb, m, ch, p.from, p.to, work)) image.push(iv);
+      for (const p of slot)
+        for (const iv of imageFiringIntervals(comb, m, ch, p.from, p.to, work, m.box)) image.push(iv);
     }
     if (h !== null) {
       straddleSet(O, h, sets["nyquist-straddle"], work);

@@ -15,8 +15,9 @@ export interface MapPiece {
 
 /**
  * Sweep the firing sets of every L-dependent error rule over each merged
- * reach interval: sort all interval edges (merging those closer than 1e-9
- * GHz), and keep, between consecutive breakpoints, the set of codes whose
+ * reach interval: join each code's intervals where they overlap or touch
+ * (leaving out what remains 1e-9 GHz long or shorter), sort all interval
+ * edges (merging those closer than 1e-9 GHz), and keep, between consecutive breakpoints, the set of codes whose
  * firing sets cover that piece. Consecutive pieces with the same set are
  * joined. Pieces come in increasing L and tile the reach union. `work`
  * counts the work steps of the firing sets.
@@ -43,7 +44,7 @@ export function mapPieces(m: MapModel, work?: WorkCounter): MapPiece[] {
       for (const iv of list) {
         const lo = Math.max(iv[0], r0);
         const hi = Math.min(iv[1], r1);
-        if (!(hi - lo > MERGE_GHZ)) continue;
+        if (!(hi > lo)) continue;
         starts[k] = lo;
         ends[k] = hi;
         k++;
@@ -63,7 +64,8 @@ export function mapPieces(m: MapModel, work?: WorkCounter): MapPiece[] {
           a++;
         } else {
           open--;
-          if (open === 0) run.push(from, en[b] as number);
+          // a run no longer than the merging distance is dropped (after joining the pieces it is made of)
+          if (open === 0 && (en[b] as number) - from > MERGE_GHZ) run.push(from, en[b] as number);
           b++;
         }
       }

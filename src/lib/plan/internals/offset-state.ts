@@ -1,4 +1,6 @@
 import type { ChainContext, ChannelContext } from "./chain-context";
+import { type ChannelEnvelope, channelEnvelope } from "./channel-envelope";
+import type { EnvelopeBox } from "./envelope-box";
 import { type Interval, absInterval } from "./intervals";
 import { foldInterval } from "./nyquist";
 import { type ImageFigures, type Sensitivity, type SlotGeometry, imageAt, sensitivityAt, slotAt } from "./slot";
@@ -10,8 +12,10 @@ export interface ChannelAtOffset {
   geo: SlotGeometry | null;
   /** Null without a slot, and in map-only mode. */
   sensitivity: Sensitivity | null;
-  /** Null for DSB channels and without a slot. */
+  /** Null for DSB channels and without a slot (the nominal image). */
   image: ImageFigures | null;
+  /** The channel over the operating envelope (in map-only mode only its image rejection is worked out). */
+  envelope: ChannelEnvelope;
 }
 
 /** What every rule family of `evaluateChain` reads: the chain, the offset and the geometry there. */
@@ -21,23 +25,30 @@ export interface OffsetState {
   L: number;
   /** Only the error rules that depend on L (see `EvaluateOptions.mapOnly`). */
   mapOnly: boolean;
+  /** The operating envelope the worst values are taken over (the chain's own unless told). */
+  box: EnvelopeBox;
   /** One entry per `ctx.channels[i]`. */
   channels: ChannelAtOffset[];
   /** `|O|` of each channel folded at the sample rate; null without a slot or without sampling. */
   foldedOcc: (Interval | null)[];
 }
 
-/** The geometry of every channel of the chain at LO offset L (sensitivity skipped in map-only mode). */
-export function offsetState(ctx: ChainContext, L: number, mapOnly: boolean): OffsetState {
+/**
+ * The geometry of every channel of the chain at LO offset L, its nominal
+ * figures and its figures over the envelope `box` (sensitivity skipped in
+ * map-only mode, where only the envelope's image rejection is worked out).
+ */
+export function offsetState(ctx: ChainContext, L: number, mapOnly: boolean, box: EnvelopeBox = ctx.box): OffsetState {
   const fs = ctx.sampleRate;
   const channels: ChannelAtOffset[] = ctx.channels.map((ch) => {
     const geo = slotAt(ch, L, ctx.D);
     const sensitivity = geo && !mapOnly ? sensitivityAt(ctx, ch, geo, L) : null;
     const image = geo ? imageAt(ctx, ch, L) : null;
-    return { ch, geo, sensitivity, image };
+    const envelope = channelEnvelope(ctx, ch, geo, L, box, mapOnly);
+    return { ch, geo, sensitivity, image, envelope };
   });
   const foldedOcc: (Interval | null)[] = channels.map((c) =>
     c.geo && fs !== null ? foldInterval(absInterval(c.geo.occupied), fs) : null,
   );
-  return { ctx, L, mapOnly, channels, foldedOcc };
+  return { ctx, L, mapOnly, box, channels, foldedOcc };
 }

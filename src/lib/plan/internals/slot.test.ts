@@ -23,6 +23,8 @@ function channel(over: Partial<PlanChannel>): PlanChannel {
     receiverK: 5000,
     gainStability: 0,
     requiredNedtK: null,
+    ifFilter: "slot",
+    centreToleranceMHz: null,
     ...over,
   };
 }

@@ -1,7 +1,7 @@
 import type { ChainContext, ChannelContext } from "./chain-context";
 import { combIntegral } from "./comb";
 import { type Interval, absInterval, hull, intersect, strictlyInside, unionLength } from "./intervals";
-import { lorentzianProductIntegral } from "./lorentz";
+import { lorentzianIntegral, lorentzianProductIntegral, lorentzianSquaredIntegral } from "./lorentz";
 
 /** The IF image of one optical band: `{ |L − x| : x ∈ X }`, with `e = +1` when the band lies above L. */
 export interface BandImage {
@@ -64,29 +64,67 @@ export interface Sensitivity {
  * in closed form.
  */
 export function sensitivityAt(ctx: ChainContext, ch: ChannelContext, geo: SlotGeometry, L: number): Sensitivity {
+  return receivedSensitivity(ctx, ch, geo, L, 0, 0);
+}
+
+/**
+ * The sensitivity figures of a channel whose received optical bands are
+ * its bands widened by `w` on each side and moved by `d` against the wanted
+ * mode, with the IF range the band images at L widened by `w`
+ * (docs/plan-format.md §12.3 "Received band"): the envelope's figures at a
+ * detuning d, for the slot filter (w = 0) or the occupied-band filter
+ * (w = D). With d = 0 and w = 0 this is the nominal figure, computed with
+ * the same arithmetic.
+ */
+export function receivedSensitivity(
+  ctx: ChainContext,
+  ch: ChannelContext,
+  geo: SlotGeometry,
+  L: number,
+  d: number,
+  w: number,
+): Sensitivity {
+  let intW = ch.intW;
   let intW2 = ch.intW2Self;
-  const hw = ctx.delta / 2;
-  for (let i = 0; i < geo.images.length; i++) {
-    for (let j = i + 1; j < geo.images.length; j++) {
-      const bi = geo.images[i] as BandImage;
-      const bj = geo.images[j] as BandImage;
-      const ov = intersect(bi.image, bj.image);
-      if (ov && ov[1] > ov[0]) {
-        const pi = bi.e * (ctx.modeCentre - L);
-        const pj = bj.e * (ctx.modeCentre - L);
-        intW2 += 2 * lorentzianProductIntegral(ov[0], ov[1], pi, pj, hw);
-      }
+  if (d !== 0 || w !== 0) {
+    intW = 0;
+    intW2 = 0;
+    for (const x of ch.optical) {
+      intW += lorentzianIntegral(x[0] - w + d, x[1] + w + d, ctx.modeCentre, ctx.delta);
+      intW2 += lorentzianSquaredIntegral(x[0] - w + d, x[1] + w + d, ctx.modeCentre, ctx.delta);
     }
   }
-  const unionGHz = unionLength(geo.images.map((b) => b.image));
+  let unionGHz: number;
+  const only = geo.images.length === 1 ? (geo.images[0] as BandImage).image : null;
+  if (only) {
+    // one band (SSB): no cross term, and the union is the image itself
+    unionGHz = w === 0 ? only[1] - only[0] : only[1] + w - (only[0] - w);
+  } else {
+    const images: Interval[] =
+      w === 0 ? geo.images.map((b) => b.image) : geo.images.map((b) => [b.image[0] - w, b.image[1] + w] as const);
+    const hw = ctx.delta / 2;
+    for (let i = 0; i < geo.images.length; i++) {
+      for (let j = i + 1; j < geo.images.length; j++) {
+        const bi = geo.images[i] as BandImage;
+        const bj = geo.images[j] as BandImage;
+        const ov = intersect(images[i] as Interval, images[j] as Interval);
+        if (ov && ov[1] > ov[0]) {
+          const pi = bi.e * (ctx.modeCentre - (d === 0 ? L : L + d));
+          const pj = bj.e * (ctx.modeCentre - (d === 0 ? L : L + d));
+          intW2 += 2 * lorentzianProductIntegral(ov[0], ov[1], pi, pj, hw);
+        }
+      }
+    }
+    unionGHz = unionLength(images);
+  }
   const Hz = 1e9;
   const { antennaK: Ta, receiverK: Tr, gainStability: g, integrationMs } = ch.channel;
-  const intS = (Ta * ch.intW + Tr * unionGHz) * Hz;
-  const intS2 = (Ta * Ta * intW2 + 2 * Ta * Tr * ch.intW + Tr * Tr * unionGHz) * Hz;
+  const intS = (Ta * intW + Tr * unionGHz) * Hz;
+  const intS2 = (Ta * Ta * intW2 + 2 * Ta * Tr * intW + Tr * Tr * unionGHz) * Hz;
   const tau = integrationMs / 1000;
-  const nedtK = Math.sqrt(intS2 / tau + g * g * intS * intS) / (ch.intW * Hz);
+  const nedtK = Math.sqrt(intS2 / tau + g * g * intS * intS) / (intW * Hz);
   const radiometricBandwidthMHz = intS2 > 0 ? (intS * intS) / intS2 / 1e6 : null;
-  return { intW: ch.intW, intW2, unionGHz, intS, intS2, nedtK, radiometricBandwidthMHz };
+  return { intW, intW2, unionGHz, intS, intS2, nedtK, radiometricBandwidthMHz };
 }
 
 /** Image band of an SSB channel at L (docs/plan-format.md §3.2 "Per channel", Image). */

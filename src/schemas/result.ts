@@ -1,0 +1,112 @@
+import { z } from "zod";
+import { RESULT_FORMAT, RULE_ORDER, SEVERITIES, SPUR_FAMILIES } from "@/lib/plan/types";
+
+/**
+ * The zod schema of the result document `heterolane.result/2`
+ * (docs/plan-format.md §7 "The result document" and §12.7 "The result
+ * document of version 2"): what `checkPlan` writes, the CLI prints,
+ * `POST /api/v1/check` answers and every saved revision stores. Strict at
+ * every level, so a field the format does not list is refused. The engine's
+ * own types are `src/lib/plan/types.ts`; the tests parse every result the
+ * engine gives with this schema, and its JSON Schema is
+ * `docs/schema/result.schema.json`.
+ */
+
+/** A finite number (the result never holds NaN or ±Infinity: such a figure is written as null). */
+const num = () => z.number();
+const pair = () => z.tuple([num(), num()]).meta({ description: "[lo, hi] in the unit of the field name" });
+const nullable = <T extends z.ZodType>(t: T) => t.nullable();
+
+const codeSchema = z.enum(RULE_ORDER);
+
+export const envelopePointSchema = z
+  .strictObject({
+    loShiftMHz: num().meta({ description: "LO shift u from the plan's offset, MHz" }),
+    temperatureOffsetK: num().meta({ description: "resonator temperature offset t from its set point, K" }),
+  })
+  .meta({ id: "EnvelopePoint", description: "A point of the operating envelope" });
+
+export const channelEnvelopeSchema = z
+  .strictObject({
+    worstNedtK: nullable(num()),
+    worstNedtAt: nullable(envelopePointSchema),
+    worstRadiometricBandwidthMHz: nullable(num()),
+    worstRadiometricBandwidthAt: nullable(envelopePointSchema),
+    worstImageRejectionDB: nullable(num()),
+    worstImageRejectionAt: nullable(envelopePointSchema),
+    worstModeResponse: num().gte(0).lte(1),
+    worstModeResponseAt: envelopePointSchema,
+    centreErrorMHz: nullable(num().gte(0)),
+    centreErrorAt: nullable(envelopePointSchema),
+  })
+  .meta({ id: "ChannelEnvelope", description: "A channel's figures over the operating envelope (§12.7)" });
+
+export const chainResultSchema = z
+  .strictObject({
+    id: z.string(),
+    linewidthMHz: num(),
+    pdInputMW: num(),
+    feasibleGHz: z.array(pair()),
+    excludedGHz: z.array(z.strictObject({ bandGHz: pair(), codes: z.array(codeSchema).min(1) })),
+    placeGHz: nullable(num()),
+    placeReason: z.union([z.null(), z.literal("no-feasible-interval"), z.literal("no-grid-point")]),
+    temperatureWindowK: z.array(pair()),
+    temperatureMarginK: nullable(num()),
+  })
+  .meta({ id: "ChainResult" });
+
+export const channelResultSchema = z
+  .strictObject({
+    id: z.string(),
+    ifSlotGHz: nullable(pair()),
+    occupiedGHz: nullable(pair()),
+    imageGHz: nullable(pair()),
+    imageRejectionDB: nullable(num()),
+    radiometricBandwidthMHz: nullable(num()),
+    nedtK: nullable(num()),
+    lockReplicaDB: num(),
+    envelope: channelEnvelopeSchema,
+  })
+  .meta({ id: "ChannelResult" });
+
+export const spurSchema = z
+  .strictObject({
+    chain: z.string(),
+    family: z.enum(SPUR_FAMILIES),
+    order: z.number().int().gte(1),
+    bandGHz: pair(),
+    source: z.string(),
+    hits: z.array(z.string()),
+  })
+  .meta({ id: "Spur" });
+
+type JsonValue = null | boolean | number | string | JsonValue[] | { [key: string]: JsonValue };
+const jsonValueSchema: z.ZodType<JsonValue> = z.lazy(() =>
+  z.union([z.null(), z.boolean(), num(), z.string(), z.array(jsonValueSchema), z.record(z.string(), jsonValueSchema)]),
+);
+
+export const findingSchema = z
+  .strictObject({
+    code: codeSchema,
+    severity: z.enum(SEVERITIES),
+    chain: z.string(),
+    channel: nullable(z.string()),
+    message: z.string().min(1),
+    data: z.record(z.string(), jsonValueSchema),
+  })
+  .meta({ id: "Finding" });
+
+export const resultDocumentSchema = z
+  .strictObject({
+    format: z.literal(RESULT_FORMAT),
+    chains: z.array(chainResultSchema),
+    channels: z.array(channelResultSchema),
+    spurs: z.array(spurSchema),
+    findings: z.array(findingSchema),
+  })
+  .meta({
+    title: "Heterolane result document",
+    description: "The result of checking a plan document (docs/plan-format.md §7 and §12.7).",
+  });
+
+export type ResultDocumentParsed = z.infer<typeof resultDocumentSchema>;
