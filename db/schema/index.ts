@@ -4,3 +4,4 @@ export * from "./auth";
 export * from "./mail";
 export * from "./workspace";
 export * from "./review";
+export * from "./limits";

@@ -3,6 +3,7 @@ export * from "./missions";
 export * from "./entities";
 export * from "./plan-io";
 export * from "./uploads";
+export { uploadChannels } from "./channel-upload";
 export { saveAndCheck, type ActivityNote, type RevisionInfo } from "./save-and-check";
 export { assemblePlan } from "./assemble";
 export { CAN } from "./can";

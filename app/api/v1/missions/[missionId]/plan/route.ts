@@ -1,13 +1,25 @@
+import { planImportQuerySchema } from "@/schemas/workspace";
 import { guarded, json, readJsonBody } from "@/server/core";
 import { CAN, exportPlanDocument, importPlanDocument } from "@/server/workspace";
 
 const params = ["missionId"] as const;
 
-export const GET = guarded(CAN.export, { what: "export the plan", params }, async ({ actor, params }) =>
-  json(await exportPlanDocument(actor, params.missionId)),
-);
+/** The draft plan document; `x-heterolane-revision` names the revision it is, to send back with an import. */
+export const GET = guarded(CAN.export, { what: "export the plan", params }, async ({ actor, params }) => {
+  const { plan, revision } = await exportPlanDocument(actor, params.missionId);
+  return json(plan, 200, { "x-heterolane-revision": String(revision) });
+});
 
-/** Imports a plan document; it is validated by `parsePlan` (400 `invalid-plan` with every issue), not by a zod body schema. */
-export const POST = guarded(CAN.import, { what: "import plans", params }, async ({ request, actor, params }) =>
-  json(await importPlanDocument(actor, params.missionId, await readJsonBody(request, 5_000_000)), 201),
+/**
+ * Imports a plan document; it is validated by `parsePlan` (400 `invalid-plan` with every issue), not by a zod body
+ * schema. `?revision=N` names the revision it replaces: 409 `stale-version` when the plan has moved on since.
+ */
+export const POST = guarded(
+  CAN.import,
+  { what: "import plans", params, query: planImportQuerySchema, input: "query" },
+  async ({ request, actor, params, query }) =>
+    json(
+      await importPlanDocument(actor, params.missionId, await readJsonBody(request, 5_000_000), query.revision),
+      201,
+    ),
 );
