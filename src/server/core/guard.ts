@@ -8,6 +8,7 @@ import { requireActor } from "@/server/auth/guard";
 import { trustedOrigins } from "@/server/env";
 import { DEFAULT_BODY_LIMIT, readJsonBody } from "./body";
 import { crossOrigin, errorResponse, HttpError, invalidInput } from "./http";
+import { NOT_UTF8_HEADER, notUtf8Issues } from "./percent-encoding";
 import { crossSiteReason, needsOriginCheck } from "./request-origin";
 
 /** Any member of the active team, whatever their role. */
@@ -125,11 +126,16 @@ async function routeParams<K extends string>(args: RouteArgs | undefined, names:
 
 /**
  * The query parameters of a request; empty ones (as HTML forms send them)
- * are left out. A percent-encoding that is not UTF-8 (`?chain=%FF`) is
- * refused with 400 `invalid-encoding` naming the parameter, where
- * URLSearchParams would silently substitute U+FFFD.
+ * are left out. A percent-encoding that is not UTF-8 (`?chain=%FF`, or in
+ * the path) is refused with 400 `invalid-encoding` naming the parameter:
+ * the request hook marks it (percent-encoding.ts) before Next would
+ * silently substitute U+FFFD; a request that reaches the guard unmarked is
+ * checked here as well.
  */
 export function queryOf(request: Request): Record<string, string> {
+  const marked = notUtf8Issues(request.headers.get(NOT_UTF8_HEADER));
+  if (marked.length)
+    throw new HttpError(400, "invalid-encoding", "The address of this request is not valid UTF-8.", marked);
   const search = new URL(request.url).search.replace(/^\?/, "");
   const out: Record<string, string> = {};
   const issues: Issue[] = [];
