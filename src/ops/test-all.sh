@@ -86,20 +86,28 @@ if [ -f .next/BUILD_ID ]; then
   pids+=($!)
   node_modules/.bin/next start -p "$APP_PORT" >"$OUT/app.log" 2>&1 &
   pids+=($!)
-  # Two more app processes on the same database with rate limiting on: the
+  # Two more app processes on the same database with rate limiting on, as if
+  # behind one trusted proxy (X-Forwarded-For plays the proxy's entry): the
   # limits are kept in PostgreSQL, so they hold across processes (tested in
-  # tests/integration/auth-rate-limit.test.ts).
-  RL_PORT_A="$(free_port)"; RL_PORT_B="$(free_port)"
+  # tests/integration/auth-rate-limit.test.ts and hardening-rate-limit.test.ts).
+  RL_PORT_A="$(free_port)"; RL_PORT_B="$(free_port)"; RL_PORT_C="$(free_port)"
   for port in "$RL_PORT_A" "$RL_PORT_B"; do
-    HETEROLANE_AUTH_RATE_LIMIT=on BETTER_AUTH_URL="http://localhost:$RL_PORT_A" \
+    HETEROLANE_AUTH_RATE_LIMIT=on HETEROLANE_TRUSTED_PROXY_HOPS=1 BETTER_AUTH_URL="http://localhost:$RL_PORT_A" \
       node_modules/.bin/next start -p "$port" >"$OUT/app-rate-limit-$port.log" 2>&1 &
     pids+=($!)
   done
+  # And one with rate limiting on and no trusted proxy: the client is the socket address.
+  HETEROLANE_AUTH_RATE_LIMIT=on BETTER_AUTH_URL="http://localhost:$RL_PORT_C" \
+    node_modules/.bin/next start -p "$RL_PORT_C" >"$OUT/app-rate-limit-$RL_PORT_C.log" 2>&1 &
+  pids+=($!)
   export HETEROLANE_RATE_LIMIT_URLS="http://localhost:$RL_PORT_A,http://localhost:$RL_PORT_B"
   export HETEROLANE_RATE_LIMIT_ORIGIN="http://localhost:$RL_PORT_A"
+  export HETEROLANE_RATE_LIMIT_DIRECT_URL="http://localhost:$RL_PORT_C"
   set +m
-  wait_http "http://127.0.0.1:$RL_PORT_A/api/health" 90 && wait_http "http://127.0.0.1:$RL_PORT_B/api/health" 90 ||
-    log "a rate-limited app process did not start; see test-output/app-rate-limit-*.log"
+  for port in "$RL_PORT_A" "$RL_PORT_B" "$RL_PORT_C"; do
+    wait_http "http://127.0.0.1:$port/api/health" 90 ||
+      log "a rate-limited app process did not start; see test-output/app-rate-limit-$port.log"
+  done
   if wait_http "http://127.0.0.1:$APP_PORT/api/health" 90; then
     suite integration
     suite e2e
