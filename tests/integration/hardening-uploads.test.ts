@@ -49,7 +49,7 @@ async function withMissionLocked<T>(id: string, during: () => Promise<T>): Promi
   const client = await testPool().connect();
   try {
     await client.query("begin");
-    await client.query("select id from missions where id = $1 for update", [id]);
+    await client.query("select id from missions where id = $1 for no key update", [id]);
     // A request that waits for the lock would wait for ever: give up after 20 s (the test fails) and release it.
     let timer: NodeJS.Timeout | undefined;
     const gaveUp = new Promise<never>((_, reject) => {
@@ -118,6 +118,51 @@ describe("channel list apply", () => {
     const over = await upload(t.engineer, `${M(id)}/uploads/channels?apply=1`, csvOf(channelRows(1, "extra")));
     expect(over.status).toBe(400);
     expect(await counts(id)).toEqual(after);
+  });
+});
+
+describe("channel list apply while the plan changes", () => {
+  it("an edit that lands between the check before the lock and the lock: the revision is checked again and matches the draft", async () => {
+    const id = await missionWithPlan(t.owner, validPlanInput());
+    const client = await testPool().connect();
+    let applied: Promise<Awaited<ReturnType<typeof upload>>> | undefined;
+    try {
+      await client.query("begin");
+      await client.query("select id from missions where id = $1 for no key update", [id]);
+      // The apply reads, checks and writes its revision before the lock, then waits for it …
+      applied = upload(t.engineer, `${M(id)}/uploads/channels?apply=1`, csvOf(channelRows(5, "late")));
+      const deadline = Date.now() + 20_000;
+      for (;;) {
+        const { rows } = await testPool().query(
+          `select count(*)::int as n from pg_stat_activity where wait_event_type = 'Lock' and query ilike '%for no key update%'`,
+        );
+        if (rows[0].n > 0) break;
+        if (Date.now() > deadline) throw new Error("the apply never waited for the mission lock");
+        await new Promise((r) => setTimeout(r, 50));
+      }
+      // … while another change of the plan commits first (the guard band, not in the file).
+      await client.query(`update plan_settings set guard_mhz = 77, version = version + 1 where mission_id = $1`, [id]);
+      await client.query("commit");
+    } finally {
+      client.release();
+    }
+    const r = await applied!;
+    expect(r.status).toBe(200);
+    expect(r.body).toMatchObject({ created: 5, updated: 0 });
+    const latest = (
+      await testPool().query(
+        `select number, plan, error_count + warning_count + info_count as n,
+                (select count(*)::int from findings f where f.revision_id = r.id) as finding_rows
+           from plan_revisions r where mission_id = $1 order by number desc limit 1`,
+        [id],
+      )
+    ).rows[0];
+    expect(latest.plan.settings.guardMHz).toBe(77);
+    expect(latest.plan.channels).toHaveLength(8);
+    expect(latest.finding_rows).toBe(latest.n);
+    expect(latest.plan).toEqual((await call(t.viewer, "GET", `${M(id)}/plan`)).body);
+    const placeholders = await testPool().query(`select count(*)::int as n from plan_revisions where number <= 0`);
+    expect(placeholders.rows[0].n).toBe(0);
   });
 });
 

@@ -9,7 +9,8 @@ import type { Actor } from "@/server/auth/actor";
 import { inTransaction, type Queryable, type Tx } from "@/server/core/db";
 import { HttpError } from "@/server/core/http";
 import { getMissionRow, lockMission } from "@/server/core/mission-scope";
-import { saveAndCheck } from "./save-and-check";
+import { assemblePlan } from "./assemble";
+import { prepareCheck, saveAndCheck, stageRevision, type PreparedCheck, type StagedRevision } from "./save-and-check";
 import { badFile, storeUpload, textOf, type UploadedFile } from "./uploads";
 
 /**
@@ -21,9 +22,12 @@ import { badFile, storeUpload, textOf, type UploadedFile } from "./uploads";
  * (docs/decisions/023-hardening.md): the file is read and every row
  * validated before the lock, every limit (the plan's channel limit
  * included) is checked before the first write, and the rows are written by
- * one `insert … on conflict do update` statement. Under the lock the chains
- * are read again; if they changed meanwhile the file is validated again
- * against them.
+ * one `insert … on conflict do update` statement. The engine checks the
+ * plan the file should leave before the lock too, and that revision with
+ * its findings is written before the lock (stageRevision); under the lock
+ * the plan is assembled again and the staged revision kept only if it is
+ * exactly that plan. The chains are read again under the lock; if they
+ * changed meanwhile the file is validated again against them.
  */
 
 type ChainKey = { id: string; key: string };
@@ -145,18 +149,51 @@ async function lockedChannelPositions(tx: Tx, missionId: string): Promise<Map<st
   return new Map(rows.map((r) => [r.key, r.position]));
 }
 
-export async function uploadChannels(
+/** A channel file read and validated outside the lock: every row valid and within the limit, ready to apply. */
+export interface PreparedChannels {
+  text: string;
+  file: UploadedFile;
+  rows: ChannelCsvRow[];
+  chainsBefore: ChainKey[];
+  /** The check of the plan this apply should leave, computed before the lock. */
+  check: PreparedCheck | null;
+}
+
+/**
+ * The plan document the rows would leave: the draft's channels updated by
+ * key, new ones appended in file order (as writeChannelRows stores them).
+ */
+function planAfter(draft: Awaited<ReturnType<typeof assemblePlan>>, rows: ChannelCsvRow[]) {
+  const channelsAfter = [...draft.channels];
+  const at = new Map(channelsAfter.map((c, i) => [c.id, i]));
+  for (const r of rows) {
+    const { chain, chainId: _chainId, key, ...fields } = r.channel!;
+    const doc = { id: key, chain, ...fields };
+    const i = at.get(key);
+    if (i === undefined) {
+      at.set(key, channelsAfter.length);
+      channelsAfter.push(doc);
+    } else channelsAfter[i] = doc;
+  }
+  return { ...draft, channels: channelsAfter };
+}
+
+/**
+ * Everything before the lock: reads and validates the file (preview: the
+ * page of rows; apply: 400 for any row error or a file over the channel
+ * limit). Holds no lock, so a large or bad file holds no one up.
+ */
+export async function prepareChannelUpload(
   actor: Actor,
   missionId: string,
   q: Pick<ChannelsUploadQuery, "apply" | "offset" | "limit">,
   file: UploadedFile,
-) {
+): Promise<{ preview: ReturnType<typeof previewPage> } | { prepared: PreparedChannels }> {
   const text = textOf(file);
   await getMissionRow(actor, missionId);
-  // Everything up to the lock reads without locking: parsing and validating a large file holds no one up.
   const chainsBefore = await chainKeys(db, missionId);
   const parsed = parsedOrRefused(text, chainsBefore, file.filename);
-  if (!q.apply) return previewPage(parsed.rows, parsed.valid, q);
+  if (!q.apply) return { preview: previewPage(parsed.rows, parsed.valid, q) };
   if (!parsed.valid) throw badFile(rowIssues(parsed.rows), file.filename);
   const keysBefore = await db.select({ key: channels.key }).from(channels).where(eq(channels.missionId, missionId));
   checkChannelLimit(
@@ -164,24 +201,62 @@ export async function uploadChannels(
     parsed.rows,
     file.filename,
   );
-  return inTransaction(async (tx) => {
-    await lockMission(tx, actor, missionId);
-    let rows = parsed.rows;
-    const chainsNow = await chainKeys(tx, missionId);
-    if (!sameChains(chainsNow, chainsBefore)) {
-      const again = parsedOrRefused(text, chainsNow, file.filename);
-      if (!again.valid) throw badFile(rowIssues(again.rows), file.filename);
-      rows = again.rows;
-    }
-    const existing = await lockedChannelPositions(tx, missionId);
-    checkChannelLimit(existing.keys(), rows, file.filename);
-    const { created, updated } = await writeChannelRows(tx, missionId, rows, existing);
-    await storeUpload(tx, actor, missionId, "channels", file);
-    const revision = await saveAndCheck(tx, missionId, actor, {
+  // The engine runs here, without the lock, on the plan the apply should leave; under the lock
+  // saveAndCheck uses this result only if the plan there is exactly this one.
+  const check = prepareCheck(planAfter(await assemblePlan(db, missionId), parsed.rows));
+  return { prepared: { text, file, rows: parsed.rows, chainsBefore, check } };
+}
+
+/**
+ * The part under the mission lock (the caller holds it, lockMission): the
+ * chains read again (the file validated again only if they changed), the
+ * limit checked again against the locked channel rows, one upsert
+ * statement, the stored upload and the re-check with its revision.
+ */
+export async function applyPreparedChannels(
+  tx: Tx,
+  actor: Actor,
+  missionId: string,
+  p: PreparedChannels,
+  staged?: StagedRevision | null,
+) {
+  let rows = p.rows;
+  const chainsNow = await chainKeys(tx, missionId);
+  if (!sameChains(chainsNow, p.chainsBefore)) {
+    const again = parsedOrRefused(p.text, chainsNow, p.file.filename);
+    if (!again.valid) throw badFile(rowIssues(again.rows), p.file.filename);
+    rows = again.rows;
+  }
+  const existing = await lockedChannelPositions(tx, missionId);
+  checkChannelLimit(existing.keys(), rows, p.file.filename);
+  const { created, updated } = await writeChannelRows(tx, missionId, rows, existing);
+  await storeUpload(tx, actor, missionId, "channels", p.file);
+  const revision = await saveAndCheck(
+    tx,
+    missionId,
+    actor,
+    {
       action: "upload",
       entity: "channels",
-      summary: `Applied channel list "${file.filename}": ${created} added, ${updated} updated.`,
-    });
-    return { ...previewPage(rows, true, { offset: 0, limit: Math.max(rows.length, 1) }), created, updated, revision };
+      summary: `Applied channel list "${p.file.filename}": ${created} added, ${updated} updated.`,
+    },
+    staged ?? p.check,
+  );
+  return { ...previewPage(rows, true, { offset: 0, limit: Math.max(rows.length, 1) }), created, updated, revision };
+}
+
+export async function uploadChannels(
+  actor: Actor,
+  missionId: string,
+  q: Pick<ChannelsUploadQuery, "apply" | "offset" | "limit">,
+  file: UploadedFile,
+) {
+  const ready = await prepareChannelUpload(actor, missionId, q, file);
+  if ("preview" in ready) return ready.preview;
+  return inTransaction(async (tx) => {
+    // The revision and its findings are written first, before the lock (see stageRevision).
+    const staged = ready.prepared.check ? await stageRevision(tx, missionId, actor, ready.prepared.check) : null;
+    await lockMission(tx, actor, missionId);
+    return applyPreparedChannels(tx, actor, missionId, ready.prepared, staged);
   });
 }
