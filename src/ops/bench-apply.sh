@@ -6,6 +6,11 @@
 source "$(dirname "$0")/lib.sh"
 cd "$ROOT"
 ensure_node_modules
+# The server modules validate their environment on load; the bench sends no mail and signs no one in.
+export BETTER_AUTH_SECRET="${BETTER_AUTH_SECRET:-bench-secret-0123456789abcdef0123456789abcdef}"
+export BETTER_AUTH_URL="${BETTER_AUTH_URL:-http://localhost:3000}"
+export SMTP_URL="${SMTP_URL:-smtp://127.0.0.1:2525}"
+export MAIL_FROM="${MAIL_FROM:-Heterolane bench <no-reply@heterolane.local>}"
 if [ -n "${DATABASE_URL:-}" ]; then
   exec node_modules/.bin/tsx src/bench/apply.ts
 fi
