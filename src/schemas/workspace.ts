@@ -234,8 +234,8 @@ export const channelsUploadQuerySchema = z.object({
 });
 export type ChannelsUploadQuery = z.infer<typeof channelsUploadQuerySchema>;
 
-/** `POST …/plan?revision=N`: the revision the imported document replaces (409 when the plan has moved on). */
-export const planImportQuerySchema = z.object({ revision: numberParam(r.count(1)).optional() });
+/** `POST …/plan?baseRevision=N`: the revision the imported document was read at (409 when the plan has moved on). */
+export const planImportQuerySchema = z.object({ baseRevision: numberParam(r.count(1)).optional() });
 
 /** Upload limits (docs/decisions/010-workspace-data.md). */
 export const UPLOAD_MAX_BYTES = 5 * 1024 * 1024;

@@ -247,6 +247,16 @@ const ROUTES: FuzzRoute[] = [
     text: true,
   },
   {
+    name: "create API token",
+    method: "POST",
+    path: () => "/api/account/tokens",
+    base: () => ({ name: "fuzz token", teamId: t.teamId, role: "viewer", expiresInDays: 30, requestsPerMinute: 60 }),
+    required: ["name", "teamId", "role"],
+    ints: [],
+    strict: true,
+    text: true,
+  },
+  {
     name: "create mission (again, other seed stream)",
     method: "POST",
     path: () => "/api/v1/missions",

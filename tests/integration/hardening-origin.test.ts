@@ -56,6 +56,7 @@ function requests() {
       id: pattern.includes("invitations/[id]") ? ids.invitation! : id(kind ?? ""),
       memberId: ids.member!,
       waiverId: "00000000-0000-4000-8000-000000000000",
+      tokenId: "no-such-token",
       all: "organization/invite-member",
     };
     const paths = pattern.includes("[...all]")

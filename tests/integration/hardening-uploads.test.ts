@@ -9,7 +9,7 @@
  * - files as spreadsheets write them are read (BOM, CR LF, semicolons with
  *   decimal commas, headers with units), and a refused header names the
  *   delimiter and the header row;
- * - a plan import with `?revision=` answers 409 when the plan moved on,
+ * - a plan import with `?baseRevision=` answers 409 when the plan moved on,
  *   and nothing is lost.
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
@@ -240,16 +240,16 @@ describe("plan import with a version", () => {
     const afterEdit = (await call(t.viewer, "GET", `${M(id)}/plan`)).body;
 
     doc.name = "My import";
-    const stale = await call(t.engineer, "POST", `${M(id)}/plan?revision=${base}`, doc);
+    const stale = await call(t.engineer, "POST", `${M(id)}/plan?baseRevision=${base}`, doc);
     expect(stale.status).toBe(409);
     expect(stale.body.error).toMatchObject({ code: "stale-version", current: { revision: base + 1 } });
     expect((await call(t.viewer, "GET", `${M(id)}/plan`)).body).toEqual(afterEdit);
 
-    const fresh = await call(t.engineer, "POST", `${M(id)}/plan?revision=${base + 1}`, doc);
+    const fresh = await call(t.engineer, "POST", `${M(id)}/plan?baseRevision=${base + 1}`, doc);
     expect(fresh.status).toBe(201);
     expect(fresh.body.revision.number).toBe(base + 2);
     expect((await call(t.viewer, "GET", `${M(id)}/plan`)).body.name).toBe("My import");
-    const badQuery = await call(t.engineer, "POST", `${M(id)}/plan?revision=latest`, doc);
-    expect([badQuery.status, badQuery.body.error.issues[0].path]).toEqual([400, "revision"]);
+    const badQuery = await call(t.engineer, "POST", `${M(id)}/plan?baseRevision=latest`, doc);
+    expect([badQuery.status, badQuery.body.error.issues[0].path]).toEqual([400, "baseRevision"]);
   });
 });

@@ -1,4 +1,5 @@
 "use client";
+import Link from "next/link";
 
 /** Name, e-mail and sign-out in a small disclosure menu. */
 export function AccountMenu({ name, email, signOut }: { name: string; email: string; signOut: () => Promise<void> }) {
@@ -17,6 +18,14 @@ export function AccountMenu({ name, email, signOut }: { name: string; email: str
       <div className="absolute right-0 z-20 mt-1 w-64 rounded-md border border-ink/15 bg-white p-3 text-ink shadow-lg">
         <p className="truncate text-sm font-medium">{name}</p>
         <p className="mb-3 truncate text-xs text-ink-soft">{email}</p>
+        <nav aria-label="Account" className="mb-3 flex flex-col gap-1 text-sm">
+          <Link href="/account" className="rounded px-1 py-0.5 hover:bg-ink-faint">
+            Account and API tokens
+          </Link>
+          <Link href="/api-reference" className="rounded px-1 py-0.5 hover:bg-ink-faint">
+            API reference
+          </Link>
+        </nav>
         <form action={signOut}>
           <button type="submit" className="w-full rounded border border-ink/30 px-3 py-1.5 text-sm hover:bg-ink-faint">
             Sign out

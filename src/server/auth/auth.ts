@@ -3,6 +3,7 @@ import { betterAuth } from "better-auth";
 import { drizzleAdapter } from "better-auth/adapters/drizzle";
 import { nextCookies } from "better-auth/next-js";
 import { organization } from "better-auth/plugins";
+import { apiKey } from "@better-auth/api-key";
 import { db } from "@db/client";
 import * as schema from "@db/schema";
 import { ac, roles } from "@/lib/permissions";
@@ -11,6 +12,7 @@ import { serverEnv, trustedOrigins } from "@/server/env";
 import { listTeamsOf } from "./queries";
 import { existingAccountMail, invitationMail, resetPasswordMail, sendMail, verificationMail } from "@/server/mail";
 import { membershipAudit } from "@/server/team/membership-audit";
+import { TOKEN_PLUGIN_OPTIONS, TOKEN_HTTP_PATHS } from "@/server/api-tokens/config";
 
 /**
  * The one better-auth instance (docs/decisions/003-auth-and-roles.md).
@@ -68,6 +70,10 @@ export const auth = betterAuth({
       await sendMail(verificationMail(user.email, user.name, url));
     },
   },
+  // Personal API tokens are made, listed and revoked only through our service
+  // (src/server/api-tokens), which binds each to a team and a role; the
+  // plugin's own HTTP endpoints are switched off (docs/decisions/024-api-tokens.md).
+  disabledPaths: [...TOKEN_HTTP_PATHS],
   rateLimit: {
     enabled: env.HETEROLANE_AUTH_RATE_LIMIT !== "off",
     storage: "database",
@@ -106,6 +112,7 @@ export const auth = betterAuth({
         await sendMail(invitationMail(email, inviter.user.name, team.name, role, url));
       },
     }),
+    apiKey(TOKEN_PLUGIN_OPTIONS),
     nextCookies(),
   ],
 });

@@ -4,7 +4,7 @@ import type { Permission } from "@/lib/permissions";
 import { paramTextSchema } from "@/schemas/fields";
 import { zodIssues, type Issue } from "@/schemas/issues";
 import type { Actor } from "@/server/auth/actor";
-import { requireActor } from "@/server/auth/guard";
+import { requireRouteActor } from "@/server/auth/guard";
 import { trustedOrigins } from "@/server/env";
 import { DEFAULT_BODY_LIMIT, readJsonBody } from "./body";
 import { crossOrigin, errorResponse, HttpError, invalidInput } from "./http";
@@ -49,6 +49,18 @@ export interface RouteContext<K extends string, B extends Schema, Q extends Sche
   query: Parsed<Q, Record<string, string>>;
 }
 
+/** What the OpenAPI description reads from a guarded handler: its access and spec (the same zod schemas it parses with). */
+export interface RouteMeta {
+  access: Access;
+  spec: RouteSpec<string, Schema, Schema>;
+}
+const ROUTE_META = Symbol.for("heterolane.route-meta");
+
+/** The access and spec of a handler made by `guarded`, or undefined for any other function. */
+export function routeMeta(handler: unknown): RouteMeta | undefined {
+  return (handler as { [ROUTE_META]?: RouteMeta } | null)?.[ROUTE_META];
+}
+
 /** The second argument Next passes to a route handler. */
 export type RouteArgs = { params?: Promise<Record<string, string | string[]>> };
 
@@ -58,10 +70,12 @@ export type RouteArgs = { params?: Promise<Record<string, string | string[]>> };
  *
  * 1. refuses a state-changing request another site may have forged — 403
  *    `cross-origin` (`checkOrigin`, request-origin.ts) — before reading
- *    anything else;
- * 2. loads the caller once and checks `access` — 401 signed out, 403 with no
- *    active team or a role that may not act — before any other work (so a
- *    signed-out caller's body is never read);
+ *    anything else (a request authenticated by a bearer token alone is not
+ *    checked: no page can forge it);
+ * 2. loads the caller once (the session, or on /api/v1 an API token:
+ *    `readRouteCaller`) and checks `access` — 401 signed out or with a bad
+ *    token, 403 with no active team or a role that may not act — before any
+ *    other work (so a signed-out caller's body is never read);
  * 3. checks the path parameters and parses the query and the JSON body with
  *    the spec's zod schemas and answers 400 `invalid-input` with every issue
  *    (415 for a body that is not JSON, 413 for a body above its limit —
@@ -76,10 +90,10 @@ export function guarded<K extends string = never, B extends Schema = undefined, 
   spec: RouteSpec<K, B, Q>,
   handler: (ctx: RouteContext<K, B, Q>) => Promise<Response>,
 ) {
-  return async (request: Request, args?: RouteArgs): Promise<Response> => {
+  const route = async (request: Request, args?: RouteArgs): Promise<Response> => {
     try {
       checkOrigin(request.method, request.headers);
-      const actor = await requireActor(request.headers, access === ANY_MEMBER ? undefined : access, spec.what);
+      const actor = await requireRouteActor(request, access === ANY_MEMBER ? undefined : access, spec.what);
       const params = await routeParams<K>(args, spec.params ?? []);
       const { body, query } = await parseInput(request, spec);
       return await handler({
@@ -93,6 +107,7 @@ export function guarded<K extends string = never, B extends Schema = undefined, 
       return errorResponse(err);
     }
   };
+  return Object.assign(route, { [ROUTE_META]: { access, spec } as RouteMeta });
 }
 
 /**

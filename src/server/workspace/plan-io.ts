@@ -50,7 +50,7 @@ export async function exportPlanDocument(actor: Actor, missionId: string) {
  * result as a new revision. The plan's name becomes the mission's name, so
  * exporting gives the same document.
  *
- * `baseRevision` is the revision the caller's document replaces (the
+ * `opts.baseRevision` is the revision the caller's document replaces (the
  * `x-heterolane-revision` of its export, or the revision it last read):
  * when the plan has moved on since, the import answers 409 `stale-version`
  * with the current revision number and changes nothing, so no concurrent
@@ -61,7 +61,7 @@ export async function importPlanDocument(
   actor: Actor,
   missionId: string,
   body: unknown,
-  baseRevision?: number,
+  opts: { baseRevision?: number } = {},
 ): Promise<{ revision: RevisionInfo }> {
   const parsed = parsePlan(body);
   if (!parsed.ok)
@@ -71,15 +71,15 @@ export async function importPlanDocument(
     throw new HttpError(400, "invalid-plan", "The plan document cannot be stored; nothing was imported.", unstorable);
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
-    if (baseRevision !== undefined) {
-      const current = await latestRevisionNumber(missionId, tx);
-      if (current !== baseRevision)
+    if (opts.baseRevision !== undefined) {
+      const latest = await latestRevisionNumber(missionId, tx);
+      if (latest !== opts.baseRevision)
         throw new HttpError(
           409,
           "stale-version",
-          `The plan has changed since revision ${baseRevision} (it is at revision ${current} now); nothing was imported. Export it again, apply your changes and import with revision=${current}.`,
+          `The plan changed since revision ${opts.baseRevision}: the current revision is ${latest}; nothing was imported. Pull it and apply your change again.`,
           undefined,
-          { current: { revision: current } },
+          { current: { revision: latest } },
         );
     }
     await replaceDraft(tx, missionId, parsed.plan);

@@ -11,15 +11,17 @@ export const GET = guarded(CAN.export, { what: "export the plan", params }, asyn
 });
 
 /**
- * Imports a plan document; it is validated by `parsePlan` (400 `invalid-plan` with every issue), not by a zod body
- * schema. `?revision=N` names the revision it replaces: 409 `stale-version` when the plan has moved on since.
+ * Imports a plan document; it is validated by `parsePlan` (400 `invalid-plan` with every issue), not by a zod body schema.
+ * `?baseRevision=N`: only when the latest revision is still N (409 `stale-version` otherwise).
  */
 export const POST = guarded(
   CAN.import,
   { what: "import plans", params, query: planImportQuerySchema, input: "query" },
   async ({ request, actor, params, query }) =>
     json(
-      await importPlanDocument(actor, params.missionId, await readJsonBody(request, 5_000_000), query.revision),
+      await importPlanDocument(actor, params.missionId, await readJsonBody(request, 5_000_000), {
+        baseRevision: query.baseRevision,
+      }),
       201,
     ),
 );
