@@ -46,6 +46,10 @@ export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
 export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
 export HETEROLANE_DEV_ROUTES=1
 export HETEROLANE_AUTH_RATE_LIMIT=off
+# The test client plays the part of one reverse proxy: the app believes the
+# last X-Forwarded-For entry (tests name client addresses that way); one
+# process below runs without a trusted proxy (HETEROLANE_RATE_LIMIT_DIRECT_URL).
+export HETEROLANE_TRUSTED_PROXY_HOPS=1
 export HETEROLANE_TEST_URL="http://localhost:$APP_PORT"
 
 passed=0; failed=0; skipped=0
@@ -100,7 +104,7 @@ if [ -f .next/BUILD_ID ]; then
     pids+=($!)
   done
   # And one with rate limiting on and no trusted proxy: the client is the socket address.
-  HETEROLANE_AUTH_RATE_LIMIT=on BETTER_AUTH_URL="http://localhost:$RL_PORT_C" \
+  HETEROLANE_AUTH_RATE_LIMIT=on HETEROLANE_TRUSTED_PROXY_HOPS=0 BETTER_AUTH_URL="http://localhost:$RL_PORT_C" \
     node_modules/.bin/next start -p "$RL_PORT_C" >"$OUT/app-rate-limit-$RL_PORT_C.log" 2>&1 &
   pids+=($!)
   export HETEROLANE_RATE_LIMIT_URLS="http://localhost:$RL_PORT_A,http://localhost:$RL_PORT_B"

@@ -46,12 +46,7 @@ async function measure(path: string, headers: Record<string, string>) {
   const peakResets = resetPeakRss(p);
   let sampled = before;
   const sampler = setInterval(() => (sampled = Math.max(sampled, rssBytes(p))), 5);
-  // `Connection: close` lets the server end the connection right after answering instead of
-  // holding it (unread) until its keep-alive timeout.
-  const reply = await postChunked(`${BASE_URL}${path}`, {
-    totalBytes: BODY,
-    headers: { ...headers, connection: "close" },
-  });
+  const reply = await postChunked(`${BASE_URL}${path}`, { totalBytes: BODY, headers });
   // The server may still be discarding the rest of the body: let it finish before reading the peak.
   await new Promise((r) => setTimeout(r, 300));
   clearInterval(sampler);

@@ -95,6 +95,13 @@ describe.skipIf(!direct)("without a trusted proxy the client is the socket addre
     expect(pages.slice(10).every((h) => h.includes(TOO_MANY_ADDRESS))).toBe(true);
   });
 
+  it("the captured-mail page: an X-Forwarded-For the client writes does not make it a client elsewhere, nor one here", async () => {
+    const fromHere = await requestFrom("127.0.0.1", `${at127(direct)}/dev/mail`, {
+      headers: { ...hostOf(direct), "x-forwarded-for": "203.0.113.50" },
+    });
+    expect(fromHere.status).toBe(200);
+  });
+
   it("one client at its limit does not lock out another (each address has its own bucket)", async () => {
     const noisy = loopback();
     for (let i = 0; i < 11; i++) await apiSignIn(direct, directOrigin, noisy, uniqueEmail("rl-n"));

@@ -15,11 +15,11 @@ export interface RawReply {
 }
 
 /**
- * POSTs `totalBytes` in chunks of `chunkBytes` with chunked transfer
- * encoding, all of it even when the server answers early (as a client that
- * does not read the answer would), unless the server closes the
- * connection. Resolves with the answer once the body is sent or the
- * connection is gone; `sent` says how much of the body went out.
+ * POSTs up to `totalBytes` in chunks of `chunkBytes` with chunked transfer
+ * encoding, as fast as the server takes them, until the server answers:
+ * then it stops sending and closes the connection (a server that refuses a
+ * body early does not read the rest, so TCP flow control would hold the
+ * client anyway). `sent` says how much of the body went out.
  */
 export function postChunked(
   url: string,
@@ -28,41 +28,31 @@ export function postChunked(
   const chunk = Buffer.alloc(opts.chunkBytes ?? 1024 * 1024, opts.fill ?? 0x61);
   return new Promise((resolve, reject) => {
     let sent = 0;
-    let reply: Omit<RawReply, "sent"> | null = null;
-    let bodyDone = false;
-    let closed = false;
-    const finish = () => {
-      if (reply && (bodyDone || closed)) resolve({ ...reply, sent });
-    };
+    let answered = false;
     const req = request(
       url,
       { method: "POST", headers: { ...opts.headers, "transfer-encoding": "chunked" } },
       (res) => {
+        answered = true;
         let text = "";
         res.setEncoding("utf8");
         res.on("data", (d: string) => (text += d));
         res.on("end", () => {
-          reply = { status: res.statusCode ?? 0, headers: res.headers, text };
-          finish();
+          req.destroy();
+          resolve({ status: res.statusCode ?? 0, headers: res.headers, text, sent });
         });
       },
     );
     req.on("error", (err) => {
-      closed = true;
-      if (reply) finish();
-      else reject(err);
-    });
-    req.on("close", () => {
-      closed = true;
-      finish();
+      if (!answered) reject(err);
     });
     const pump = () => {
-      while (!closed && sent < opts.totalBytes) {
+      while (!answered && sent < opts.totalBytes) {
         const piece = sent + chunk.length <= opts.totalBytes ? chunk : chunk.subarray(0, opts.totalBytes - sent);
         sent += piece.length;
         if (!req.write(piece)) return void req.once("drain", pump);
       }
-      if (!closed) req.end(() => ((bodyDone = true), finish()));
+      if (!answered) req.end();
     };
     pump();
   });
