@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import localFont from "next/font/local";
+import { connection } from "next/server";
 import "./globals.css";
 
 const inter = localFont({
@@ -14,7 +15,13 @@ export const metadata: Metadata = {
     "Frequency plans for microwave-photonic radiometers: channels, resonator modes, LO offsets and IF slots, checked on every change.",
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+/**
+ * Every page is rendered per request: its Content-Security-Policy carries a
+ * fresh nonce (proxy.ts) that Next puts on its scripts, which a page
+ * prerendered at build time could not have.
+ */
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  await connection();
   return (
     <html lang="en" className={inter.variable}>
       <body className="min-h-screen font-sans">{children}</body>

@@ -3,8 +3,8 @@ import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { auth } from "@/server/auth/auth";
 import { authError, isNextControlFlow, safeNext } from "@/server/auth/errors";
-import { consumeFormAttempt, type LimitedForm } from "@/server/auth/form-rate-limit";
-import { emailIsRegistered, listTeamsOf } from "@/server/auth/queries";
+import { consumeAccountSignIn, consumeFormAttempt, type LimitedForm } from "@/server/auth/form-rate-limit";
+import { listTeamsOf } from "@/server/auth/queries";
 import {
   ForgotPasswordSchema,
   ResendVerificationSchema,
@@ -27,6 +27,13 @@ function verifyCallback(next: string | undefined): string {
   return n ? `/verify-email/result?next=${encodeURIComponent(n)}` : "/verify-email/result";
 }
 
+/**
+ * Sign-up gives the same answer whether or not the address has an account
+ * ("check your inbox"), so the form cannot be used to find out who has one;
+ * the owner of a registered address gets a mail saying someone tried
+ * (better-auth's onExistingUserSignUp, src/server/auth/auth.ts), exactly as
+ * through the HTTP API.
+ */
 export const signUpAction = formAction(
   { access: "public", schema: SignUpSchema },
   async ({ value, formData, reply }) => {
@@ -34,15 +41,6 @@ export const signUpAction = formAction(
     if (tooMany) return reply({ formErrors: tooMany });
     const { name, email, password } = value;
     const next = formData.get("next");
-    if (await emailIsRegistered(email)) {
-      return reply({
-        fieldErrors: {
-          email: [
-            "An account with this e-mail address already exists. Sign in, or reset the password if you forgot it.",
-          ],
-        },
-      });
-    }
     try {
       await auth.api.signUpEmail({
         body: { name, email, password, callbackURL: verifyCallback(typeof next === "string" ? next : undefined) },
@@ -65,6 +63,9 @@ export const signInAction = formAction({ access: "public", schema: SignInSchema 
   const tooMany = await limited("sign-in");
   if (tooMany) return reply({ formErrors: tooMany });
   const { email, password, next } = value;
+  const accountWait = await consumeAccountSignIn(email);
+  if (accountWait > 0)
+    return reply({ formErrors: [`Too many sign-in attempts for this account. Try again in ${accountWait} s.`] });
   let userId: string;
   try {
     const res = await auth.api.signInEmail({

@@ -6,3 +6,4 @@ export * from "./mail";
 export * from "./workspace";
 export * from "./review";
 export * from "./api-tokens";
+export * from "./limits";

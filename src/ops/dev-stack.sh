@@ -19,6 +19,8 @@ export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
 export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
 export HETEROLANE_DEV_ROUTES=1
 export HETEROLANE_AUTH_RATE_LIMIT=off
+# As in the test command: the test client plays one trusted proxy (X-Forwarded-For names client addresses).
+export HETEROLANE_TRUSTED_PROXY_HOPS=1
 export NEXT_DIST_DIR=".next-$NAME"
 node_modules/.bin/tsx db/migrate.ts
 pids=()

@@ -22,12 +22,15 @@ SMTP_PORT="${HETEROLANE_TEST_SMTP_PORT:-$(free_port)}"
 PG_DIR="$(cluster_dir "test-pg-$$")"
 
 pids=()
+FAULT_PG_DIR="$(cluster_dir "test-fault-pg-$$")"
 cleanup() {
   trap - INT TERM EXIT
   for p in "${pids[@]}"; do kill -TERM -- "-$p" 2>/dev/null || kill -TERM "$p" 2>/dev/null || true; done
   wait 2>/dev/null
   stop_cluster "$PG_DIR"
   rm -rf "$PG_DIR"
+  stop_cluster "$FAULT_PG_DIR"
+  rm -rf "$FAULT_PG_DIR"
 }
 trap cleanup INT TERM EXIT
 
@@ -43,6 +46,10 @@ export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
 export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
 export HETEROLANE_DEV_ROUTES=1
 export HETEROLANE_AUTH_RATE_LIMIT=off
+# The test client plays the part of one reverse proxy: the app believes the
+# last X-Forwarded-For entry (tests name client addresses that way); one
+# process below runs without a trusted proxy (HETEROLANE_RATE_LIMIT_DIRECT_URL).
+export HETEROLANE_TRUSTED_PROXY_HOPS=1
 export HETEROLANE_TEST_URL="http://localhost:$APP_PORT"
 
 passed=0; failed=0; skipped=0
@@ -86,20 +93,44 @@ if [ -f .next/BUILD_ID ]; then
   pids+=($!)
   node_modules/.bin/next start -p "$APP_PORT" >"$OUT/app.log" 2>&1 &
   pids+=($!)
-  # Two more app processes on the same database with rate limiting on: the
+  # Two more app processes on the same database with rate limiting on, as if
+  # behind one trusted proxy (X-Forwarded-For plays the proxy's entry): the
   # limits are kept in PostgreSQL, so they hold across processes (tested in
-  # tests/integration/auth-rate-limit.test.ts).
-  RL_PORT_A="$(free_port)"; RL_PORT_B="$(free_port)"
+  # tests/integration/auth-rate-limit.test.ts and hardening-rate-limit.test.ts).
+  RL_PORT_A="$(free_port)"; RL_PORT_B="$(free_port)"; RL_PORT_C="$(free_port)"
   for port in "$RL_PORT_A" "$RL_PORT_B"; do
-    HETEROLANE_AUTH_RATE_LIMIT=on BETTER_AUTH_URL="http://localhost:$RL_PORT_A" \
+    HETEROLANE_AUTH_RATE_LIMIT=on HETEROLANE_TRUSTED_PROXY_HOPS=1 BETTER_AUTH_URL="http://localhost:$RL_PORT_A" \
       node_modules/.bin/next start -p "$port" >"$OUT/app-rate-limit-$port.log" 2>&1 &
     pids+=($!)
   done
+  # And one with rate limiting on and no trusted proxy: the client is the socket address.
+  HETEROLANE_AUTH_RATE_LIMIT=on HETEROLANE_TRUSTED_PROXY_HOPS=0 BETTER_AUTH_URL="http://localhost:$RL_PORT_C" \
+    node_modules/.bin/next start -p "$RL_PORT_C" >"$OUT/app-rate-limit-$RL_PORT_C.log" 2>&1 &
+  pids+=($!)
   export HETEROLANE_RATE_LIMIT_URLS="http://localhost:$RL_PORT_A,http://localhost:$RL_PORT_B"
   export HETEROLANE_RATE_LIMIT_ORIGIN="http://localhost:$RL_PORT_A"
+  export HETEROLANE_RATE_LIMIT_DIRECT_URL="http://localhost:$RL_PORT_C"
+  # The fault test's own cluster and app process: the test stops and starts
+  # this cluster (src/ops/fault-db.sh) while it loads the app, so no other
+  # test sees the outage (tests/integration/fault-database.test.ts).
+  FAULT_PG_PORT="$(free_port)"; FAULT_APP_PORT="$(free_port)"
+  if start_cluster "$FAULT_PG_DIR" "$FAULT_PG_PORT" && ensure_database "$FAULT_PG_PORT" heterolane_fault &&
+    DATABASE_URL="postgres://postgres@127.0.0.1:$FAULT_PG_PORT/heterolane_fault" node_modules/.bin/tsx db/migrate.ts >"$OUT/fault-migrate.log" 2>&1; then
+    DATABASE_URL="postgres://postgres@127.0.0.1:$FAULT_PG_PORT/heterolane_fault" DATABASE_POOL_MAX=4 \
+      BETTER_AUTH_URL="http://localhost:$FAULT_APP_PORT" \
+      node_modules/.bin/next start -p "$FAULT_APP_PORT" >"$OUT/app-fault.log" 2>&1 &
+    pids+=($!)
+    export HETEROLANE_FAULT_URL="http://localhost:$FAULT_APP_PORT"
+    export HETEROLANE_FAULT_DATABASE_URL="postgres://postgres@127.0.0.1:$FAULT_PG_PORT/heterolane_fault"
+    export HETEROLANE_FAULT_PG_DIR="$FAULT_PG_DIR" HETEROLANE_FAULT_PG_PORT="$FAULT_PG_PORT"
+  else
+    log "the fault test's cluster did not start; the fault test is skipped (see test-output/fault-migrate.log)"
+  fi
   set +m
-  wait_http "http://127.0.0.1:$RL_PORT_A/api/health" 90 && wait_http "http://127.0.0.1:$RL_PORT_B/api/health" 90 ||
-    log "a rate-limited app process did not start; see test-output/app-rate-limit-*.log"
+  for port in "$RL_PORT_A" "$RL_PORT_B" "$RL_PORT_C" ${FAULT_APP_PORT:+"$FAULT_APP_PORT"}; do
+    wait_http "http://127.0.0.1:$port/api/health" 90 ||
+      log "a rate-limited app process did not start; see test-output/app-rate-limit-$port.log"
+  done
   if wait_http "http://127.0.0.1:$APP_PORT/api/health" 90; then
     suite integration
     suite e2e

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { TEAM_ROLES } from "./auth";
+import { paramTextSchema, withTextRule } from "./fields";
 
 /**
  * Personal API tokens (docs/decisions/024-api-tokens.md): the form on the
@@ -21,12 +22,14 @@ const whole = (what: string, lim: { min: number; max: number }) =>
     .max(lim.max, { error: `${what} must be at most ${lim.max}` });
 
 export const createTokenSchema = z.object({
-  name: z
-    .string({ error: "Give the token a name." })
-    .trim()
-    .min(1, { error: "Give the token a name." })
-    .max(TOKEN_LIMITS.nameMax, { error: `The name must be at most ${TOKEN_LIMITS.nameMax} characters.` }),
-  teamId: z.string({ error: "Choose a team." }).min(1, { error: "Choose a team." }),
+  name: withTextRule(
+    z
+      .string({ error: "Give the token a name." })
+      .trim()
+      .min(1, { error: "Give the token a name." })
+      .max(TOKEN_LIMITS.nameMax, { error: `The name must be at most ${TOKEN_LIMITS.nameMax} characters.` }),
+  ),
+  teamId: paramTextSchema(200, "Choose a team.").min(1, { error: "Choose a team." }),
   role: z.enum(TEAM_ROLES, { error: "Choose a role: owner, lead, engineer or viewer." }),
   expiresInDays: whole("Days until expiry", TOKEN_LIMITS.expiresInDays).default(TOKEN_LIMITS.expiresInDays.default),
   requestsPerMinute: whole("Requests per minute", TOKEN_LIMITS.requestsPerMinute).default(
@@ -39,5 +42,5 @@ export type CreateTokenInput = z.infer<typeof createTokenSchema>;
 export const createTokenRequestSchema = createTokenSchema.strict();
 
 export const tokenIdSchema = z.object({
-  tokenId: z.string({ error: "The token is missing." }).min(1, { error: "The token is missing." }),
+  tokenId: paramTextSchema(200, "The token is missing.").min(1, { error: "The token is missing." }),
 });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { paramTextSchema, withTextRule } from "./fields";
 
 /**
  * One schema per auth form, shared by the conform form on the client and the
@@ -21,11 +22,13 @@ const newPassword = z
   .max(PASSWORD_MAX, `Password must be at most ${PASSWORD_MAX} characters.`);
 
 export const SignUpSchema = z.object({
-  name: z
-    .string({ error: "Enter your name." })
-    .trim()
-    .min(1, "Enter your name.")
-    .max(100, "Name is too long (100 characters at most)."),
+  name: withTextRule(
+    z
+      .string({ error: "Enter your name." })
+      .trim()
+      .min(1, "Enter your name.")
+      .max(100, "Name is too long (100 characters at most)."),
+  ),
   email,
   password: newPassword,
 });
@@ -33,14 +36,14 @@ export const SignUpSchema = z.object({
 export const SignInSchema = z.object({
   email,
   password: z.string({ error: "Enter your password." }).min(1, "Enter your password."),
-  next: z.string().optional(),
+  next: z.string().max(2000).optional(),
 });
 
 export const ForgotPasswordSchema = z.object({ email });
 
 export const ResetPasswordSchema = z
   .object({
-    token: z.string({ error: "The reset link is incomplete." }).min(1, "The reset link is incomplete."),
+    token: paramTextSchema(500, "The reset link is incomplete.").min(1, "The reset link is incomplete."),
     password: newPassword,
     confirm: z.string({ error: "Repeat the new password." }),
   })
@@ -49,11 +52,13 @@ export const ResetPasswordSchema = z
 export const ResendVerificationSchema = z.object({ email });
 
 export const CreateTeamSchema = z.object({
-  name: z
-    .string({ error: "Enter a team name." })
-    .trim()
-    .min(2, "Team name must be at least 2 characters.")
-    .max(80, "Team name is too long (80 characters at most)."),
+  name: withTextRule(
+    z
+      .string({ error: "Enter a team name." })
+      .trim()
+      .min(2, "Team name must be at least 2 characters.")
+      .max(80, "Team name is too long (80 characters at most)."),
+  ),
 });
 
 export const InviteSchema = z.object({
@@ -62,13 +67,22 @@ export const InviteSchema = z.object({
 });
 
 export const ChangeRoleSchema = z.object({
-  memberId: z.string({ error: "Member is missing." }).min(1),
+  memberId: paramTextSchema(200, "Member is missing.").min(1, "Member is missing."),
   role: z.enum(TEAM_ROLES, { error: "Choose a role: owner, lead, engineer or viewer." }),
 });
 
-export const MemberIdSchema = z.object({ memberId: z.string({ error: "Member is missing." }).min(1) });
+export const MemberIdSchema = z.object({
+  memberId: paramTextSchema(200, "Member is missing.").min(1, "Member is missing."),
+});
 
-export const SwitchTeamSchema = z.object({ teamId: z.string({ error: "Team is missing." }).min(1) });
+export const SwitchTeamSchema = z.object({
+  teamId: paramTextSchema(200, "Team is missing.").min(1, "Team is missing."),
+});
+
+/** An invitation id as a form or a path names it. */
+export const InvitationIdSchema = z.object({
+  invitationId: paramTextSchema(200, "The invitation is missing.").min(1, "The invitation is missing."),
+});
 
 /** A team slug from its name: lower-case ASCII words joined by hyphens, plus a short random suffix. */
 export function slugFromName(name: string, suffix: string): string {

@@ -16,6 +16,12 @@ import { z } from "zod";
  * - `formRules` carry, on every check, the message a form shows beside the
  *   field.
  *
+ * Text and integers that reach the database follow one rule, written here
+ * and used by every schema (docs/decisions/023-hardening.md): text holds no
+ * control characters (tab and line breaks only where a field is multi-line)
+ * and no lone UTF-16 surrogates (they cannot be written as UTF-8), and a
+ * whole number in a form fits the `integer` column it is stored in.
+ *
  * The entity tables below return the shared fields in plan-document order
  * (so parsed objects and issue lists keep that order); each schema adds its
  * own id and reference fields, its defaults and its wording of the
@@ -47,6 +53,9 @@ export interface FieldRules {
   ifFilter(): z.ZodEnum<{ slot: "slot"; occupied: "occupied" }>;
 }
 
+/** The largest value of a PostgreSQL `integer` column (2³¹ − 1; PostgreSQL manual §8.1.1 "Integer Types"). */
+export const INT4_MAX = 2_147_483_647;
+
 /** The largest modulation index accepted: just below the first zero of J0 (2.405), so the carrier keeps power. */
 export const MAX_MODULATION_INDEX = 2.4;
 /** Most reach intervals one laser pair may list (docs/plan-format.md §2.10 "List limits"). */
@@ -67,7 +76,12 @@ function buildRules(dialect: "document" | "form"): FieldRules {
     form
       ? z.number({ error: (iss) => (iss.input === undefined ? "is required" : `must be ${what}`) })
       : z.number().overwrite((v) => (v === 0 ? 0 : v));
-  const whole = () => number("a whole number").int(say("must be a whole number"));
+  // The form dialect stores its whole numbers in integer columns, so it bounds them; the plan
+  // document (checked without storing) does not, and the import path checks what it stores.
+  const whole = () => {
+    const n = number("a whole number").int(say("must be a whole number"));
+    return form ? n.lte(INT4_MAX, say(`must be ${INT4_MAX} or less`)) : n;
+  };
   return {
     number: (what) => number(what),
     positive: () => number().gt(0, say("must be greater than 0")),
@@ -97,31 +111,90 @@ export const documentRules: FieldRules = buildRules("document");
 /** The rules as the workspace forms state them (a message on every check). */
 export const formRules: FieldRules = buildRules("form");
 
+// ---------------------------------------------------------------- text
+
+/** C0 controls, DEL and C1 controls. */
+const CONTROL = /[\u0000-\u001f\u007f-\u009f]/;
+/** The same without tab, line feed and carriage return (a form's text area sends CR LF line breaks). */
+const CONTROL_MULTI_LINE = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f]/;
+const LONE_SURROGATE = /[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/;
+
+const codePoint = (ch: string) => `U+${ch.charCodeAt(0).toString(16).toUpperCase().padStart(4, "0")}`;
+
+/**
+ * What is wrong with a text value, in the words of a field error, or null:
+ * a control character (NUL and the like; in multi-line text tab and line
+ * breaks are allowed) or a lone surrogate.
+ */
+export function textProblem(value: string, options: { multiLine?: boolean } = {}): string | null {
+  const control = value.match(options.multiLine ? CONTROL_MULTI_LINE : CONTROL);
+  if (control)
+    return `must not contain control characters (found ${codePoint(control[0])}${
+      options.multiLine ? "; tabs and line breaks are fine" : ""
+    })`;
+  const lone = value.match(LONE_SURROGATE);
+  if (lone) return `is not valid Unicode text (a lone surrogate ${codePoint(lone[0])})`;
+  return null;
+}
+
+/** Adds the text rule to a string schema (a field error naming the character). */
+export function withTextRule<S extends z.ZodType<string, string>>(schema: S, options: { multiLine?: boolean } = {}): S {
+  return schema.superRefine((value, ctx) => {
+    const problem = typeof value === "string" ? textProblem(value, options) : null;
+    if (problem) ctx.addIssue({ code: "custom", message: problem, input: value });
+  }) as unknown as S;
+}
+
+/** Single-line text: any string without control characters. */
+export const lineTextSchema = (message = "must be text") => withTextRule(z.string({ error: message }));
+
+/** Multi-line text (notes, comments, descriptions): tabs and line breaks allowed. */
+export const multiLineTextSchema = (message = "must be text") =>
+  withTextRule(z.string({ error: message }), { multiLine: true });
+
+/** A query or path parameter: single-line text of at most `max` characters. */
+export const paramTextSchema = (max = 200, missing = "is required") =>
+  withTextRule(z.string({ error: missing }).max(max, { error: `must be at most ${max} characters` }));
+
 // ---------------------------------------------------------------- ids
 
-/** An id in the plan document (and a reference to one): any non-empty string. */
-export const planIdSchema = () => z.string().min(1);
+/** An id in the plan document (and a reference to one): any non-empty string without control characters. */
+export const planIdSchema = () => withTextRule(z.string().min(1));
 
 /**
  * A plan-document id as the workspace stores it (`key`): a plan id that is
  * also at most 64 characters and has no surrounding spaces.
  */
-export const entityKeySchema = z
-  .string({ error: "is required" })
-  .min(1, { error: "is required" })
-  .max(64, { error: "must be at most 64 characters" })
-  .refine((s) => s.trim() === s, { error: "must not start or end with a space" });
+export const entityKeySchema = withTextRule(
+  z
+    .string({ error: "is required" })
+    .min(1, { error: "is required" })
+    .max(64, { error: "must be at most 64 characters" })
+    .refine((s) => s.trim() === s, { error: "must not start or end with a space" }),
+);
 
 /** A reference to a stored row (chains name their hardware, channels their chain). */
 export const rowIdSchema = z.uuid({ error: "must be the id of an existing row" });
 
-/** Required text of a form, trimmed: a mission's or a channel's name. */
+/** Required single-line text of a form, trimmed: a mission's or a channel's name. */
 export const requiredTextSchema = (max: number) =>
-  z
-    .string({ error: "is required" })
-    .trim()
-    .min(1, { error: "is required" })
-    .max(max, { error: `must be at most ${max} characters` });
+  withTextRule(
+    z
+      .string({ error: "is required" })
+      .trim()
+      .min(1, { error: "is required" })
+      .max(max, { error: `must be at most ${max} characters` }),
+  );
+
+/** Optional multi-line text of a form, trimmed (a mission's description, a note). */
+export const optionalMultiLineTextSchema = (max: number) =>
+  withTextRule(
+    z
+      .string({ error: "must be text" })
+      .trim()
+      .max(max, { error: `must be at most ${max} characters` }),
+    { multiLine: true },
+  );
 
 // ---------------------------------------------------------------- rules that relate fields
 

@@ -1,13 +1,17 @@
 import { z } from "zod";
 import { REVIEW_DECISIONS } from "@/lib/review";
+import { INT4_MAX, paramTextSchema, withTextRule } from "./fields";
 
 /** Request bodies and queries of the review API and the notification settings form. */
 
 const revisionNumber = z
   .number({ error: "must be a revision number" })
   .int("must be a whole number")
-  .min(1, "must be 1 or more");
-const note = z.string({ error: "must be text" }).trim().max(2000, "must be at most 2000 characters");
+  .min(1, "must be 1 or more")
+  .max(INT4_MAX, `must be ${INT4_MAX} or less`);
+const note = withTextRule(z.string({ error: "must be text" }).trim().max(2000, "must be at most 2000 characters"), {
+  multiLine: true,
+});
 
 export const submitReviewSchema = z.strictObject({
   /** The revision the caller saw; refused with 409 when the plan has moved on since. */
@@ -26,11 +30,14 @@ export const decideReviewSchema = z
       ctx.addIssue({ code: "custom", path: ["note"], message: "say which changes are needed" });
   });
 
-const reason = z
-  .string({ error: "must be text" })
-  .trim()
-  .min(3, "give the reason for accepting this finding (3 characters or more)")
-  .max(2000, "must be at most 2000 characters");
+const reason = withTextRule(
+  z
+    .string({ error: "must be text" })
+    .trim()
+    .min(3, "give the reason for accepting this finding (3 characters or more)")
+    .max(2000, "must be at most 2000 characters"),
+  { multiLine: true },
+);
 
 export const createWaiverSchema = z.strictObject({
   findingId: z.uuid({ error: "must be the id of a finding" }),
@@ -39,18 +46,17 @@ export const createWaiverSchema = z.strictObject({
 
 export const updateWaiverSchema = z.strictObject({
   reason,
-  version: z.number({ error: "must be the waiver's version" }).int().min(1),
+  version: z.number({ error: "must be the waiver's version" }).int().min(1).max(INT4_MAX),
 });
 
 export const createCommentSchema = z.strictObject({
-  body: z
-    .string({ error: "must be text" })
-    .trim()
-    .min(1, "write something")
-    .max(5000, "must be at most 5000 characters"),
+  body: withTextRule(
+    z.string({ error: "must be text" }).trim().min(1, "write something").max(5000, "must be at most 5000 characters"),
+    { multiLine: true },
+  ),
   /** Defaults to the newest revision. */
   revision: revisionNumber.optional(),
-  channelKey: z.string().trim().min(1, "must not be empty").max(200).optional(),
+  channelKey: withTextRule(z.string().trim().min(1, "must not be empty").max(200)).optional(),
   findingId: z.uuid({ error: "must be the id of a finding" }).optional(),
 });
 
@@ -70,8 +76,8 @@ const day = z
 export const auditQuerySchema = z
   .object({
     mission: z.uuid({ error: "must be a mission id" }).optional(),
-    person: z.string().trim().min(1).max(200).optional(),
-    action: z.string().trim().min(1).max(100).optional(),
+    person: paramTextSchema(200).trim().min(1).optional(),
+    action: paramTextSchema(100).trim().min(1).optional(),
     from: day.optional(),
     to: day.optional(),
   })

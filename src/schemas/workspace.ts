@@ -26,6 +26,8 @@ import {
   laserShape,
   lockShape,
   MAX_REACH_INTERVALS,
+  optionalMultiLineTextSchema,
+  paramTextSchema,
   requiredTextSchema,
   resonatorShape,
   rowIdSchema,
@@ -47,7 +49,7 @@ export const intervalGHzSchema = z
 export const missionCreateSchema = z
   .object({
     name: requiredTextSchema(200),
-    description: z.string().trim().max(4000, { error: "must be at most 4000 characters" }).optional(),
+    description: optionalMultiLineTextSchema(4000).optional(),
   })
   .strict();
 export type MissionCreateInput = z.infer<typeof missionCreateSchema>;
@@ -201,9 +203,9 @@ const numberParam = (what: z.ZodNumber) =>
 
 export const findingsQuerySchema = z.object({
   severity: z.enum(["error", "warning", "info"], { error: "must be error, warning or info" }).optional(),
-  chain: z.string().min(1).optional(),
-  channel: z.string().min(1).optional(),
-  code: z.string().min(1).optional(),
+  chain: paramTextSchema(200).optional(),
+  channel: paramTextSchema(200).optional(),
+  code: paramTextSchema(200).optional(),
 });
 export type FindingsQuery = z.infer<typeof findingsQuerySchema>;
 
@@ -216,17 +218,24 @@ export const tuningMapQuerySchema = z.object({
 });
 export type TuningMapQuery = z.infer<typeof tuningMapQuerySchema>;
 
-export const channelsUploadQuerySchema = z.object({ apply: flag });
-
-/** POST …/plan: `baseRevision`, when given, is the revision the document was read at (stale → 409). */
-export const planImportQuerySchema = z.object({ baseRevision: numberParam(r.count(1)).optional() });
-
 export const detectorResponseQuerySchema = z.object({
   detectorId: rowIdSchema,
   dropDB: numberParam(r.positive()).default(3),
   apply: flag,
 });
 export type DetectorResponseQuery = z.infer<typeof detectorResponseQuerySchema>;
+
+/** The page of a channel-list preview: `?offset=&limit=` (rows of the file, in file order). */
+export const PREVIEW_PAGE_MAX = 1000;
+export const channelsUploadQuerySchema = z.object({
+  apply: flag,
+  offset: numberParam(r.countBetween(0, 1_000_000)).default(0),
+  limit: numberParam(r.countBetween(1, PREVIEW_PAGE_MAX)).default(200),
+});
+export type ChannelsUploadQuery = z.infer<typeof channelsUploadQuerySchema>;
+
+/** `POST …/plan?baseRevision=N`: the revision the imported document was read at (409 when the plan has moved on). */
+export const planImportQuerySchema = z.object({ baseRevision: numberParam(r.count(1)).optional() });
 
 /** Upload limits (docs/decisions/010-workspace-data.md). */
 export const UPLOAD_MAX_BYTES = 5 * 1024 * 1024;

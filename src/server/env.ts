@@ -1,5 +1,6 @@
 import "server-only";
 import { z } from "zod";
+import { trustedOriginsFrom } from "./core/request-origin";
 
 /**
  * The server's environment, validated once at first use. A missing or empty
@@ -22,9 +23,34 @@ const EnvSchema = z.object({
   HETEROLANE_AUTH_RATE_LIMIT: z.enum(["on", "off"]).optional(),
   HETEROLANE_DEV_ROUTES: z.enum(["0", "1"]).optional(),
   HETEROLANE_DEV_MAIL: z.enum(["0", "1"]).optional(),
+  HETEROLANE_TRUSTED_PROXY_HOPS: z
+    .string()
+    .regex(/^\d$/, "HETEROLANE_TRUSTED_PROXY_HOPS must be a whole number from 0 to 9")
+    .optional(),
+  HETEROLANE_TRUSTED_ORIGINS: z
+    .string()
+    .optional()
+    .refine(
+      (v) => !v || v.split(",").every((o) => URL.canParse(o.trim()) && new URL(o.trim()).origin === o.trim()),
+      "HETEROLANE_TRUSTED_ORIGINS must be a comma-separated list of origins such as https://plans.example.org",
+    ),
 });
 
 export type ServerEnv = z.infer<typeof EnvSchema>;
+
+/**
+ * The origins whose pages may send state-changing requests: the public URL
+ * (BETTER_AUTH_URL) and any listed in HETEROLANE_TRUSTED_ORIGINS. Shared by
+ * the route and action guards and better-auth's own origin check.
+ */
+export function trustedOrigins(env: ServerEnv = serverEnv()): string[] {
+  return trustedOriginsFrom(env.BETTER_AUTH_URL, env.HETEROLANE_TRUSTED_ORIGINS);
+}
+
+/** How many reverse proxies in front of the app append to X-Forwarded-For (0: none, the socket address is the client). */
+export function trustedProxyHops(env: ServerEnv = serverEnv()): number {
+  return Number(env.HETEROLANE_TRUSTED_PROXY_HOPS ?? "0");
+}
 
 let cached: ServerEnv | undefined;
 

@@ -178,16 +178,31 @@ describe("sign-up, confirmation, sign-in", () => {
     expect(await userCount(email)).toBe(0);
   });
 
-  it("the sign-up form says clearly when the e-mail address already has an account", async () => {
+  // Issue 17 reversed what this test used to assert (the form said "An account with this e-mail
+  // address already exists", which let anyone find out who has an account): the form now answers a
+  // registered address exactly as a new one, and the owner is told by mail, as through the API.
+  it("the sign-up form answers a registered address as it answers a new one, and mails the owner", async () => {
     const first = await signUp();
-    const r = await submitPageForm(new TestClient(), "/sign-up", {
+    const known = await submitPageForm(new TestClient(), "/sign-up", {
       name: "Someone Else",
       email: first.email,
       password: TEST_PASSWORD,
     });
-    expect(r.status).toBe(200);
-    expect(r.html).toContain("An account with this e-mail address already exists");
+    const fresh = uniqueEmail("fresh");
+    const unknown = await submitPageForm(new TestClient(), "/sign-up", {
+      name: "Someone Else",
+      email: fresh,
+      password: TEST_PASSWORD,
+    });
+    expect(known.status).toBe(303);
+    expect([known.status, known.location?.replace(encodeURIComponent(first.email), "ADDR")]).toEqual([
+      unknown.status,
+      unknown.location?.replace(encodeURIComponent(fresh), "ADDR"),
+    ]);
+    expect(known.html).not.toContain("already exists");
     expect(await userCount(first.email)).toBe(1);
+    const notice = await readMail(first.email, /already have a heterolane account/i);
+    expect(notice.text).toContain("/forgot-password");
   });
 
   it("a duplicate sign-up through the API creates nothing and tells the address owner by mail", async () => {

@@ -44,6 +44,8 @@ export class TestClient {
   email = "";
   name = "";
   userId = "";
+  /** The Origin this person's browser sends (the app under test; another app process for some tests). */
+  origin = BASE_URL;
 
   cookieHeader(): string {
     return [...this.cookies].map(([k, v]) => `${k}=${v}`).join("; ");
@@ -65,7 +67,7 @@ export class TestClient {
   async fetch(path: string, init: FetchInit = {}): Promise<Response> {
     const headers = new Headers(init.headers);
     if (this.cookies.size) headers.set("cookie", this.cookieHeader());
-    headers.set("origin", BASE_URL);
+    headers.set("origin", this.origin);
     let body = init.body;
     if (init.json !== undefined) {
       headers.set("content-type", "application/json");

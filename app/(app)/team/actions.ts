@@ -2,7 +2,7 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { z } from "zod";
-import { ChangeRoleSchema, InviteSchema, MemberIdSchema } from "@/schemas/auth";
+import { ChangeRoleSchema, InvitationIdSchema, InviteSchema, MemberIdSchema } from "@/schemas/auth";
 import { ANY_MEMBER, formAction, stateAction, type ActionState } from "@/server/core";
 import { cancelInvitation, changeMemberRole, inviteMember, leaveTeam, removeMember } from "@/server/team/service";
 
@@ -39,7 +39,7 @@ export const cancelInvitationAction = stateAction(
   {
     access: { invitation: ["cancel"] },
     what: "cancel invitations",
-    schema: z.object({ invitationId: z.string({ error: "Invitation is missing." }).min(1, "Invitation is missing.") }),
+    schema: InvitationIdSchema,
   },
   async ({ actor, headers, value }) => {
     await cancelInvitation(actor, headers, value);

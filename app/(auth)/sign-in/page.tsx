@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { SignInForm } from "@/components/auth/forms";
+import { safeNext } from "@/server/auth/errors";
 import { signInAction } from "../actions";
 
 export const metadata: Metadata = { title: "Sign in" };
@@ -10,7 +11,9 @@ export default async function SignInPage({
 }: {
   searchParams: Promise<Record<string, string | undefined>>;
 }) {
-  const { next, email, reset } = await searchParams;
+  const { email, reset } = await searchParams;
+  // Only a path of this site is carried on (anything else is dropped: no open redirect).
+  const next = safeNext((await searchParams).next, "") || undefined;
   return (
     <>
       <h1 className="mb-5 text-2xl font-semibold tracking-tight">Sign in</h1>

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { SignUpForm } from "@/components/auth/forms";
+import { safeNext } from "@/server/auth/errors";
 import { signUpAction } from "../actions";
 
 export const metadata: Metadata = { title: "Create an account" };
@@ -10,7 +11,9 @@ export default async function SignUpPage({
 }: {
   searchParams: Promise<Record<string, string | undefined>>;
 }) {
-  const { next, email } = await searchParams;
+  const { email } = await searchParams;
+  // Only a path of this site is carried on (anything else is dropped: no open redirect).
+  const next = safeNext((await searchParams).next, "") || undefined;
   return (
     <>
       <h1 className="mb-1 text-2xl font-semibold tracking-tight">Create an account</h1>

@@ -1,7 +1,6 @@
-import Papa from "papaparse";
 import { parseChannelNotation } from "@/lib/optics";
 import { channelSchema, type ChannelInput } from "@/schemas/workspace";
-import { readCsv, readNumber, type FileIssue } from "./internals/csv";
+import { readCsv, readCsvHeader, readNumber, type FileIssue } from "./internals/csv";
 import {
   BLANK_ALLOWED,
   CHANNEL_COLUMNS,
@@ -22,7 +21,9 @@ export type ChannelCsvParse = { ok: true; rows: ChannelCsvRow[]; valid: boolean 
 
 /**
  * Reads a channel list CSV whose header names the channel fields
- * (CHANNEL_COLUMNS; `chain` holds the chain key) and validates every row on
+ * (CHANNEL_COLUMNS; `chain` holds the chain key; matched as readCsv does,
+ * so `Center (GHz)` or `center_GHz` name centerGHz, and a semicolon file's
+ * decimal commas are read) and validates every row on
  * its own: numbers, the channel form's rules, a known chain and keys that
  * do not repeat within the file. File-level problems (empty, not CSV,
  * missing or unknown columns, too many rows) refuse the whole file; row
@@ -36,7 +37,7 @@ export type ChannelCsvParse = { ok: true; rows: ChannelCsvRow[]; valid: boolean 
  * these cells name the text column.
  */
 export function parseChannelCsv(text: string, chains: readonly { id: string; key: string }[]): ChannelCsvParse {
-  const head = new Set(headerOf(text));
+  const head = new Set(readCsvHeader(text, COLUMN_ORDER).header);
   const hasNotation = head.has("notation");
   const hasBandwidth = head.has("bandwidth");
   const required = REQUIRED_CHANNEL_COLUMNS.filter(
@@ -52,8 +53,12 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
       key: unguardText(rec.cells.key ?? ""),
       name: unguardText(rec.cells.name ?? ""),
     };
-    const notation = rec.cells.notation ?? "";
-    const bwText = rec.cells.bandwidth ?? "";
+    // A semicolon file writes decimal commas in the text columns too ("183,31 ± 7,0").
+    const decimal = (cell: string | undefined) =>
+      table.decimalComma ? (cell ?? "").replace(/(\d),(\d)/g, "$1.$2") : (cell ?? "");
+    const cells = { ...rec.cells, notation: decimal(rec.cells.notation), bandwidth: decimal(rec.cells.bandwidth) };
+    const notation = cells.notation;
+    const bwText = cells.bandwidth;
     /** Which text column a numeric field came from (to name it in errors). */
     const source = new Map<string, string>();
     if (notation !== "") {
@@ -63,11 +68,11 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
     for (const col of NUMERIC_CHANNEL_COLUMNS) {
       const cell = rec.cells[col] ?? "";
       if (cell === "" && (BLANK_ALLOWED.has(col) || source.has(col))) continue;
-      const n = readNumber(cell);
+      const n = readNumber(cell, table.decimalComma);
       if (n.ok) input[col] = n.value;
       else errors.push({ column: col, message: n.message });
     }
-    errors.push(...readNotationCells(rec.cells, input));
+    errors.push(...readNotationCells(cells, input));
     const chainKey = unguardText(rec.cells.chain ?? "");
     const chainId = chainByKey.get(chainKey);
     if (chainKey === "") errors.push({ column: "chain", message: "is empty (a chain key is required)" });
@@ -98,13 +103,6 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
 }
 
 const COLUMN_ORDER: readonly string[] = [...CHANNEL_COLUMNS, ...NOTATION_CHANNEL_COLUMNS];
-
-/** The trimmed column names of the first row (no checks: readCsv does those). */
-function headerOf(text: string): string[] {
-  const body = text.startsWith("\uFEFF") ? text.slice(1) : text;
-  const first = Papa.parse<string[]>(body, { header: false, preview: 1, delimiter: "," }).data[0] ?? [];
-  return first.map((h) => h.trim());
-}
 
 const ONE_WAY = "give it in one column only";
 

@@ -15,8 +15,8 @@ export function parseDetectorResponse(text: string, dropDB: number): DetectorRes
   const points: ResponsePoint[] = [];
   const rowOf = new Map<number, number>();
   for (const rec of table.records) {
-    const f = readNumber(rec.cells.frequencyGHz ?? "");
-    const r = readNumber(rec.cells.responseDB ?? "");
+    const f = readNumber(rec.cells.frequencyGHz ?? "", table.decimalComma);
+    const r = readNumber(rec.cells.responseDB ?? "", table.decimalComma);
     if (!f.ok) issues.push({ row: rec.row, column: "frequencyGHz", message: f.message });
     else if (f.value < 0) issues.push({ row: rec.row, column: "frequencyGHz", message: "must be 0 or more" });
     else if (rowOf.has(f.value))

@@ -17,7 +17,8 @@ export type TuningMapParse = ({ ok: true } & TuningMapPreview) | { ok: false; is
  * Reads a tuning map CSV: a header row with an `offsetGHz` column (the
  * measured laser-pair offset ν_LO − ν_c, one per row; other columns such as
  * setpoints are ignored) and merges the offsets closer than `gapMHz` into
- * reach intervals. A blank offset marks a setpoint with no measurement and
+ * reach intervals (the file as spreadsheets write it: see readCsv — a
+ * semicolon file with decimal commas, `Offset (GHz)` for the column). A blank offset marks a setpoint with no measurement and
  * is listed in `rejectedRows`; anything else that is not a number is an issue
  * naming its row and column, and the whole file is refused.
  */
@@ -33,7 +34,7 @@ export function parseTuningMap(text: string, gapMHz: number): TuningMapParse {
       rejectedRows.push({ row: rec.row, message: "no measured offset" });
       continue;
     }
-    const n = readNumber(cell);
+    const n = readNumber(cell, table.decimalComma);
     if (!n.ok) issues.push({ row: rec.row, column: "offsetGHz", message: n.message });
     else points.push(n.value);
   }

@@ -7,7 +7,8 @@ import { apiKey } from "@better-auth/api-key";
 import { db } from "@db/client";
 import * as schema from "@db/schema";
 import { ac, roles } from "@/lib/permissions";
-import { serverEnv } from "@/server/env";
+import { CLIENT_ADDRESS_HEADER } from "@/server/core/client-address";
+import { serverEnv, trustedOrigins } from "@/server/env";
 import { listTeamsOf } from "./queries";
 import { existingAccountMail, invitationMail, resetPasswordMail, sendMail, verificationMail } from "@/server/mail";
 import { membershipAudit } from "@/server/team/membership-audit";
@@ -28,6 +29,14 @@ export const auth = betterAuth({
   baseURL: env.BETTER_AUTH_URL,
   secret: env.BETTER_AUTH_SECRET,
   database: drizzleAdapter(db, { provider: "pg", schema }),
+  // Pages of these origins may call the auth API (better-auth refuses others with INVALID_ORIGIN).
+  trustedOrigins: trustedOrigins(env),
+  advanced: {
+    // The client address as the server core decided it from the socket and the trusted-proxy
+    // setting (src/server/core/client-address.ts), for rate limits and session records;
+    // never a header the client wrote.
+    ipAddress: { ipAddressHeaders: [CLIENT_ADDRESS_HEADER] },
+  },
   emailAndPassword: {
     enabled: true,
     minPasswordLength: PASSWORD_MIN_LENGTH,

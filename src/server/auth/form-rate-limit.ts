@@ -1,15 +1,27 @@
 import "server-only";
-import { randomBytes } from "node:crypto";
+import { createHash } from "node:crypto";
 import { sql } from "drizzle-orm";
 import { db } from "@db/client";
+import { clientAddress } from "@/server/core/client-address";
 import { serverEnv } from "@/server/env";
 
 /**
- * Rate limit for the auth forms' server actions. better-auth limits requests
- * that reach its HTTP handler, but server actions call `auth.api` directly,
- * which skips that check; this applies the same kind of fixed-window limit,
- * in the same `rate_limit` table (so it holds across app processes), keyed by
- * client address and form. Off when HETEROLANE_AUTH_RATE_LIMIT=off.
+ * Heterolane's own rate limits, beside better-auth's (which count requests
+ * to its HTTP handler per client address and path):
+ *
+ * - the auth forms' server actions, per client address and form (server
+ *   actions call `auth.api` directly, which skips better-auth's check);
+ * - sign-in per account, whichever way it comes (the form, or the HTTP API
+ *   through app/api/auth/[...all]), so that guesses from many addresses
+ *   against one account are limited too (OWASP Authentication Cheat Sheet,
+ *   "Protect against automated attacks": limit per account as well as per
+ *   source).
+ *
+ * The client address is the one the server core decided from the socket and
+ * the trusted-proxy setting (src/server/core/client-address.ts), never a
+ * header the client chose. Counters live in PostgreSQL (`attempt_limits`),
+ * one fixed window per key, so the limits hold across app processes. Off
+ * when HETEROLANE_AUTH_RATE_LIMIT=off (tests of other things).
  */
 export const FORM_LIMITS = {
   "sign-in": { windowSec: 60, max: 10 },
@@ -20,27 +32,39 @@ export const FORM_LIMITS = {
 } as const;
 export type LimitedForm = keyof typeof FORM_LIMITS;
 
-/** The client address as the app server sees it (first x-forwarded-for entry), or "unknown". */
-export function clientAddress(h: Headers): string {
-  const fwd = h.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return fwd || h.get("x-real-ip")?.trim() || "unknown";
+/** Sign-in attempts per account, from any address and any way: 10 per 15 minutes. */
+export const ACCOUNT_SIGN_IN_LIMIT = { windowSec: 15 * 60, max: 10 } as const;
+
+export { clientAddress };
+
+/**
+ * Counts one attempt under `key` in a fixed window; returns the seconds to
+ * wait when over the limit, or 0 when allowed. One statement, so concurrent
+ * attempts (from any process) are counted exactly.
+ */
+export async function consumeAttempt(key: string, limit: { windowSec: number; max: number }): Promise<number> {
+  if (serverEnv().HETEROLANE_AUTH_RATE_LIMIT === "off") return 0;
+  const now = Date.now();
+  const windowMs = limit.windowSec * 1000;
+  const result = await db.execute<{ count: number; window_start: string }>(sql`
+    insert into attempt_limits (key, count, window_start)
+    values (${key}, 1, ${now})
+    on conflict (key) do update set
+      count = case when attempt_limits.window_start <= ${now - windowMs} then 1 else attempt_limits.count + 1 end,
+      window_start = case when attempt_limits.window_start <= ${now - windowMs} then ${now} else attempt_limits.window_start end
+    returning count, window_start`);
+  const row = result.rows[0];
+  if (!row || row.count <= limit.max) return 0;
+  return Math.max(1, Math.ceil((Number(row.window_start) + windowMs - now) / 1000));
 }
 
-/** Counts one attempt; returns the seconds to wait when over the limit, or 0 when allowed. */
+/** Counts one attempt of an auth form from this client address. */
 export async function consumeFormAttempt(form: LimitedForm, h: Headers): Promise<number> {
-  if (serverEnv().HETEROLANE_AUTH_RATE_LIMIT === "off") return 0;
-  const { windowSec, max } = FORM_LIMITS[form];
-  const now = Date.now();
-  const windowMs = windowSec * 1000;
-  const key = `form:${form}:${clientAddress(h)}`;
-  const result = await db.execute<{ count: number; last_request: string }>(sql`
-    insert into rate_limit (id, key, count, last_request)
-    values (${randomBytes(12).toString("base64url")}, ${key}, 1, ${now})
-    on conflict (key) do update set
-      count = case when rate_limit.last_request < ${now - windowMs} then 1 else rate_limit.count + 1 end,
-      last_request = case when rate_limit.last_request < ${now - windowMs} then ${now} else rate_limit.last_request end
-    returning count, last_request`);
-  const row = result.rows[0];
-  if (!row || row.count <= max) return 0;
-  return Math.max(1, Math.ceil((Number(row.last_request) + windowMs - now) / 1000));
+  return consumeAttempt(`form:${form}:${clientAddress(h)}`, FORM_LIMITS[form]);
+}
+
+/** Counts one sign-in attempt against an account (by its address, hashed: the table holds no e-mail addresses). */
+export async function consumeAccountSignIn(email: string): Promise<number> {
+  const id = createHash("sha256").update(email.trim().toLowerCase()).digest("hex").slice(0, 32);
+  return consumeAttempt(`account:sign-in:${id}`, ACCOUNT_SIGN_IN_LIMIT);
 }

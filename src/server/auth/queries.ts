@@ -3,13 +3,7 @@ import { and, eq, sql } from "drizzle-orm";
 import { db } from "@db/client";
 import { invitation, member, organization, user } from "@db/schema";
 
-/** True when an account with this (lower-cased) e-mail address exists. */
-export async function emailIsRegistered(email: string): Promise<boolean> {
-  const rows = await db.select({ id: user.id }).from(user).where(eq(user.email, email.toLowerCase())).limit(1);
-  return rows.length > 0;
-}
-
-/** What the invitation page needs to know, whoever opens it. */
+/** What the invitation page needs to know (it shows the address only to the signed-in invitee). */
 export async function getInvitationSummary(id: string) {
   const rows = await db
     .select({

@@ -7,8 +7,12 @@ import { zodIssues } from "@/schemas/issues";
 import type { Actor } from "@/server/auth/actor";
 import type { Session } from "@/server/auth/auth";
 import { assertActor, readActor } from "@/server/auth/guard";
-import { ANY_MEMBER, type Access } from "./guard";
-import { HttpError, invalidInput, unauthorized } from "./http";
+import { ANY_MEMBER, checkOrigin, type Access } from "./guard";
+import { HttpError, invalidInput, unauthorized, unavailable } from "./http";
+import { isDatabaseUnreachable } from "./unavailable";
+
+/** A database outage becomes the form's refusal ("cannot be reached … try again"), like the routes' 503. */
+const asRefusal = (err: unknown): unknown => (isDatabaseUnreachable(err) ? unavailable() : err);
 
 /**
  * The guard of every server action under app/**\/actions.ts, the sibling of
@@ -49,7 +53,13 @@ export type ActionContext<A extends ActionAccess, S extends z.ZodType> = Who<A> 
   formData: FormData;
 };
 
+/**
+ * Who is acting, after the cross-site check: a server action is always a
+ * POST, and proxy.ts already answers a cross-site one with 403 before Next
+ * runs it; the check is repeated here so an action is safe on its own.
+ */
 async function who<A extends ActionAccess>(spec: ActionSpec<A, z.ZodType>, h: Headers): Promise<Who<A>> {
+  checkOrigin("POST", h);
   if (spec.access === "public") return { session: null, actor: null } as Who<A>;
   const read = await readActor(h);
   if (!read.session && spec.signInNext) redirect(`/sign-in?next=${encodeURIComponent(spec.signInNext)}`);
@@ -96,7 +106,8 @@ export function formAction<A extends ActionAccess, S extends z.ZodType, R extend
 ): (prev: unknown, formData: FormData) => Promise<R | SubmissionResult<string[]>> {
   return async (_prev, formData) => {
     const submission = parseWithZod(formData, { schema: spec.schema });
-    const refuse = (err: unknown) => {
+    const refuse = (thrown: unknown) => {
+      const err = asRefusal(thrown);
       if (!(err instanceof HttpError)) throw err;
       if (err.issues?.length)
         return submission.reply({ fieldErrors: Object.fromEntries(err.issues.map((i) => [i.path, [i.message]])) });
@@ -130,7 +141,8 @@ export function stateAction<A extends ActionAccess, S extends z.ZodType>(
       const caller = await who(spec, h);
       const value = parseFields(spec.schema, formData);
       return await handler({ ...caller, headers: h, value, formData });
-    } catch (err) {
+    } catch (thrown) {
+      const err = asRefusal(thrown);
       if (!(err instanceof HttpError)) throw err;
       return { error: err.issues?.length ? err.issues.map((i) => i.message).join(" ") : err.message };
     }
@@ -148,7 +160,8 @@ export function plainAction<A extends ActionAccess, S extends z.ZodType>(
       const caller = await who(spec, h);
       const value = parseFields(spec.schema, formData);
       await handler({ ...caller, headers: h, value, formData });
-    } catch (err) {
+    } catch (thrown) {
+      const err = asRefusal(thrown);
       if (!(err instanceof HttpError)) throw err;
       await spec.refused(err);
     }

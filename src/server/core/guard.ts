@@ -1,10 +1,15 @@
 import "server-only";
 import type { z } from "zod";
 import type { Permission } from "@/lib/permissions";
+import { paramTextSchema } from "@/schemas/fields";
 import { zodIssues, type Issue } from "@/schemas/issues";
 import type { Actor } from "@/server/auth/actor";
 import { requireRouteActor } from "@/server/auth/guard";
-import { errorResponse, invalidInput, readJsonBody } from "./http";
+import { trustedOrigins } from "@/server/env";
+import { DEFAULT_BODY_LIMIT, readJsonBody } from "./body";
+import { crossOrigin, errorResponse, HttpError, invalidInput } from "./http";
+import { NOT_UTF8_HEADER, notUtf8Issues } from "./percent-encoding";
+import { crossSiteReason, needsOriginCheck } from "./request-origin";
 
 /** Any member of the active team, whatever their role. */
 export const ANY_MEMBER = "any-member";
@@ -21,7 +26,11 @@ export interface RouteSpec<K extends string, B extends Schema, Q extends Schema>
   what: string;
   /** Names of the dynamic path segments (e.g. `["missionId", "id"]`), typed in the handler's `params`. */
   params?: readonly K[];
-  /** Schema of the JSON body, read (up to `bodyLimit` bytes, default 1 MB) and parsed before the handler runs. */
+  /**
+   * Schema of the JSON body, read (up to `bodyLimit` bytes, default 1 MB) and parsed before the handler runs.
+   * Without one the handler reads the body itself, through `readJsonBody` or `readUploadedFile`
+   * (the same streaming limit), after the guard's checks.
+   */
   body?: B;
   bodyLimit?: number;
   /** Schema of the query parameters (an object of strings; an empty parameter counts as absent). */
@@ -59,15 +68,22 @@ export type RouteArgs = { params?: Promise<Record<string, string | string[]>> };
  * The one route guard. Every handler under app/api (except better-auth's
  * catch-all and the health probe) is `guarded(access, spec, handler)`:
  *
- * 1. loads the caller once (the session, or on /api/v1 an API token:
+ * 1. refuses a state-changing request another site may have forged — 403
+ *    `cross-origin` (`checkOrigin`, request-origin.ts) — before reading
+ *    anything else (a request authenticated by a bearer token alone is not
+ *    checked: no page can forge it);
+ * 2. loads the caller once (the session, or on /api/v1 an API token:
  *    `readRouteCaller`) and checks `access` — 401 signed out or with a bad
  *    token, 403 with no active team or a role that may not act — before any
- *    other work;
- * 2. parses the query and the JSON body with the spec's zod schemas and
- *    answers 400 `invalid-input` with every issue of both (413 for a body
- *    above its limit, 400 `invalid-json` for malformed JSON);
- * 3. runs the handler; anything it throws becomes its JSON answer
- *    (`HttpError` → its status and body, anything else a logged 500).
+ *    other work (so a signed-out caller's body is never read);
+ * 3. checks the path parameters and parses the query and the JSON body with
+ *    the spec's zod schemas and answers 400 `invalid-input` with every issue
+ *    (415 for a body that is not JSON, 413 for a body above its limit —
+ *    declared or streamed —, 400 `invalid-encoding` for text that is not
+ *    UTF-8, 400 `invalid-json` for malformed JSON);
+ * 4. runs the handler; anything it throws becomes its JSON answer
+ *    (`HttpError` → its status and body, a database outage → 503 with
+ *    Retry-After, anything else a logged 500).
  */
 export function guarded<K extends string = never, B extends Schema = undefined, Q extends Schema = undefined>(
   access: Access,
@@ -76,6 +92,7 @@ export function guarded<K extends string = never, B extends Schema = undefined, 
 ) {
   const route = async (request: Request, args?: RouteArgs): Promise<Response> => {
     try {
+      checkOrigin(request.method, request.headers);
       const actor = await requireRouteActor(request, access === ANY_MEMBER ? undefined : access, spec.what);
       const params = await routeParams<K>(args, spec.params ?? []);
       const { body, query } = await parseInput(request, spec);
@@ -93,19 +110,74 @@ export function guarded<K extends string = never, B extends Schema = undefined, 
   return Object.assign(route, { [ROUTE_META]: { access, spec } as RouteMeta });
 }
 
+/**
+ * The cross-site check of every route (see request-origin.ts for the rule).
+ * It is one condition, `needsOriginCheck`: a state-changing method that is
+ * not authenticated by an `Authorization: Bearer` token alone.
+ */
+export function checkOrigin(method: string, headers: Headers): void {
+  if (!needsOriginCheck(method, headers)) return;
+  const reason = crossSiteReason(headers, trustedOrigins());
+  if (reason) throw crossOrigin(reason);
+}
+
+const PARAM = paramTextSchema(200);
+
+/** The path parameters, each checked with the text rule (400 naming the parameter: no NUL reaches a query). */
 async function routeParams<K extends string>(args: RouteArgs | undefined, names: readonly K[]) {
   const raw = (args?.params ? await args.params : {}) as Record<string, string | string[] | undefined>;
   const out = {} as Record<K, string>;
+  const issues: Issue[] = [];
   for (const name of names) {
     const v = raw[name];
-    out[name] = Array.isArray(v) ? v.join("/") : (v ?? "");
+    const value = Array.isArray(v) ? v.join("/") : (v ?? "");
+    const r = PARAM.safeParse(value);
+    if (!r.success) issues.push(...zodIssues(r.error).map((i) => ({ ...i, path: name })));
+    out[name] = value;
   }
+  if (issues.length) throw invalidInput(issues, "The address of this request is not valid.");
   return out;
 }
 
-/** The query parameters of a request; empty ones (as HTML forms send them) are left out. */
+/**
+ * The query parameters of a request; empty ones (as HTML forms send them)
+ * are left out. A percent-encoding that is not UTF-8 (`?chain=%FF`, or in
+ * the path) is refused with 400 `invalid-encoding` naming the parameter:
+ * the request hook marks it (percent-encoding.ts) before Next would
+ * silently substitute U+FFFD; a request that reaches the guard unmarked is
+ * checked here as well.
+ */
 export function queryOf(request: Request): Record<string, string> {
-  return Object.fromEntries([...new URL(request.url).searchParams].filter(([, v]) => v !== ""));
+  const marked = notUtf8Issues(request.headers.get(NOT_UTF8_HEADER));
+  if (marked.length)
+    throw new HttpError(400, "invalid-encoding", "The address of this request is not valid UTF-8.", marked);
+  const search = new URL(request.url).search.replace(/^\?/, "");
+  const out: Record<string, string> = {};
+  const issues: Issue[] = [];
+  for (const pair of search.split("&")) {
+    if (pair === "") continue;
+    const eq = pair.indexOf("=");
+    const rawKey = eq < 0 ? pair : pair.slice(0, eq);
+    const rawValue = eq < 0 ? "" : pair.slice(eq + 1);
+    const key = decodeComponent(rawKey);
+    const value = decodeComponent(rawValue);
+    if (key === null || value === null) {
+      issues.push({ path: key ?? rawKey.slice(0, 40), message: "is not valid UTF-8 (percent-encoding)" });
+      continue;
+    }
+    if (value !== "") out[key] = value;
+  }
+  if (issues.length)
+    throw new HttpError(400, "invalid-encoding", "The query of this request is not valid UTF-8.", issues);
+  return out;
+}
+
+function decodeComponent(s: string): string | null {
+  try {
+    return decodeURIComponent(s.replace(/\+/g, " "));
+  } catch {
+    return null;
+  }
 }
 
 async function parseInput(
@@ -121,7 +193,7 @@ async function parseInput(
   }
   let body: unknown;
   if (spec.body) {
-    const r = spec.body.safeParse(await readJsonBody(request, spec.bodyLimit));
+    const r = spec.body.safeParse(await readJsonBody(request, spec.bodyLimit ?? DEFAULT_BODY_LIMIT));
     if (r.success) body = r.data;
     else issues.push(...zodIssues(r.error));
   }

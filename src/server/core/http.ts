@@ -1,5 +1,7 @@
 import "server-only";
 import type { Issue } from "@/schemas/issues";
+import { crossOriginMessage } from "./request-origin";
+import { isDatabaseUnreachable } from "./unavailable";
 
 export type { Issue };
 
@@ -28,6 +30,20 @@ export const forbidden = (what = "do this") =>
   new HttpError(403, "forbidden", `Your role in this team does not allow you to ${what}.`);
 export const notFound = (what = "resource") => new HttpError(404, "not-found", `No such ${what}.`);
 
+/** 403 `cross-origin`: a state-changing request another site may have forged (request-origin.ts). */
+export const crossOrigin = (reason: string) => new HttpError(403, "cross-origin", crossOriginMessage(reason));
+
+/** Seconds a client should wait before retrying during a database outage. */
+export const RETRY_AFTER_SECONDS = 5;
+
+/** 503 `unavailable`: the database cannot be reached (the running transaction rolled back). */
+export const unavailable = () =>
+  new HttpError(
+    503,
+    "unavailable",
+    "The database cannot be reached right now; nothing was saved. Try again in a few seconds.",
+  );
+
 /** 400 `invalid-input` naming every rejected field. */
 export function invalidInput(issues: Issue[], message = "Some fields are not valid."): HttpError {
   return new HttpError(400, "invalid-input", message, issues);
@@ -47,6 +63,13 @@ export function staleVersion(current: unknown, what: string): HttpError {
 /** A JSON answer. */
 export const json = (body: unknown, status = 200, headers?: HeadersInit) => Response.json(body, { status, headers });
 
+/** The answer of an HttpError; a 503 tells the client when to retry. */
+export function httpErrorResponse(err: HttpError): Response {
+  const headers: Record<string, string> = { "cache-control": "no-store" };
+  if (err.status === 503) headers["retry-after"] = String(RETRY_AFTER_SECONDS);
+  return json(errorBody(err), err.status, headers);
+}
+
 /** The JSON error body of an HttpError. */
 export function errorBody(err: HttpError) {
   return {
@@ -59,25 +82,17 @@ export function errorBody(err: HttpError) {
   };
 }
 
-/** Maps any thrown value to a JSON answer; unexpected errors become a logged 500. */
+/**
+ * Maps any thrown value to a JSON answer: an HttpError to its status and
+ * body, a database outage to 503 with Retry-After (unavailable.ts),
+ * anything else to a logged 500.
+ */
 export function errorResponse(err: unknown): Response {
-  if (err instanceof HttpError) return json(errorBody(err), err.status);
+  if (err instanceof HttpError) return httpErrorResponse(err);
+  if (isDatabaseUnreachable(err)) {
+    console.error("[api] database unreachable:", (err as Error)?.message ?? err);
+    return httpErrorResponse(unavailable());
+  }
   console.error("[api] unexpected error:", err);
   return json({ error: { code: "internal", message: "Something went wrong on the server." } }, 500);
-}
-
-/** Reads a JSON body with a size limit; answers 413 above it and 400 `invalid-json` for malformed JSON. */
-export async function readJsonBody(request: Request, limitBytes = 1_000_000): Promise<unknown> {
-  const tooLarge = () => new HttpError(413, "too-large", `The body is larger than ${limitBytes} bytes.`);
-  const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > limitBytes) throw tooLarge();
-  const text = await request.text();
-  if (Buffer.byteLength(text, "utf8") > limitBytes) throw tooLarge();
-  try {
-    return JSON.parse(text);
-  } catch (e) {
-    throw new HttpError(400, "invalid-json", `The body is not valid JSON: ${(e as Error).message}`, [
-      { path: "", message: "not valid JSON" },
-    ]);
-  }
 }

@@ -5,7 +5,7 @@
  * team scope of missions, the activity log, the plan-events contract and the
  * switch of the development routes.
  */
-export { guarded, queryOf, ANY_MEMBER, type Access, type RouteSpec, type RouteContext } from "./guard";
+export { guarded, checkOrigin, queryOf, ANY_MEMBER, type Access, type RouteSpec, type RouteContext } from "./guard";
 export { formAction, stateAction, plainAction, type ActionAccess, type ActionState } from "./action";
 export {
   HttpError,
@@ -18,9 +18,15 @@ export {
   json,
   errorBody,
   errorResponse,
-  readJsonBody,
+  httpErrorResponse,
+  crossOrigin,
+  unavailable,
   type Issue,
 } from "./http";
+export { readJsonBody, readJsonText, parseJsonText, readBodyBytes, assertJsonContentType } from "./body";
+export { isDatabaseUnreachable } from "./unavailable";
+export { needsOriginCheck, isBearerOnly, crossSiteReason } from "./request-origin";
+export { clientAddress, CLIENT_ADDRESS_HEADER } from "./client-address";
 export { parseOr400, isUuid, UUID } from "./input";
 export { inTransaction, mapDbError, type Tx, type Queryable } from "./db";
 export { getMissionRow, lockMission } from "./mission-scope";

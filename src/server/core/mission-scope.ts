@@ -27,7 +27,11 @@ export async function getMissionRow(actor: Actor, missionId: string, q: Queryabl
 /**
  * Locks the mission row of the actor's team for the rest of the
  * transaction (serialising every mutation of one mission: versions and
- * revision numbers cannot race) or answers 404.
+ * revision numbers cannot race) or answers 404. The lock is `for no key
+ * update`: it excludes every other mission lock and every update of the
+ * row, but not the key-share locks that inserting rows which reference the
+ * mission takes — so a save may write its large rows before it takes the
+ * lock (stageRevision) without holding anyone up meanwhile.
  */
 export async function lockMission(tx: Tx, actor: Actor, missionId: string): Promise<Mission> {
   if (!isUuid(missionId)) throw notFound("mission");
@@ -35,7 +39,7 @@ export async function lockMission(tx: Tx, actor: Actor, missionId: string): Prom
     .select()
     .from(missions)
     .where(and(eq(missions.id, missionId), eq(missions.teamId, actor.teamId)))
-    .for("update");
+    .for("no key update");
   if (!m) throw notFound("mission");
   return m;
 }

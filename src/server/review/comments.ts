@@ -4,6 +4,7 @@ import { z } from "zod";
 import { db } from "@db/client";
 import { findings, planRevisions, reviewComments, type PlanRevision } from "@db/schema";
 import { findMentions } from "@/lib/review";
+import { paramTextSchema } from "@/schemas/fields";
 import type { Actor } from "@/server/auth/actor";
 import { writeActivity } from "@/server/core/activity";
 import { inTransaction } from "@/server/core/db";
@@ -24,7 +25,7 @@ export const commentsQuerySchema = z.object({
     .regex(/^[1-9]\d{0,8}$/, "must be a revision number (1 or more)")
     .transform(Number)
     .optional(),
-  channel: z.string().optional(),
+  channel: paramTextSchema(200).optional(),
   finding: z.string().regex(UUID, "must be the id of a finding").optional(),
 });
 export type CommentsQuery = z.output<typeof commentsQuerySchema>;

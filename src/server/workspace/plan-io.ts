@@ -1,16 +1,16 @@
 import "server-only";
-import { eq } from "drizzle-orm";
+import { eq, sql } from "drizzle-orm";
 import { db } from "@db/client";
-import { chains, channels, detectors, lasers, missions, planSettings, resonators } from "@db/schema";
+import { chains, channels, detectors, lasers, missions, planRevisions, planSettings, resonators } from "@db/schema";
 import { parsePlan, type Plan } from "@/schemas/plan";
 import type { Actor } from "@/server/auth/actor";
 import { inTransaction, type Queryable, type Tx } from "@/server/core/db";
 import { HttpError } from "@/server/core/http";
+import { unstorableIssues } from "./plan-storable";
 import { getMissionRow, lockMission } from "@/server/core/mission-scope";
 import { assemblePlan } from "./assemble";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { channelFigures } from "./mappers";
-import { getLatestRevision } from "./queries";
 
 /**
  * The `heterolane.plan/1` document of the mission's current draft. No team
@@ -21,20 +21,41 @@ export async function getPlanDocument(missionId: string, q: Queryable = db) {
   return assemblePlan(q, missionId);
 }
 
-/** The draft plan document of a mission of the actor's team (404 otherwise). */
+/** The number of the mission's newest revision (0 before the first). */
+export async function latestRevisionNumber(missionId: string, q: Queryable = db): Promise<number> {
+  const [row] = await q
+    .select({ max: sql<number | null>`max(${planRevisions.number})` })
+    .from(planRevisions)
+    .where(eq(planRevisions.missionId, missionId));
+  return Number(row?.max ?? 0);
+}
+
+/**
+ * The draft plan document of a mission of the actor's team (404 otherwise)
+ * and the number of the revision it is (to send back with an import).
+ */
 export async function exportPlanDocument(actor: Actor, missionId: string) {
   const m = await getMissionRow(actor, missionId);
-  return assemblePlan(db, m.id);
+  // One snapshot: the document and its revision number are read in one transaction.
+  return inTransaction(async (tx) => ({
+    plan: await assemblePlan(tx, m.id),
+    revision: await latestRevisionNumber(m.id, tx),
+  }));
 }
 
 /**
  * Replaces the draft of a mission with a plan document (validated first:
- * an invalid document answers 400 `invalid-plan` with every issue and
- * changes nothing) and stores the result as a new revision. The plan's
- * name becomes the mission's name, so exporting gives the same document.
- * With `baseRevision` (the revision the document was read at), a mission
- * whose latest revision is another answers 409 `stale-version` naming the
- * current revision, and nothing is imported.
+ * an invalid document, or one the database cannot store, answers 400
+ * `invalid-plan` with every issue and changes nothing) and stores the
+ * result as a new revision. The plan's name becomes the mission's name, so
+ * exporting gives the same document.
+ *
+ * `opts.baseRevision` is the revision the caller's document replaces (the
+ * `x-heterolane-revision` of its export, or the revision it last read):
+ * when the plan has moved on since, the import answers 409 `stale-version`
+ * with the current revision number and changes nothing, so no concurrent
+ * edit is silently overwritten. Without it the import replaces whatever is
+ * there (as before; for scripts that own the mission).
  */
 export async function importPlanDocument(
   actor: Actor,
@@ -45,10 +66,13 @@ export async function importPlanDocument(
   const parsed = parsePlan(body);
   if (!parsed.ok)
     throw new HttpError(400, "invalid-plan", "The plan document is not valid; nothing was imported.", parsed.issues);
+  const unstorable = unstorableIssues(parsed.plan);
+  if (unstorable.length)
+    throw new HttpError(400, "invalid-plan", "The plan document cannot be stored; nothing was imported.", unstorable);
   return inTransaction(async (tx) => {
     await lockMission(tx, actor, missionId);
     if (opts.baseRevision !== undefined) {
-      const latest = (await getLatestRevision(missionId, tx))?.number ?? 0;
+      const latest = await latestRevisionNumber(missionId, tx);
       if (latest !== opts.baseRevision)
         throw new HttpError(
           409,

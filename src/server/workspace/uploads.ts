@@ -1,11 +1,13 @@
 import "server-only";
 import { createHash } from "node:crypto";
-import { and, eq, sql } from "drizzle-orm";
+import { and, eq } from "drizzle-orm";
 import { db } from "@db/client";
-import { chains, channels, detectors, lasers, uploads } from "@db/schema";
-import { decodeUtf8, parseChannelCsv, parseDetectorResponse, parseTuningMap, type FileIssue } from "@/lib/imports";
+import { detectors, lasers, uploads } from "@db/schema";
+import { decodeUtf8, parseDetectorResponse, parseTuningMap, type FileIssue } from "@/lib/imports";
+import { textProblem } from "@/schemas/fields";
 import { UPLOAD_MAX_BYTES, type DetectorResponseQuery, type TuningMapQuery } from "@/schemas/workspace";
 import type { Actor } from "@/server/auth/actor";
+import { readBodyBytes } from "@/server/core/body";
 import { inTransaction, type Tx } from "@/server/core/db";
 import { HttpError, notFound, type Issue } from "@/server/core/http";
 import { getMissionRow, lockMission } from "@/server/core/mission-scope";
@@ -26,8 +28,9 @@ const MULTIPART_SLACK = 64 * 1024;
 /**
  * Reads the multipart/form-data field `file` of an upload with a hard size
  * limit: a declared or streamed body above the limit answers 413 without
- * buffering it all. Wrong content type, a missing field, a file that is not
- * CSV by name or type answer 400.
+ * buffering it all (the core's one body reader). Wrong content type, a
+ * missing field, a file that is not CSV by name or type, a file name with
+ * control characters answer 400.
  */
 export async function readUploadedFile(request: Request): Promise<UploadedFile> {
   const type = request.headers.get("content-type") ?? "";
@@ -36,26 +39,16 @@ export async function readUploadedFile(request: Request): Promise<UploadedFile> 
       { path: "file", message: "missing (the request is not multipart/form-data)" },
     ]);
   const limit = UPLOAD_MAX_BYTES + MULTIPART_SLACK;
-  const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > limit) throw tooLarge();
-  const chunks: Uint8Array[] = [];
-  let total = 0;
-  if (request.body) {
-    const reader = request.body.getReader();
-    for (;;) {
-      const { done, value } = await reader.read();
-      if (done) break;
-      total += value.byteLength;
-      if (total > limit) {
-        await reader.cancel().catch(() => undefined);
-        throw tooLarge();
-      }
-      chunks.push(value);
-    }
+  let bytes: Uint8Array;
+  try {
+    bytes = await readBodyBytes(request, limit, "file");
+  } catch (e) {
+    if (e instanceof HttpError && e.status === 413) throw tooLarge();
+    throw e;
   }
   let form: FormData;
   try {
-    form = await new Response(Buffer.concat(chunks), { headers: { "content-type": type } }).formData();
+    form = await new Response(new Uint8Array(bytes), { headers: { "content-type": type } }).formData();
   } catch {
     throw new HttpError(400, "invalid-input", "The multipart body could not be read.", [
       { path: "file", message: "malformed multipart/form-data" },
@@ -66,6 +59,11 @@ export async function readUploadedFile(request: Request): Promise<UploadedFile> 
     throw new HttpError(400, "invalid-input", "No file was sent.", [{ path: "file", message: "is required" }]);
   if (file.size > UPLOAD_MAX_BYTES) throw tooLarge();
   const name = file.name || "upload.csv";
+  const nameProblem = textProblem(name);
+  if (nameProblem)
+    throw new HttpError(400, "invalid-input", `The file name ${nameProblem}; nothing was saved.`, [
+      { path: "file", message: `the file name ${nameProblem}` },
+    ]);
   const mime = (file.type || "").toLowerCase();
   const csvByName = /\.(csv|txt)$/i.test(name);
   const csvByType =
@@ -81,6 +79,9 @@ export async function readUploadedFile(request: Request): Promise<UploadedFile> 
   return { filename: name, bytes: Buffer.from(await file.arrayBuffer()) };
 }
 
+/** At most this many issues are listed for a refused file (the message gives the total). */
+const MAX_LISTED_ISSUES = 200;
+
 function fileIssues(issues: FileIssue[]): Issue[] {
   return issues.map((i) => ({
     path:
@@ -93,28 +94,30 @@ function fileIssues(issues: FileIssue[]): Issue[] {
   }));
 }
 
-function badFile(issues: FileIssue[], filename: string): HttpError {
+export function badFile(issues: FileIssue[], filename: string): HttpError {
   const first = issues[0];
   const where = first
     ? [first.row !== null ? `row ${first.row}` : "", first.column ? `column ${first.column}` : ""]
         .filter(Boolean)
         .join(", ")
     : "";
+  const more =
+    issues.length > MAX_LISTED_ISSUES ? ` ${issues.length} problems; the first ${MAX_LISTED_ISSUES} are listed.` : "";
   return new HttpError(
     400,
     "invalid-file",
-    `"${filename}" was not read${where ? ` (${where}: ${first?.message})` : first ? ` (${first.message})` : ""}; nothing was saved.`,
-    fileIssues(issues),
+    `"${filename}" was not read${where ? ` (${where}: ${first?.message})` : first ? ` (${first.message})` : ""}; nothing was saved.${more}`,
+    fileIssues(issues.slice(0, MAX_LISTED_ISSUES)),
   );
 }
 
-function textOf(file: UploadedFile): string {
+export function textOf(file: UploadedFile): string {
   const decoded = decodeUtf8(file.bytes);
   if (!decoded.ok) throw badFile([{ row: null, column: null, message: decoded.message }], file.filename);
   return decoded.text;
 }
 
-async function storeUpload(
+export async function storeUpload(
   tx: Tx,
   actor: Actor,
   missionId: string,
@@ -219,60 +222,5 @@ export async function uploadDetectorResponse(
       summary: `Applied detector response "${file.filename}" to detector ${det.key}: usable band ${parsed.minGHz}–${parsed.maxGHz} GHz (within ${q.dropDB} dB of the ${parsed.peakDB} dB peak).`,
     });
     return { ...detectorDto(row!), revision, preview };
-  });
-}
-
-/**
- * Channel list: preview every row with its errors, or (apply, all rows
- * valid) create or update channels by key; channels not in the file stay.
- */
-export async function uploadChannels(actor: Actor, missionId: string, apply: boolean, file: UploadedFile) {
-  const text = textOf(file);
-  return inTransaction(async (tx) => {
-    await lockMission(tx, actor, missionId);
-    const chainRows = await tx
-      .select({ id: chains.id, key: chains.key })
-      .from(chains)
-      .where(eq(chains.missionId, missionId));
-    const parsed = parseChannelCsv(text, chainRows);
-    if (!parsed.ok) throw badFile(parsed.issues, file.filename);
-    const preview = { rows: parsed.rows, valid: parsed.valid };
-    if (!apply) return preview;
-    if (!parsed.valid) {
-      const issues: FileIssue[] = parsed.rows.flatMap((r) =>
-        r.errors.map((e) => ({ row: r.row, column: e.column, message: e.message })),
-      );
-      throw badFile(issues, file.filename);
-    }
-    const existing = await tx.select().from(channels).where(eq(channels.missionId, missionId)).for("update");
-    const byKey = new Map(existing.map((c) => [c.key, c]));
-    const [{ next } = { next: 0 }] = await tx
-      .select({ next: sql<number>`coalesce(max(${channels.position}), -1) + 1` })
-      .from(channels)
-      .where(eq(channels.missionId, missionId));
-    let position = Number(next);
-    let created = 0;
-    let updated = 0;
-    for (const r of parsed.rows) {
-      const { chain: _chainKey, ...input } = r.channel!;
-      const old = byKey.get(input.key);
-      if (old) {
-        await tx
-          .update(channels)
-          .set({ ...input, version: old.version + 1, updatedAt: new Date() })
-          .where(eq(channels.id, old.id));
-        updated++;
-      } else {
-        await tx.insert(channels).values({ ...input, missionId, position: position++ });
-        created++;
-      }
-    }
-    await storeUpload(tx, actor, missionId, "channels", file);
-    const revision = await saveAndCheck(tx, missionId, actor, {
-      action: "upload",
-      entity: "channels",
-      summary: `Applied channel list "${file.filename}": ${created} added, ${updated} updated.`,
-    });
-    return { ...preview, created, updated, revision };
   });
 }

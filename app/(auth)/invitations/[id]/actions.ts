@@ -1,14 +1,10 @@
 "use server";
 import { redirect } from "next/navigation";
-import { z } from "zod";
+import { InvitationIdSchema } from "@/schemas/auth";
 import { stateAction, type ActionState } from "@/server/core";
 import { acceptInvitation, declineInvitation } from "@/server/team/service";
 
 export type InvitationActionState = ActionState;
-
-const InvitationIdSchema = z.object({
-  invitationId: z.string({ error: "The invitation is missing." }).min(1, "The invitation is missing."),
-});
 
 /** Accepts the invitation as the signed-in person, makes its team active and opens its missions. */
 export const acceptInvitationAction = stateAction(

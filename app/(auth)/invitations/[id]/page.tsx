@@ -4,6 +4,7 @@ import Link from "next/link";
 import { ActionButton } from "@/components/team/team-forms";
 import { auth } from "@/server/auth/auth";
 import { getInvitationSummary } from "@/server/auth/queries";
+import { textProblem } from "@/schemas/fields";
 import { signOutAction } from "../../../(app)/actions";
 import { acceptInvitationAction, declineInvitationAction } from "./actions";
 
@@ -14,10 +15,14 @@ const button = "inline-block rounded bg-ink px-4 py-2 text-sm font-medium text-w
 /**
  * Where an invitation e-mail points. Every state gets a plain page: unknown,
  * already answered, cancelled, expired, for someone else, or ready to accept.
+ * The invited address is shown only to the person signed in with it: the
+ * link alone (forwarded, or left in a browser history) does not tell who
+ * was invited.
  */
 export default async function InvitationPage({ params }: { params: Promise<{ id: string }> }) {
   const { id } = await params;
-  const inv = await getInvitationSummary(id);
+  // An id that cannot be an invitation's (control characters, absurd length) names none.
+  const inv = textProblem(id) || id.length > 200 ? null : await getInvitationSummary(id);
   const here = `/invitations/${encodeURIComponent(id)}`;
 
   if (!inv) {
@@ -54,28 +59,31 @@ export default async function InvitationPage({ params }: { params: Promise<{ id:
   if (inv.expiresAt < new Date()) {
     return (
       <Notice title="This invitation has expired" state="expired">
-        Invitations are valid for 48 hours. Ask {inv.inviterName} to invite {inv.email} to {inv.teamName} again.
+        Invitations are valid for 48 hours. Ask {inv.inviterName} to invite you to {inv.teamName} again.
       </Notice>
     );
   }
 
   const session = await auth.api.getSession({ headers: await headers() });
+  const isInvitee = !!session && session.user.email.toLowerCase() === inv.email.toLowerCase();
   const intro = (
     <p className="mb-5 text-sm leading-relaxed">
-      {inv.inviterName} invited <strong>{inv.email}</strong> to join <strong>{inv.teamName}</strong> as{" "}
-      <strong>{inv.role}</strong>.
+      {inv.inviterName} invited {isInvitee ? <strong>{inv.email}</strong> : "an e-mail address"} to join{" "}
+      <strong>{inv.teamName}</strong> as <strong>{inv.role}</strong>.
     </p>
   );
 
   if (!session) {
-    const q = `next=${encodeURIComponent(here)}&email=${encodeURIComponent(inv.email)}`;
+    const q = `next=${encodeURIComponent(here)}`;
     return (
       <>
         <h1 className="mb-3 text-2xl font-semibold tracking-tight" data-invitation-state="signed-out">
           Join {inv.teamName}
         </h1>
         {intro}
-        <p className="mb-5 text-sm text-ink-soft">Sign in with that address, or create an account for it, to accept.</p>
+        <p className="mb-5 text-sm text-ink-soft">
+          Sign in with the address the invitation was sent to, or create an account for it, to accept.
+        </p>
         <div className="flex gap-3">
           <Link href={`/sign-in?${q}`} className={button}>
             Sign in
@@ -88,7 +96,7 @@ export default async function InvitationPage({ params }: { params: Promise<{ id:
     );
   }
 
-  if (session.user.email.toLowerCase() !== inv.email.toLowerCase()) {
+  if (!isInvitee) {
     return (
       <>
         <h1 className="mb-3 text-2xl font-semibold tracking-tight" data-invitation-state="other-account">
@@ -96,7 +104,8 @@ export default async function InvitationPage({ params }: { params: Promise<{ id:
         </h1>
         {intro}
         <p className="mb-5 text-sm">
-          You are signed in as <strong>{session.user.email}</strong>. Sign out, then sign in as {inv.email}.
+          You are signed in as <strong>{session.user.email}</strong>. Sign out, then sign in with the address the
+          invitation was sent to.
         </p>
         <form action={signOutAction}>
           <button type="submit" className={button}>

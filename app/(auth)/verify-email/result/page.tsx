@@ -18,7 +18,8 @@ export default async function VerifyResultPage({
 }: {
   searchParams: Promise<Record<string, string | undefined>>;
 }) {
-  const { error, next } = await searchParams;
+  const { error } = await searchParams;
+  const next = safeNext((await searchParams).next, "") || undefined;
   const session = await auth.api.getSession({ headers: await headers() });
   const link = "inline-block rounded bg-ink px-4 py-2 text-sm font-medium text-white";
 
@@ -63,7 +64,7 @@ export default async function VerifyResultPage({
         Each link works once. If you opened it before, your address is already confirmed: sign in to continue. If you
         cannot sign in, ask for a new link from the sign-in page.
       </p>
-      <Link href={next ? `/sign-in?next=${encodeURIComponent(safeNext(next))}` : "/sign-in"} className={link}>
+      <Link href={next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in"} className={link}>
         Sign in
       </Link>
     </>

@@ -1,13 +1,17 @@
 import type { Metadata } from "next";
-import { requireDevRoutes } from "@/server/core/dev-routes";
+import { requireDevRoutes, requireLoopbackClient } from "@/server/core/dev-routes";
 import { listCapturedMail } from "@/server/mail/captured";
 
 export const metadata: Metadata = { title: "Captured e-mail (development)" };
 export const dynamic = "force-dynamic";
 
-/** Messages caught by the local mail catcher, newest first. A development route (see the `(dev)` layout). */
+/**
+ * Messages caught by the local mail catcher, newest first. A development
+ * route (see the `(dev)` layout), answered only to clients on this machine.
+ */
 export default async function DevMailPage() {
   requireDevRoutes();
+  await requireLoopbackClient();
   const mails = await listCapturedMail(50);
   return (
     <main className="mx-auto max-w-4xl px-4 py-8">

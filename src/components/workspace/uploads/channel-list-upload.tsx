@@ -10,14 +10,18 @@ import { formatGHz } from "../format";
 import { buttonClass, Card } from "../ui";
 import { FileInput, Progress, useUpload } from "./upload-parts";
 
+/** The preview answers one page of rows (the first 200) with the counts of the whole file. */
+type PagedPreview = ChannelUploadPreview & { total?: number; invalidRows?: number; firstInvalidRows?: number[] };
+
 /** A channel list CSV: every row previewed with its problems; applied only when all rows are valid. */
 export function ChannelListUpload({ missionId }: { missionId: string }) {
   const qc = useQueryClient();
   const [file, setFile] = useState<File | null>(null);
-  const [preview, setPreview] = useState<ChannelUploadPreview | null>(null);
+  const [preview, setPreview] = useState<PagedPreview | null>(null);
   const { phase, setPhase, run } = useUpload();
   const url = (apply: boolean) => `${api.collection(missionId, "uploads/channels")}?apply=${apply ? 1 : 0}`;
-  const bad = preview?.rows.filter((r) => r.errors.length > 0).length ?? 0;
+  const total = preview?.total ?? preview?.rows.length ?? 0;
+  const bad = preview?.invalidRows ?? preview?.rows.filter((r) => r.errors.length > 0).length ?? 0;
   return (
     <Card title="Channel list">
       <p className="mb-2 text-sm text-ink-soft">
@@ -49,7 +53,7 @@ export function ChannelListUpload({ missionId }: { missionId: string }) {
           type="button"
           className={buttonClass.secondary}
           disabled={!file || phase.state === "sending"}
-          onClick={async () => file && setPreview(await run<ChannelUploadPreview>(url(false), file))}
+          onClick={async () => file && setPreview(await run<PagedPreview>(url(false), file))}
         >
           Preview
         </button>
@@ -60,12 +64,22 @@ export function ChannelListUpload({ missionId }: { missionId: string }) {
       {preview ? (
         <div className="mt-3 space-y-2" data-testid="channels-preview">
           <p className="text-sm">
-            {preview.rows.length} rows,{" "}
+            {total} rows,{" "}
             {bad === 0 ? (
               <span className="text-sev-ok">all valid</span>
             ) : (
               <span className="text-sev-error">{bad} with errors</span>
             )}
+            {preview.rows.length < total ? (
+              <span className="text-ink-soft">
+                {" "}
+                (the first {preview.rows.length} shown
+                {bad > 0 && preview.firstInvalidRows?.length
+                  ? `; rows with errors: ${preview.firstInvalidRows.join(", ")}${bad > preview.firstInvalidRows.length ? ", …" : ""}`
+                  : ""}
+                )
+              </span>
+            ) : null}
           </p>
           <div className="max-h-96 overflow-auto rounded border border-ink/10">
             <table className="w-full text-sm">
@@ -114,12 +128,12 @@ export function ChannelListUpload({ missionId }: { missionId: string }) {
                 setPreview(null);
                 setPhase({
                   state: "done",
-                  message: `${preview.rows.length} channel rows applied; the plan was re-checked.`,
+                  message: `${total} channel rows applied; the plan was re-checked.`,
                 });
               }
             }}
           >
-            Apply {preview.rows.length} {preview.rows.length === 1 ? "row" : "rows"}
+            Apply {total} {total === 1 ? "row" : "rows"}
           </button>
           {!preview.valid ? (
             <p className="text-xs text-ink-soft">

@@ -4,9 +4,11 @@ import { CAN, exportPlanDocument, importPlanDocument } from "@/server/workspace"
 
 const params = ["missionId"] as const;
 
-export const GET = guarded(CAN.export, { what: "export the plan", params }, async ({ actor, params }) =>
-  json(await exportPlanDocument(actor, params.missionId)),
-);
+/** The draft plan document; `x-heterolane-revision` names the revision it is, to send back with an import. */
+export const GET = guarded(CAN.export, { what: "export the plan", params }, async ({ actor, params }) => {
+  const { plan, revision } = await exportPlanDocument(actor, params.missionId);
+  return json(plan, 200, { "x-heterolane-revision": String(revision) });
+});
 
 /**
  * Imports a plan document; it is validated by `parsePlan` (400 `invalid-plan` with every issue), not by a zod body schema.

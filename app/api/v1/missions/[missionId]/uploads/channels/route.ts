@@ -8,6 +8,6 @@ export const POST = guarded(
   async ({ request, actor, params, query }) => {
     await getMissionRow(actor, params.missionId);
     const file = await readUploadedFile(request);
-    return json(await uploadChannels(actor, params.missionId, query.apply, file));
+    return json(await uploadChannels(actor, params.missionId, query, file));
   },
 );
