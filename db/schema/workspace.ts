@@ -106,6 +106,8 @@ export const resonators = pgTable(
     position: integer("position").notNull(),
     fsrGHz: doublePrecision("fsr_ghz").notNull(),
     loadedQ: doublePrecision("loaded_q").notNull(),
+    /** Plan format 2: change of the FSR per kelvin of resonator temperature (MHz/K, signed). */
+    fsrShiftMHzPerK: doublePrecision("fsr_shift_mhz_per_k").notNull().default(0),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -156,6 +158,8 @@ export const chains = pgTable(
     pathLossDB: doublePrecision("path_loss_db").notNull(),
     carrierRejectionDB: doublePrecision("carrier_rejection_db").notNull().default(0),
     sharedIf: boolean("shared_if").notNull().default(false),
+    /** Plan format 2: ± excursion of the resonator temperature while observing (K, 0..50). */
+    temperatureExcursionK: doublePrecision("temperature_excursion_k").notNull().default(0),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -182,6 +186,12 @@ export const channels = pgTable(
     receiverK: doublePrecision("receiver_k").notNull(),
     gainStability: doublePrecision("gain_stability").notNull().default(0),
     requiredNedtK: doublePrecision("required_nedt_k"),
+    /** Plan format 2: which IF band the channel's filter passes (the nominal slot, or the occupied band slot ± D). */
+    ifFilter: text("if_filter", { enum: ["slot", "occupied"] })
+      .notNull()
+      .default("slot"),
+    /** Plan format 2: allowed error of the effective centre frequency (MHz), or null for none. */
+    centreToleranceMHz: doublePrecision("centre_tolerance_mhz"),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),

@@ -17,6 +17,8 @@ const ch = (id: string, centerGHz: number): Channel => ({
   receiverK: 5000,
   gainStability: 0,
   requiredNedtK: null,
+  ifFilter: "slot",
+  centreToleranceMHz: null,
 });
 
 describe("applyChannelEdit", () => {

@@ -4,7 +4,8 @@
  * handlers under `app/api/v1/missions/**` and the server services.
  *
  * Field names and units are exactly those of the plan document
- * (docs/plan-format.md §2 "The plan document `heterolane.plan/1`"); `key` is the plan-document id
+ * (docs/plan-format.md §2 "The plan document" and §12.1 "The new fields" of
+ * version 2); `key` is the plan-document id
  * ("LP1", "R1", "A", "wv1"). Chains reference hardware by row uuid
  * (`laserId`, `resonatorId`, `detectorId`), channels their chain by `chainId`.
  *
@@ -16,7 +17,9 @@
 import { z } from "zod";
 import {
   chainShape,
+  chainV2Shape,
   channelShape,
+  channelV2Shape,
   detectorShape,
   dsbOffsetClears,
   entityKeySchema,
@@ -30,6 +33,7 @@ import {
   paramTextSchema,
   requiredTextSchema,
   resonatorShape,
+  resonatorV2Shape,
   rowIdSchema,
   settingsShape,
 } from "./fields";
@@ -90,12 +94,17 @@ export const laserSchema = z
   .strict();
 export type LaserInput = z.infer<typeof laserSchema>;
 
-export const resonatorSchema = z
+const resonatorFields = z
   .object({
     key: entityKeySchema,
     ...resonatorShape(r),
+    ...resonatorV2Shape(r),
   })
   .strict();
+
+export const resonatorSchema = resonatorFields.extend({
+  fsrShiftMHzPerK: resonatorFields.shape.fsrShiftMHzPerK.default(FIELD_DEFAULTS.resonator.fsrShiftMHzPerK),
+});
 export type ResonatorInput = z.infer<typeof resonatorSchema>;
 
 const detectorFields = z
@@ -123,12 +132,14 @@ const chainFields = z
     resonatorId: rowIdSchema,
     detectorId: rowIdSchema,
     ...chainShape(r, { rfInput: intervalGHzSchema }),
+    ...chainV2Shape(r),
   })
   .strict();
 
 export const chainSchema = chainFields.extend({
   carrierRejectionDB: chainFields.shape.carrierRejectionDB.default(FIELD_DEFAULTS.chain.carrierRejectionDB),
   sharedIf: chainFields.shape.sharedIf.default(FIELD_DEFAULTS.chain.sharedIf),
+  temperatureExcursionK: chainFields.shape.temperatureExcursionK.default(FIELD_DEFAULTS.chain.temperatureExcursionK),
 });
 export type ChainInput = z.infer<typeof chainSchema>;
 
@@ -138,6 +149,7 @@ const channelFields = z
     name: requiredTextSchema(200),
     chainId: rowIdSchema,
     ...channelShape(r),
+    ...channelV2Shape(r),
   })
   .strict();
 
@@ -147,6 +159,8 @@ export const channelSchema = channelFields
     // The forms (unlike the plan document) let gain stability be left out: an ideal receiver.
     gainStability: channelFields.shape.gainStability.default(0),
     requiredNedtK: channelFields.shape.requiredNedtK.default(FIELD_DEFAULTS.channel.requiredNedtK),
+    ifFilter: channelFields.shape.ifFilter.default(FIELD_DEFAULTS.channel.ifFilter),
+    centreToleranceMHz: channelFields.shape.centreToleranceMHz.default(FIELD_DEFAULTS.channel.centreToleranceMHz),
   })
   .refine((v) => v.dsbOffsetGHz === null || dsbOffsetClears(v.dsbOffsetGHz, v.bandwidthMHz), {
     error: "must be more than half the bandwidth (bandwidthMHz/2000 GHz)",
@@ -157,7 +171,7 @@ export type ChannelInput = z.infer<typeof channelSchema>;
 // Updates: any subset of the fields (no defaults, so an omitted field keeps
 // its stored value) plus the version last read.
 export const laserUpdateSchema = laserSchema.partial().extend({ version: versionSchema }).strict();
-export const resonatorUpdateSchema = resonatorSchema.partial().extend({ version: versionSchema }).strict();
+export const resonatorUpdateSchema = resonatorFields.partial().extend({ version: versionSchema }).strict();
 export const detectorUpdateSchema = detectorFields.partial().extend({ version: versionSchema }).strict();
 export const chainUpdateSchema = chainFields.partial().extend({ version: versionSchema }).strict();
 export const channelUpdateSchema = channelFields.partial().extend({ version: versionSchema }).strict();

@@ -11,8 +11,11 @@ import type { Page } from "playwright-core";
 import { BASE_URL, closeTestPool, makeTeamWithRoles, type TeamWithRoles, type TestClient } from "../setup/auth-helpers";
 import { launchBrowser, screenshot } from "../setup/browser";
 
-// Example 1 of the plan format (one 10 MHz channel at the 183.31 GHz water-vapour line; NEΔT 17.92 K against 20 K).
-const PLAN = JSON.parse(readFileSync(path.join(__dirname, "../fixtures/plans/ex1-single-channel.plan.json"), "utf8"));
+// Example 1 of the plan format (one 10 MHz channel at the 183.31 GHz water-vapour line; NEΔT 17.92 K against 20 K),
+// with the lasers' drift set to 0: this test is about editing, so the operating envelope is the nominal point
+// (with the example's ±20 MHz drift the worst NEΔT over the envelope is 81.1 K, docs/plan-format.md §12).
+const EX1 = JSON.parse(readFileSync(path.join(__dirname, "../fixtures/plans/ex1-single-channel.plan.json"), "utf8"));
+const PLAN = { ...EX1, lasers: EX1.lasers.map((l: { driftMHz: number }) => ({ ...l, driftMHz: 0 })) };
 
 let team: TeamWithRoles;
 let missionId = "";

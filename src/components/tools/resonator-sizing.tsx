@@ -25,6 +25,12 @@ export interface ResonatorSizingProps {
   /** Receives the FSR and loaded Q, the two numbers a resonator entry holds. */
   onApply?: (value: ResonatorApplyValue) => void;
   applyLabel?: string;
+  /**
+   * Receives the FSR shift per kelvin of the mode pair (MHz/K, the "following
+   * the modes" figure of ADR 007), the number a resonator's
+   * `fsrShiftMHzPerK` holds.
+   */
+  onApplyFsrShift?: (mhzPerK: number) => void;
 }
 
 /**
@@ -41,6 +47,7 @@ export function ResonatorSizing({
   initialMeasuredGroupIndex,
   onApply,
   applyLabel = "Apply FSR and Q",
+  onApplyFsrShift,
 }: ResonatorSizingProps) {
   const id = useId();
   const [direction, setDirection] = useState<"fromRadius" | "fromFsr">(
@@ -256,13 +263,22 @@ export function ResonatorSizing({
           unit="MHz/K"
         />
       </div>
-      {onApply ? (
-        <ApplyButton
-          label={applyLabel}
-          disabled={!canApply}
-          onClick={() => size && q && onApply({ fsrGHz: size.fsrGHz, loadedQ: q.loadedQ })}
-        />
-      ) : null}
+      <div className="flex flex-wrap gap-2">
+        {onApply ? (
+          <ApplyButton
+            label={applyLabel}
+            disabled={!canApply}
+            onClick={() => size && q && onApply({ fsrGHz: size.fsrGHz, loadedQ: q.loadedQ })}
+          />
+        ) : null}
+        {onApplyFsrShift ? (
+          <ApplyButton
+            label="Apply FSR shift"
+            disabled={!thermal?.ok}
+            onClick={() => thermal?.ok && onApplyFsrShift(thermal.value.fsr.mhzPerKFollowingMode)}
+          />
+        ) : null}
+      </div>
 
       <Working
         formulas={[

@@ -6,11 +6,12 @@ import { ChannelNotation, DriftBudget, ReceiverNoise, ResonatorSizing, Wavelengt
 import { buttonClass } from "./ui";
 
 /** Which helper sits beside a field (see entity-specs.ts). */
-export type HelperKind = "drift" | "resonator" | "receiver" | "wavelength" | "notation";
+export type HelperKind = "drift" | "resonator" | "fsr-shift" | "receiver" | "wavelength" | "notation";
 
 const TITLE: Record<HelperKind, string> = {
   drift: "drift budget",
   resonator: "resonator sizing",
+  "fsr-shift": "resonator sizing",
   receiver: "receiver noise",
   wavelength: "wavelength and grid",
   notation: "channel notation",
@@ -53,16 +54,26 @@ export function FieldHelper({ kind, fieldName }: { kind: HelperKind; fieldName: 
           }}
         />
       );
-    } else if (kind === "resonator") {
+    } else if (kind === "resonator" || kind === "fsr-shift") {
+      const applyShift = (mhzPerK: number) => {
+        const v = Number(mhzPerK.toPrecision(4));
+        set("fsrShiftMHzPerK", v);
+        done(`FSR shift set to ${v} MHz/K`);
+      };
       body = (
         <ResonatorSizing
           initialFsrGHz={positive(values.fsrGHz) ?? 183.31}
           initialLoadedQ={positive(values.loadedQ) ?? 1e7}
-          onApply={(v) => {
-            set("fsrGHz", Number(v.fsrGHz.toPrecision(8)));
-            set("loadedQ", Number(v.loadedQ.toPrecision(6)));
-            done(`FSR and loaded Q filled in`);
-          }}
+          onApply={
+            kind === "resonator"
+              ? (v) => {
+                  set("fsrGHz", Number(v.fsrGHz.toPrecision(8)));
+                  set("loadedQ", Number(v.loadedQ.toPrecision(6)));
+                  done(`FSR and loaded Q filled in`);
+                }
+              : undefined
+          }
+          onApplyFsrShift={applyShift}
         />
       );
     } else if (kind === "receiver") {

@@ -4,6 +4,8 @@ import { readCsv, readCsvHeader, readNumber, type FileIssue } from "./internals/
 import {
   BLANK_ALLOWED,
   CHANNEL_COLUMNS,
+  ENVELOPE_CHANNEL_COLUMNS,
+  type EnvelopeChannelColumn,
   NOTATION_CHANNEL_COLUMNS,
   NUMERIC_CHANNEL_COLUMNS,
   REQUIRED_CHANNEL_COLUMNS,
@@ -17,7 +19,18 @@ export interface ChannelCsvRow {
   errors: { column: string; message: string }[];
 }
 
-export type ChannelCsvParse = { ok: true; rows: ChannelCsvRow[]; valid: boolean } | { ok: false; issues: FileIssue[] };
+export type ChannelCsvParse =
+  | {
+      ok: true;
+      rows: ChannelCsvRow[];
+      valid: boolean;
+      /**
+       * The optional columns of plan format 2 the file does not have: each
+       * row carries their default, and an update keeps the stored value.
+       */
+      keptColumns: EnvelopeChannelColumn[];
+    }
+  | { ok: false; issues: FileIssue[] };
 
 /**
  * Reads a channel list CSV whose header names the channel fields
@@ -35,6 +48,10 @@ export type ChannelCsvParse = { ok: true; rows: ChannelCsvRow[]; valid: boolean 
  * and bandwidthMHz columns may be left out, with `bandwidth` the
  * bandwidthMHz column. A row gives each quantity one way only; errors of
  * these cells name the text column.
+ *
+ * Optional `ifFilter` ("slot" or "occupied") and `centreToleranceMHz`
+ * columns give the channel fields of plan format 2 (blank: the default);
+ * `keptColumns` lists those the file leaves out.
  */
 export function parseChannelCsv(text: string, chains: readonly { id: string; key: string }[]): ChannelCsvParse {
   const head = new Set(readCsvHeader(text, COLUMN_ORDER).header);
@@ -43,7 +60,7 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
   const required = REQUIRED_CHANNEL_COLUMNS.filter(
     (c) => !(c === "centerGHz" && hasNotation) && !(c === "bandwidthMHz" && (hasNotation || hasBandwidth)),
   );
-  const table = readCsv(text, required, { allowed: [...CHANNEL_COLUMNS, ...NOTATION_CHANNEL_COLUMNS] });
+  const table = readCsv(text, required, { allowed: COLUMN_ORDER });
   if (!table.ok) return table;
   const chainByKey = new Map(chains.map((c) => [c.key, c.id]));
   const firstRowOfKey = new Map<string, number>();
@@ -72,6 +89,14 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
       if (n.ok) input[col] = n.value;
       else errors.push({ column: col, message: n.message });
     }
+    const tolerance = rec.cells.centreToleranceMHz ?? "";
+    if (tolerance !== "") {
+      const n = readNumber(tolerance, table.decimalComma);
+      if (n.ok) input.centreToleranceMHz = n.value;
+      else errors.push({ column: "centreToleranceMHz", message: n.message });
+    }
+    const filter = (rec.cells.ifFilter ?? "").trim();
+    if (filter !== "") input.ifFilter = filter;
     errors.push(...readNotationCells(cells, input));
     const chainKey = unguardText(rec.cells.chain ?? "");
     const chainId = chainByKey.get(chainKey);
@@ -99,10 +124,11 @@ export function parseChannelCsv(text: string, chains: readonly { id: string; key
     if (errors.length > 0 || !parsed.success) return { row: rec.row, errors };
     return { row: rec.row, channel: { ...parsed.data, chain: chainKey }, errors };
   });
-  return { ok: true, rows, valid: rows.every((r) => r.errors.length === 0) };
+  const keptColumns = ENVELOPE_CHANNEL_COLUMNS.filter((c) => !head.has(c));
+  return { ok: true, rows, valid: rows.every((r) => r.errors.length === 0), keptColumns };
 }
 
-const COLUMN_ORDER: readonly string[] = [...CHANNEL_COLUMNS, ...NOTATION_CHANNEL_COLUMNS];
+const COLUMN_ORDER: readonly string[] = [...CHANNEL_COLUMNS, ...ENVELOPE_CHANNEL_COLUMNS, ...NOTATION_CHANNEL_COLUMNS];
 
 const ONE_WAY = "give it in one column only";
 

@@ -9,9 +9,10 @@ import { notFound } from "@/server/core/http";
 import { channelFigures } from "./mappers";
 
 /**
- * Assembles the `heterolane.plan/1` document of a mission's current draft
- * from its rows, in stored order (position), with every optional field
- * written out. Hardware references become plan-document keys.
+ * Assembles the plan document (`heterolane.plan/2`, docs/plan-format.md
+ * §12) of a mission's current draft from its rows, in stored order
+ * (position), with every optional field written out in the key order of a
+ * parsed plan (the version 2 fields after each entity's version 1 fields). Hardware references become plan-document keys.
  */
 export async function assemblePlan(q: Queryable, missionId: string): Promise<PlanInput> {
   const [mission] = await q.select().from(missions).where(eq(missions.id, missionId));
@@ -69,7 +70,12 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       driftMHz: l.driftMHz,
       lock: { modulationMHz: l.lockModulationMHz, modulationIndex: l.lockModulationIndex, orders: l.lockOrders },
     })),
-    resonators: rs.map((r) => ({ id: r.key, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ })),
+    resonators: rs.map((r) => ({
+      id: r.key,
+      fsrGHz: r.fsrGHz,
+      loadedQ: r.loadedQ,
+      fsrShiftMHzPerK: r.fsrShiftMHzPerK,
+    })),
     detectors: ds.map((d) => ({
       id: d.key,
       minGHz: d.minGHz,
@@ -90,6 +96,7 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       pathLossDB: c.pathLossDB,
       carrierRejectionDB: c.carrierRejectionDB,
       sharedIf: c.sharedIf,
+      temperatureExcursionK: c.temperatureExcursionK,
     })),
     channels: chs.map((ch) => ({
       id: ch.key,

@@ -105,18 +105,26 @@ const WRITTEN = [
   "receiverK",
   "gainStability",
   "requiredNedtK",
+  "ifFilter",
+  "centreToleranceMHz",
 ] as const;
+
+/** The fields of plan format 2 a file without their column leaves as stored (ChannelCsvParse.keptColumns). */
+type KeptColumns = readonly ("ifFilter" | "centreToleranceMHz")[];
 
 /**
  * Writes the rows in one statement (insert, or update the row with the
  * same key); new keys are appended after the existing channels in file
- * order. Returns how many were created and updated.
+ * order. An updated row keeps its stored value of a `kept` column (a
+ * version 2 column the file does not have). Returns how many were created
+ * and updated.
  */
 export async function writeChannelRows(
   tx: Tx,
   missionId: string,
   rows: ChannelCsvRow[],
   existing: Map<string, number>,
+  kept: KeptColumns = [],
 ): Promise<{ created: number; updated: number }> {
   if (rows.length === 0) return { created: 0, updated: 0 };
   let next = existing.size ? Math.max(...existing.values()) + 1 : 0;
@@ -125,7 +133,10 @@ export async function writeChannelRows(
     return { ...input, missionId, position: existing.get(input.key) ?? next++ };
   });
   const set = Object.fromEntries(
-    WRITTEN.map((field) => [field, sql.raw(`excluded."${channels[field].name}"`)]),
+    WRITTEN.filter((field) => !(kept as readonly string[]).includes(field)).map((field) => [
+      field,
+      sql.raw(`excluded."${channels[field].name}"`),
+    ]),
   ) as Record<(typeof WRITTEN)[number], ReturnType<typeof sql.raw>>;
   const written = await tx
     .insert(channels)
@@ -154,6 +165,7 @@ export interface PreparedChannels {
   text: string;
   file: UploadedFile;
   rows: ChannelCsvRow[];
+  keptColumns: KeptColumns;
   chainsBefore: ChainKey[];
   /** The check of the plan this apply should leave, computed before the lock. */
   check: PreparedCheck | null;
@@ -161,9 +173,10 @@ export interface PreparedChannels {
 
 /**
  * The plan document the rows would leave: the draft's channels updated by
- * key, new ones appended in file order (as writeChannelRows stores them).
+ * key (keeping the kept columns' stored values), new ones appended in file
+ * order (as writeChannelRows stores them).
  */
-function planAfter(draft: Awaited<ReturnType<typeof assemblePlan>>, rows: ChannelCsvRow[]) {
+function planAfter(draft: Awaited<ReturnType<typeof assemblePlan>>, rows: ChannelCsvRow[], kept: KeptColumns) {
   const channelsAfter = [...draft.channels];
   const at = new Map(channelsAfter.map((c, i) => [c.id, i]));
   for (const r of rows) {
@@ -173,7 +186,13 @@ function planAfter(draft: Awaited<ReturnType<typeof assemblePlan>>, rows: Channe
     if (i === undefined) {
       at.set(key, channelsAfter.length);
       channelsAfter.push(doc);
-    } else channelsAfter[i] = doc;
+    } else {
+      const stored = channelsAfter[i]!;
+      channelsAfter[i] = {
+        ...doc,
+        ...Object.fromEntries(kept.map((c) => [c, (stored as Record<string, unknown>)[c]])),
+      };
+    }
   }
   return { ...draft, channels: channelsAfter };
 }
@@ -203,8 +222,8 @@ export async function prepareChannelUpload(
   );
   // The engine runs here, without the lock, on the plan the apply should leave; under the lock
   // saveAndCheck uses this result only if the plan there is exactly this one.
-  const check = prepareCheck(planAfter(await assemblePlan(db, missionId), parsed.rows));
-  return { prepared: { text, file, rows: parsed.rows, chainsBefore, check } };
+  const check = prepareCheck(planAfter(await assemblePlan(db, missionId), parsed.rows, parsed.keptColumns));
+  return { prepared: { text, file, rows: parsed.rows, keptColumns: parsed.keptColumns, chainsBefore, check } };
 }
 
 /**
@@ -229,7 +248,7 @@ export async function applyPreparedChannels(
   }
   const existing = await lockedChannelPositions(tx, missionId);
   checkChannelLimit(existing.keys(), rows, p.file.filename);
-  const { created, updated } = await writeChannelRows(tx, missionId, rows, existing);
+  const { created, updated } = await writeChannelRows(tx, missionId, rows, existing, p.keptColumns);
   await storeUpload(tx, actor, missionId, "channels", p.file);
   const revision = await saveAndCheck(
     tx,

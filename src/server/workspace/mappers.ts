@@ -4,7 +4,8 @@ import type { ChainInput, ChannelInput, DetectorInput, LaserInput, ResonatorInpu
 
 /**
  * Row ↔ API entity mapping. API entities mirror the plan document fields
- * (docs/plan-format.md §2 "The plan document") plus id, key, version and timestamps; chains name
+ * (docs/plan-format.md §2 "The plan document", §12.1 for the fields of
+ * version 2) plus id, key, version and timestamps; chains name
  * hardware by row id and channels their chain by row id.
  */
 
@@ -43,13 +44,25 @@ export const laserValues = (i: LaserInput) => ({
   lockOrders: i.lock.orders,
 });
 
-export const resonatorDto = (r: Resonator) => ({ ...stamps(r), key: r.key, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ });
+export const resonatorDto = (r: Resonator) => ({
+  ...stamps(r),
+  key: r.key,
+  fsrGHz: r.fsrGHz,
+  loadedQ: r.loadedQ,
+  fsrShiftMHzPerK: r.fsrShiftMHzPerK,
+});
 export const resonatorInputOf = (r: Resonator): ResonatorInput => ({
   key: r.key,
   fsrGHz: r.fsrGHz,
   loadedQ: r.loadedQ,
+  fsrShiftMHzPerK: r.fsrShiftMHzPerK,
 });
-export const resonatorValues = (i: ResonatorInput) => ({ key: i.key, fsrGHz: i.fsrGHz, loadedQ: i.loadedQ });
+export const resonatorValues = (i: ResonatorInput) => ({
+  key: i.key,
+  fsrGHz: i.fsrGHz,
+  loadedQ: i.loadedQ,
+  fsrShiftMHzPerK: i.fsrShiftMHzPerK,
+});
 
 export const detectorDto = (r: Detector) => ({
   ...stamps(r),
@@ -82,6 +95,7 @@ export const chainDto = (r: Chain) => ({
   pathLossDB: r.pathLossDB,
   carrierRejectionDB: r.carrierRejectionDB,
   sharedIf: r.sharedIf,
+  temperatureExcursionK: r.temperatureExcursionK,
 });
 export const chainInputOf = (r: Chain): ChainInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = chainDto(r);
@@ -101,6 +115,7 @@ export const chainValues = (i: ChainInput) => ({
   pathLossDB: i.pathLossDB,
   carrierRejectionDB: i.carrierRejectionDB,
   sharedIf: i.sharedIf,
+  temperatureExcursionK: i.temperatureExcursionK,
 });
 
 /** The measured and required quantities of a channel, in plan-document order (shared by every row ↔ plan mapping). */
@@ -115,6 +130,8 @@ export const channelFigures = (
     | "receiverK"
     | "gainStability"
     | "requiredNedtK"
+    | "ifFilter"
+    | "centreToleranceMHz"
   >,
 ) => ({
   centerGHz: c.centerGHz,
@@ -125,6 +142,8 @@ export const channelFigures = (
   receiverK: c.receiverK,
   gainStability: c.gainStability,
   requiredNedtK: c.requiredNedtK,
+  ifFilter: c.ifFilter,
+  centreToleranceMHz: c.centreToleranceMHz,
 });
 
 export const channelDto = (r: Channel) => ({
@@ -140,6 +159,8 @@ export const channelDto = (r: Channel) => ({
   receiverK: r.receiverK,
   gainStability: r.gainStability,
   requiredNedtK: r.requiredNedtK,
+  ifFilter: r.ifFilter,
+  centreToleranceMHz: r.centreToleranceMHz,
 });
 export const channelInputOf = (r: Channel): ChannelInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = channelDto(r);

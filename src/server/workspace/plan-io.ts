@@ -13,7 +13,7 @@ import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { channelFigures } from "./mappers";
 
 /**
- * The `heterolane.plan/1` document of the mission's current draft. No team
+ * The plan document (`heterolane.plan/2`) of the mission's current draft. No team
  * check: callers check access first (getMissionRow) or pass a mission they
  * already hold.
  */
@@ -147,6 +147,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               key: r.id,
               fsrGHz: r.fsrGHz,
               loadedQ: r.loadedQ,
+              fsrShiftMHzPerK: r.fsrShiftMHzPerK,
             })),
           )
           .returning({ id: resonators.id, key: resonators.key })
@@ -191,6 +192,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               pathLossDB: c.pathLossDB,
               carrierRejectionDB: c.carrierRejectionDB,
               sharedIf: c.sharedIf,
+              temperatureExcursionK: c.temperatureExcursionK,
             })),
           )
           .returning({ id: chains.id, key: chains.key })

@@ -90,6 +90,18 @@ export function chainGroups(refs: {
         },
       ],
     },
+    {
+      legend: "Operating envelope",
+      fields: [
+        {
+          name: "temperatureExcursionK",
+          label: "Resonator temperature excursion",
+          unit: "± K, 0 to 50",
+          kind: "number",
+          help: "How far the resonator temperature may wander about its set point while observing. With the laser drift it sets the envelope every verdict must hold over.",
+        },
+      ],
+    },
   ];
 }
 
@@ -103,4 +115,5 @@ export const chainDefaults = {
   pathLossDB: 3,
   carrierRejectionDB: 0,
   sharedIf: false,
+  temperatureExcursionK: 0,
 };

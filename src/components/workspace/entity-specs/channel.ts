@@ -59,6 +59,30 @@ export function channelGroups(refs: { chains: RefOption[] }): FieldGroup[] {
         },
       ],
     },
+    {
+      legend: "Operating envelope",
+      fields: [
+        {
+          name: "ifFilter",
+          label: "IF filter",
+          unit: "slot or occupied band",
+          kind: "select",
+          options: [
+            { value: "slot", label: "nominal slot" },
+            { value: "occupied", label: "occupied band (slot ± drift)" },
+          ],
+          help: "A slot filter lets LO drift slide the received band off the mode; an occupied-band filter is wider by the drift on each side, so drift moves the IF inside it instead.",
+        },
+        {
+          name: "centreToleranceMHz",
+          label: "Centre tolerance",
+          unit: "MHz; empty = none",
+          kind: "number",
+          placeholder: "no tolerance",
+          help: "Largest allowed error of the effective centre frequency over the envelope (centre-drift).",
+        },
+      ],
+    },
   ];
 }
 
@@ -73,4 +97,6 @@ export const channelDefaults = {
   receiverK: 5000,
   gainStability: 0,
   requiredNedtK: null,
+  ifFilter: "slot",
+  centreToleranceMHz: null,
 };

@@ -126,12 +126,20 @@ export function resonatorGroups(): FieldGroup[] {
           help: "Sets the mode linewidth: carrier frequency / Q (1e7 at 193.4 THz gives 19.3 MHz).",
           helper: "resonator",
         },
+        {
+          name: "fsrShiftMHzPerK",
+          label: "FSR shift per kelvin",
+          unit: "MHz/K, signed; 0 = none",
+          kind: "number",
+          help: "How the FSR moves with the resonator temperature (about −6.3 MHz/K for a LiNbO3 disc at 183 GHz). The sizing helper computes it for the mode pair.",
+          helper: "fsr-shift",
+        },
       ],
     },
   ];
 }
 
-export const resonatorDefaults = { key: "R1", fsrGHz: 183.31, loadedQ: 1e7 };
+export const resonatorDefaults = { key: "R1", fsrGHz: 183.31, loadedQ: 1e7, fsrShiftMHzPerK: 0 };
 
 export function detectorGroups(): FieldGroup[] {
   return [

@@ -13,6 +13,16 @@ export const CHANNEL_COLUMNS = [
   "requiredNedtK",
 ] as const;
 
+/**
+ * Optional columns of the fields plan format 2 adds to a channel
+ * (docs/plan-format.md §12.1): `ifFilter` ("slot" or "occupied", blank for
+ * "slot") and `centreToleranceMHz` (blank for none). The export writes them
+ * only when some channel differs from the default; a file without one of
+ * them leaves that field of an updated channel as stored.
+ */
+export const ENVELOPE_CHANNEL_COLUMNS = ["ifFilter", "centreToleranceMHz"] as const;
+export type EnvelopeChannelColumn = (typeof ENVELOPE_CHANNEL_COLUMNS)[number];
+
 export const REQUIRED_CHANNEL_COLUMNS = [
   "key",
   "name",
@@ -44,7 +54,13 @@ export const NUMERIC_CHANNEL_COLUMNS = [
 export const NOTATION_CHANNEL_COLUMNS = ["notation", "bandwidth"] as const;
 
 /** Columns whose blank cell means null (or the default 0 for gainStability). */
-export const BLANK_ALLOWED = new Set<string>(["dsbOffsetGHz", "gainStability", "requiredNedtK"]);
+export const BLANK_ALLOWED = new Set<string>([
+  "dsbOffsetGHz",
+  "gainStability",
+  "requiredNedtK",
+  "ifFilter",
+  "centreToleranceMHz",
+]);
 
 /** Text columns of the channel CSV. */
 export const TEXT_CHANNEL_COLUMNS = new Set<string>(["key", "name", "chain"]);
