@@ -4,6 +4,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { Plan } from "@/schemas/plan";
 import type { ResultDocument } from "@/lib/plan";
 import type { LaneItem } from "@/lib/lanes";
+import { EnvelopeSection } from "@/components/envelope/envelope-section";
 import { LaneChart } from "./lane-chart";
 import { LaneTable } from "./lane-table";
 import { Legend } from "./legend";
@@ -142,6 +143,7 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
         <FindingsPanel result={live.result} />
       </div>
       <ChannelFigures plan={live.plan} result={live.result} />
+      <EnvelopeSection plan={live.plan} result={live.result} />
       <details className="rounded border border-ink-faint p-3">
         <summary className="cursor-pointer text-sm font-semibold">Legend</summary>
         <div className="mt-2">
