@@ -139,7 +139,7 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
       {view === "table" ? <LaneTable model={model} /> : null}
 
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-        <DetailsPanel item={selectedLive} result={live.result} onZoom={zoomTo} />
+        <DetailsPanel item={selectedLive} plan={live.plan} result={live.result} onZoom={zoomTo} />
         <FindingsPanel result={live.result} />
       </div>
       <ChannelFigures plan={live.plan} result={live.result} />
