@@ -10,7 +10,7 @@ import { fmtNumber } from "./format";
 const WIDTH = 360;
 const PANEL = 92;
 const GAP = 30;
-const M = { left: 52, right: 12, top: 16, bottom: 34 };
+const M = { left: 52, right: 12, top: 16, bottom: 46 };
 const COLOUR = { curve: "#12343b", limit: "#b3261e", envelope: "#d7e8e4", cursor: "#a15c00" };
 
 const AXIS_LABEL = { lo: "LO shift u (MHz)", temperature: "Resonator temperature offset t (K)" } as const;
@@ -102,6 +102,7 @@ export function ChannelEnvelopePlot({
           scale={x}
           numTicks={6}
           label={AXIS_LABEL[curve.axis]}
+          labelOffset={16}
           labelProps={{ fontSize: 11, fill: "#2d545e", textAnchor: "middle" }}
           tickLabelProps={{ fontSize: 10, fill: "#12343b" }}
           stroke="#12343b"

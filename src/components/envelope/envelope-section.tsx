@@ -1,11 +1,25 @@
 "use client";
 
-import { useDeferredValue, useState } from "react";
+import { memo, useEffect, useState } from "react";
 import { temperatureMapCells } from "@/lib/lanes";
 import { envelopeCurves, temperatureMap, type ResultDocument, type TemperatureMap } from "@/lib/plan";
 import type { Plan } from "@/schemas/plan";
 import { ChannelEnvelopePlot } from "./channel-envelope-plot";
 import { TemperatureMapChart } from "./temperature-map-chart";
+
+/** The plan is redrawn here once it has not changed for this long (ms). */
+const SETTLE_MS = 250;
+
+/** `value`, or its last value until it has stayed the same for `ms`. */
+function useSettled<T>(value: T, ms: number): T {
+  const [settled, setSettled] = useState(value);
+  useEffect(() => {
+    if (settled === value) return;
+    const timer = setTimeout(() => setSettled(value), ms);
+    return () => clearTimeout(timer);
+  }, [value, settled, ms]);
+  return settled;
+}
 
 /** The last few temperature maps, keyed on the plan without the chain's LO (the map does not depend on it). */
 const MAP_CACHE = new Map<string, TemperatureMap>();
@@ -28,11 +42,15 @@ function cachedTemperatureMap(plan: Plan, chainId: string): TemperatureMap {
  * The lane view's envelope plots (docs/decisions/029): for one chain (chosen
  * here), the feasibility map over LO offset × temperature offset, and for one
  * of its channels the NEΔT and mode response against the LO shift and
- * against the temperature. Drawn from the live plan, deferred so that
- * dragging an LO stays smooth.
+ * against the temperature. Drawn from the live plan once it has settled
+ * (no change for `SETTLE_MS`), so that dragging an LO costs nothing here.
  */
 export function EnvelopeSection({ plan, result }: { plan: Plan; result: ResultDocument }) {
-  const live = useDeferredValue(plan);
+  return <EnvelopeBody plan={useSettled(plan, SETTLE_MS)} result={useSettled(result, SETTLE_MS)} />;
+}
+
+/** The section itself, re-rendered only when the settled plan or result (or a choice) changes. */
+const EnvelopeBody = memo(function EnvelopeBody({ plan: live, result }: { plan: Plan; result: ResultDocument }) {
   const [chainPick, setChainPick] = useState<string | null>(null);
   const [channelPick, setChannelPick] = useState<string | null>(null);
   const chain = live.chains.find((c) => c.id === chainPick) ?? live.chains[0];
@@ -111,4 +129,4 @@ export function EnvelopeSection({ plan, result }: { plan: Plan; result: ResultDo
       </div>
     </section>
   );
-}
+});
