@@ -14,6 +14,22 @@ import type { PlanInput } from "@/schemas/plan";
  * core channel asks for a sensitivity it cannot reach (nedt-unmet), and the
  * 325 GHz chain places its LO so that one channel's image lands inside the
  * RF input (image-response).
+ *
+ * It is a version 2 plan and tells the operating-envelope story
+ * (docs/plan-format.md §12): every resonator's FSR moves with temperature
+ * (invented figures of the order issue 11 gives for lithium niobate,
+ * −6.28 MHz/K at 183.31 GHz, scaled with the FSR) and every chain's
+ * temperature control is ±0.5 K, except:
+ *
+ * - the 183 GHz chain's laser pair drifts by ±100 MHz; its wing channels sit
+ *   600 MHz either side of the 645 MHz half-linewidth mode, so with IF
+ *   filters on their nominal slots the drift carries them past half power
+ *   (mode-detuned, nedt-unmet). Its filters pass the occupied band
+ *   (`ifFilter: "occupied"`), and with them the chain passes;
+ * - the 243 GHz window chain is only passively controlled to ±10 K, but its
+ *   outer channels meet their NEΔT only within about ±8 K: its temperature
+ *   window is too narrow for its temperature control (nedt-unmet on win-1
+ *   and win-3, negative margin).
  */
 export const DEMO_MISSION_NAME = "Demo: Aurora 12U sounder (invented)";
 export const DEMO_MISSION_DESCRIPTION =
@@ -23,7 +39,7 @@ const lock = { modulationMHz: 1500, modulationIndex: 0.2, orders: 1 };
 
 export function demoPlan(): PlanInput {
   return {
-    format: "heterolane.plan/1",
+    format: "heterolane.plan/2",
     name: DEMO_MISSION_NAME,
     settings: { guardMHz: 50, imageRejectionDB: 25, spurMaxOrder: 5, replicaLimitDB: -20 },
     lasers: [
@@ -44,7 +60,7 @@ export function demoPlan(): PlanInput {
         loPowerMW: 3,
         reach: [{ minGHz: 175, maxGHz: 195 }],
         stepMHz: 10,
-        driftMHz: 20,
+        driftMHz: 100,
         lock,
       },
       {
@@ -72,10 +88,10 @@ export function demoPlan(): PlanInput {
       },
     ],
     resonators: [
-      { id: "WGM-118", fsrGHz: 118.75, loadedQ: 150000 },
-      { id: "WGM-183", fsrGHz: 183.31, loadedQ: 150000 },
-      { id: "WGM-243", fsrGHz: 243.2, loadedQ: 150000 },
-      { id: "WGM-325", fsrGHz: 325.15, loadedQ: 150000 },
+      { id: "WGM-118", fsrGHz: 118.75, loadedQ: 150000, fsrShiftMHzPerK: -4.07 },
+      { id: "WGM-183", fsrGHz: 183.31, loadedQ: 150000, fsrShiftMHzPerK: -6.28 },
+      { id: "WGM-243", fsrGHz: 243.2, loadedQ: 150000, fsrShiftMHzPerK: -8.33 },
+      { id: "WGM-325", fsrGHz: 325.15, loadedQ: 150000, fsrShiftMHzPerK: -11.14 },
     ],
     detectors: [
       { id: "BPD-A", minGHz: 0.05, maxGHz: 6, maxInputMW: 5, sampleRateGHz: null },
@@ -95,6 +111,7 @@ export function demoPlan(): PlanInput {
         pathLossDB: 3,
         carrierRejectionDB: 0,
         sharedIf: false,
+        temperatureExcursionK: 0.5,
       },
       {
         id: "H2O-183",
@@ -103,12 +120,13 @@ export function demoPlan(): PlanInput {
         detector: "BPD-A",
         mode: 1,
         sideband: "upper",
-        loOffsetGHz: 185.51,
+        loOffsetGHz: 186.01,
         rfInput: { minGHz: 182.31, maxGHz: 184.31 },
         tapFraction: 0.01,
         pathLossDB: 3,
         carrierRejectionDB: 10,
         sharedIf: false,
+        temperatureExcursionK: 0.5,
       },
       {
         id: "WIN-243",
@@ -123,6 +141,7 @@ export function demoPlan(): PlanInput {
         pathLossDB: 3,
         carrierRejectionDB: 10,
         sharedIf: false,
+        temperatureExcursionK: 10,
       },
       {
         id: "H2O-325",
@@ -137,15 +156,17 @@ export function demoPlan(): PlanInput {
         pathLossDB: 3,
         carrierRejectionDB: 10,
         sharedIf: false,
+        temperatureExcursionK: 0.5,
       },
     ],
     channels: [
       ch("o2-core", "118.75 O2 line centre", "O2-118", 118.75, 200, 1.5),
       ch("o2-w1", "118.75 O2 inner wing", "O2-118", 118.35, 200, 3.5),
       ch("o2-w2", "118.75 O2 outer wing", "O2-118", 119.15, 200, 3.5),
-      ch("wv-core", "183.31 H2O line centre", "H2O-183", 183.31, 200, 3.5),
-      ch("wv-w1", "183.31 H2O wing −", "H2O-183", 182.91, 200, 3.5),
-      ch("wv-w2", "183.31 H2O wing +", "H2O-183", 183.71, 200, 3.5),
+      // IF filters on the occupied band: the ±100 MHz drift moves the IF inside the filter, not the RF band.
+      { ...ch("wv-core", "183.31 H2O line centre", "H2O-183", 183.31, 200, 3.5), ifFilter: "occupied" as const },
+      { ...ch("wv-w1", "183.31 H2O wing −", "H2O-183", 182.71, 200, 4.5), ifFilter: "occupied" as const },
+      { ...ch("wv-w2", "183.31 H2O wing +", "H2O-183", 183.91, 200, 4.5), ifFilter: "occupied" as const },
       ch("win-1", "243 window low", "WIN-243", 242.8, 200, 3.5),
       ch("win-2", "243 window mid", "WIN-243", 243.2, 200, 3.5),
       ch("win-3", "243 window high", "WIN-243", 243.6, 200, 3.5),

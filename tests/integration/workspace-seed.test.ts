@@ -53,14 +53,21 @@ describe("seedDemoMission", () => {
         (f: { severity: string; code: string; chain: string; channel: string | null }) =>
           `${f.severity} ${f.code} ${f.chain} ${f.channel}`,
       );
+    // The demo's envelope story (db/seed/mission-demo-plan.ts): the 183 GHz chain passes with its
+    // occupied-band IF filters; the 243 GHz chain's ±10 K control is wider than its temperature window.
     expect(open.sort()).toEqual(
       [
         "warning carrier-dominates-lo O2-118 null",
         "error nedt-unmet O2-118 o2-core",
+        "error nedt-unmet WIN-243 win-1",
+        "error nedt-unmet WIN-243 win-3",
         "error image-response H2O-325 h325-w2",
       ].sort(),
     );
+    const chainOf = (id: string) => result.chains.find((c: { id: string }) => c.id === id);
+    expect(chainOf("H2O-183").temperatureMarginK).toBeGreaterThan(0);
+    expect(chainOf("WIN-243").temperatureMarginK).toBeLessThan(0);
     const revs = (await call(team.viewer, "GET", `${M}/revisions`)).body.revisions;
-    expect(revs[0]).toMatchObject({ number: first.revision, errorCount: 2, warningCount: 1 });
+    expect(revs[0]).toMatchObject({ number: first.revision, errorCount: 4, warningCount: 1 });
   });
 });

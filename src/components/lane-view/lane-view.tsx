@@ -4,6 +4,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { Plan } from "@/schemas/plan";
 import type { ResultDocument } from "@/lib/plan";
 import type { LaneItem } from "@/lib/lanes";
+import { EnvelopeSection } from "@/components/envelope/envelope-section";
 import { LaneChart } from "./lane-chart";
 import { LaneTable } from "./lane-table";
 import { Legend } from "./legend";
@@ -138,10 +139,11 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
       {view === "table" ? <LaneTable model={model} /> : null}
 
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
-        <DetailsPanel item={selectedLive} result={live.result} onZoom={zoomTo} />
+        <DetailsPanel item={selectedLive} plan={live.plan} result={live.result} onZoom={zoomTo} />
         <FindingsPanel result={live.result} />
       </div>
       <ChannelFigures plan={live.plan} result={live.result} />
+      <EnvelopeSection plan={live.plan} result={live.result} />
       <details className="rounded border border-ink-faint p-3">
         <summary className="cursor-pointer text-sm font-semibold">Legend</summary>
         <div className="mt-2">

@@ -3,7 +3,19 @@ import { SPUR_FAMILIES } from "@/lib/plan";
 import { FAMILY_LOOK, KIND_LOOK, SEVERITY_COLOUR, markerPath, orderShape } from "./vocabulary";
 
 const GROUPS: { title: string; kinds: ItemKind[] }[] = [
-  { title: "RF", kinds: ["channel-band", "image-band", "mode-passband", "rf-input", "protected-band", "line-centre"] },
+  {
+    title: "RF",
+    kinds: [
+      "channel-band",
+      "envelope-band",
+      "image-band",
+      "mode-passband",
+      "mode-drift",
+      "rf-input",
+      "protected-band",
+      "line-centre",
+    ],
+  },
   { title: "Optical offset", kinds: ["reach", "feasible", "blocked", "carrier", "lock-sideband", "sideband", "lo"] },
   { title: "IF", kinds: ["detector-band", "if-slot", "occupied", "guard", "nyquist-edge"] },
 ];

@@ -2,15 +2,13 @@
 
 import { useCallback } from "react";
 import Link from "next/link";
-import { useQuery, useQueryClient } from "@tanstack/react-query";
-import { parsePlan } from "@/schemas/plan";
+import { useQueryClient } from "@tanstack/react-query";
 import type { ResultDocument } from "@/lib/plan";
-import { api, apiFetch, sendJson } from "@/queries/api";
+import { api, sendJson } from "@/queries/api";
 import { missionKeys } from "@/queries/keys";
 import { invalidateMission, useCollectionQuery, useResultQuery } from "@/queries/missions";
+import { usePlanDocumentQuery } from "@/queries/plan-document";
 import { LaneView, type SaveOutcome } from "./lane-view";
-
-const planKey = (missionId: string) => [...missionKeys.detail(missionId), "plan-document"] as const;
 
 /**
  * The lane view of a mission: plan and stored result through the API; saving
@@ -19,18 +17,7 @@ const planKey = (missionId: string) => [...missionKeys.detail(missionId), "plan-
  */
 export function MissionLanes({ missionId, canEdit = false }: { missionId: string; canEdit?: boolean }) {
   const qc = useQueryClient();
-  const planQuery = useQuery({
-    queryKey: planKey(missionId),
-    queryFn: async () => {
-      const doc = await apiFetch<unknown>(api.collection(missionId, "plan"));
-      const parsed = parsePlan(doc);
-      if (!parsed.ok)
-        throw new Error(
-          `The stored plan is not valid: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`,
-        );
-      return parsed.plan;
-    },
-  });
+  const planQuery = usePlanDocumentQuery(missionId);
   const resultQuery = useResultQuery(missionId);
   const chainsQuery = useCollectionQuery(missionId, "chains");
 

@@ -1,6 +1,7 @@
 "use client";
 
 import { OpticalFrequency } from "@/components/tools";
+import { fmtNumber, fmtWindow } from "@/components/envelope/format";
 import type { Chain, ChainResult, Detector, Laser, Resonator } from "@/queries/types";
 import { formatGHz, formatInterval, formatMHz, formatNumber, formatQ } from "./format";
 import { buttonClass, Empty, LaserSafetyNote } from "./ui";
@@ -227,6 +228,7 @@ export function ChainItem({
                     ? "none"
                     : result.feasibleGHz.map((iv) => formatInterval(iv)).join(", "),
                 ],
+                ["Temperature window", temperatureWindowText(chain.temperatureExcursionK, result)],
                 [
                   "Place",
                   result.placeGHz === null
@@ -239,6 +241,20 @@ export function ChainItem({
       />
     </div>
   );
+}
+
+/** The chain's temperature window at its LO, its temperature control ±Te and the margin (docs/decisions/029). */
+function temperatureWindowText(excursionK: number, result: ChainResult): string {
+  const m = result.temperatureMarginK;
+  const verdict =
+    result.temperatureWindowK.length === 0
+      ? "no temperature passes at this LO"
+      : m === null
+        ? ""
+        : m < 0
+          ? `control ±${fmtNumber(excursionK, 3)} K must tighten by ${fmtNumber(-m, 3)} K`
+          : `control ±${fmtNumber(excursionK, 3)} K, margin ${fmtNumber(m, 3)} K`;
+  return `${fmtWindow(result.temperatureWindowK)}${verdict ? ` (${verdict})` : ""}`;
 }
 
 /** Laser 2's optical frequency: carrier + signed LO offset (GHz → THz). */

@@ -8,11 +8,14 @@ import {
   useRevisionsQuery,
   useSettingsQuery,
 } from "@/queries/missions";
+import { usePlanDocumentQuery } from "@/queries/plan-document";
 import { buildChannelRows } from "./channel-rows";
 import { countBySeverity } from "./findings";
 import { formatNumber } from "./format";
 import { ChainsSection } from "./report/chains-section";
 import { ChannelsSection } from "./report/channels-section";
+import { EnvelopePlotsSection } from "./report/envelope-plots-section";
+import { EnvelopeSection } from "./report/envelope-section";
 import { FindingsSection } from "./report/findings-section";
 import { HardwareSection } from "./report/hardware-section";
 import { Section } from "./report/section";
@@ -41,7 +44,8 @@ export function MissionReport({ missionId }: { missionId: string }) {
   const settings = useSettingsQuery(missionId);
   const result = useResultQuery(missionId);
   const revisions = useRevisionsQuery(missionId);
-  const queries = [mission, lasers, resonators, detectors, chains, channels, settings, result, revisions];
+  const plan = usePlanDocumentQuery(missionId);
+  const queries = [mission, lasers, resonators, detectors, chains, channels, settings, result, revisions, plan];
   if (queries.some((q) => q.isLoading)) return <Spinner label="Preparing the report…" />;
   const failed = queries.find((q) => q.error);
   if (failed?.error) return <p className="text-sev-error">The report could not be prepared: {failed.error.message}</p>;
@@ -126,7 +130,11 @@ export function MissionReport({ missionId }: { missionId: string }) {
 
       <ChannelsSection rows={rows} />
 
+      <EnvelopeSection rows={rows} />
+
       <FindingsSection findings={findings} />
+
+      <EnvelopePlotsSection plan={plan.data} result={result.data ?? null} />
 
       <SourcesSection />
     </article>

@@ -1,4 +1,5 @@
 import { channelItems } from "./internals/channel-items";
+import { envelopeItems } from "./internals/envelope-items";
 import { extents } from "./internals/extents";
 import { ifItems, ifLane } from "./internals/if-lane";
 import { laneIndex } from "./internals/lane-index";
@@ -20,7 +21,12 @@ import type { Lane, LaneItem, LaneModel, LanePlanInput, LaneReferenceInput, Lane
  * they line up with the RF frequencies they carry on the shared GHz axis; the
  * facts always give the signed offset.
  *
- * Items are listed as built: the reference items first, then per chain its
+ * On the RF lane the operating envelope is drawn faintly: each channel's
+ * received band at the envelope's ends (LO shift ±D, for an IF filter on
+ * the slot) and the wanted mode over the chain's temperature control ±Te.
+ *
+ * Items are listed as built: the reference items first, then the envelope
+ * items (beneath the rest), then per chain its
  * RF input and modes, per channel its passbands, wanted sidebands and image,
  * and per chain its optical-offset and IF items.
  */
@@ -32,6 +38,8 @@ export function buildLaneModel(
   const index = laneIndex(plan, result);
   const items: LaneItem[] = [];
   const lanes: Lane[] = [rfLane()];
+  // The envelope's faint bands first, so they are drawn beneath the nominal items.
+  envelopeItems(plan, index, items);
   rfChainItems(plan, index, items);
   channelItems(plan, index, items);
   for (const chain of plan.chains) {

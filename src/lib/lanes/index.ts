@@ -15,3 +15,10 @@ export { demoPlan } from "./demo-plan";
 export { recheckAtOffset, type Recheck } from "./recheck-at-offset";
 export { laneReference } from "./lane-reference";
 export { laneModelByChain, type LaneModelParts } from "./lane-model-by-chain";
+export { envelopePlot, NEDT_TOP_FACTOR, type EnvelopePlot, type EnvelopePanel, type PlotFrame } from "./envelope-plot";
+export {
+  temperatureMapCells,
+  type TemperatureCell,
+  type TemperatureCells,
+  type TemperatureCellState,
+} from "./temperature-map-cells";

@@ -24,7 +24,13 @@ export interface LanePlanInput {
     readonly driftMHz: number;
     readonly lock: { readonly modulationMHz: number; readonly modulationIndex: number; readonly orders: number };
   }[];
-  readonly resonators: readonly { readonly id: string; readonly fsrGHz: number; readonly loadedQ: number }[];
+  readonly resonators: readonly {
+    readonly id: string;
+    readonly fsrGHz: number;
+    readonly loadedQ: number;
+    /** Version 2 (optional here): FSR shift per kelvin, MHz/K. */
+    readonly fsrShiftMHzPerK?: number;
+  }[];
   readonly detectors: readonly {
     readonly id: string;
     readonly minGHz: number;
@@ -40,6 +46,8 @@ export interface LanePlanInput {
     readonly sideband: "upper" | "lower";
     readonly loOffsetGHz: number;
     readonly rfInput: { readonly minGHz: number; readonly maxGHz: number };
+    /** Version 2 (optional here): ± resonator temperature excursion, K. */
+    readonly temperatureExcursionK?: number;
   }[];
   readonly channels: readonly {
     readonly id: string;
@@ -49,6 +57,8 @@ export interface LanePlanInput {
     readonly bandwidthMHz: number;
     readonly dsbOffsetGHz?: number | null;
     readonly requiredNedtK?: number | null;
+    /** Version 2 (optional here): what the IF filter passes. */
+    readonly ifFilter?: "slot" | "occupied";
   }[];
 }
 
@@ -104,6 +114,8 @@ export type ItemKind =
   | "line-centre"
   | "rf-input"
   | "mode-passband"
+  | "mode-drift"
+  | "envelope-band"
   | "channel-band"
   | "image-band"
   // optical-offset lane

@@ -1,3 +1,4 @@
+import { TemperatureWindowLine } from "@/components/envelope/temperature-window-line";
 import { explainCode } from "@/lib/lanes";
 import type { ResultDocument } from "@/lib/plan";
 import type { Plan } from "@/schemas/plan";
@@ -84,6 +85,12 @@ export function ChainControls({ plan, result, canSave, saveState, onPlace, onSav
                 <span style={{ color: SEVERITY_COLOUR.error }}>LO outside every reach interval of the laser pair.</span>
               )}
             </div>
+            <TemperatureWindowLine
+              chainId={c.id}
+              excursionK={c.temperatureExcursionK}
+              windowK={r?.temperatureWindowK}
+              marginK={r?.temperatureMarginK}
+            />
             {st?.message ? (
               <div
                 className={`mt-1 text-xs ${st.error ? "text-sev-error" : "text-sev-ok"}`}

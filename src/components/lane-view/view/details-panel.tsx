@@ -1,14 +1,19 @@
 import { explainCode, type LaneItem } from "@/lib/lanes";
 import type { ResultDocument } from "@/lib/plan";
+import type { Plan } from "@/schemas/plan";
 import { SEVERITY_COLOUR } from "../vocabulary";
+import { EnvelopeFigures } from "./envelope-figures";
 
 /** The selected item's facts, what its codes mean, and the live findings that concern it. */
 export function DetailsPanel({
   item,
+  plan,
   result,
   onZoom,
 }: {
   item: LaneItem | null;
+  /** The live plan, for the nominal mode response (absent: the envelope table is left out). */
+  plan?: Plan;
   result: ResultDocument;
   onZoom: (i: LaneItem) => void;
 }) {
@@ -45,6 +50,7 @@ export function DetailsPanel({
           </div>
         ))}
       </dl>
+      {item.channel && plan ? <EnvelopeFigures channelId={item.channel} plan={plan} result={result} /> : null}
       {item.codes.filter((c) => c !== "wanted").length ? (
         <ul className="mt-2 space-y-1 text-xs">
           {item.codes

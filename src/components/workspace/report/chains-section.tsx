@@ -34,6 +34,9 @@ export function ChainsSection({
             <th className={th}>Per-photodiode input (mW)</th>
             <th className={th}>Feasible LO offsets (GHz)</th>
             <th className={th}>Place (GHz)</th>
+            <th className={th}>Temperature control (K)</th>
+            <th className={th}>Temperature window (K)</th>
+            <th className={th}>Margin (K)</th>
           </tr>
         </thead>
         <tbody>
@@ -72,6 +75,17 @@ export function ChainsSection({
                 </td>
                 <td className={td}>
                   {r ? (r.placeGHz === null ? `none (${r.placeReason ?? ""})` : formatGHz(r.placeGHz)) : "–"}
+                </td>
+                <td className={td}>±{formatNumber(c.temperatureExcursionK, 3)}</td>
+                <td className={td} data-testid={`report-window-${c.key}`}>
+                  {r
+                    ? r.temperatureWindowK.length
+                      ? r.temperatureWindowK.map((iv) => formatInterval(iv, "")).join(", ")
+                      : "none"
+                    : "–"}
+                </td>
+                <td className={`${td} ${r && (r.temperatureMarginK ?? -1) < 0 ? "font-semibold text-sev-error" : ""}`}>
+                  {r ? (r.temperatureMarginK === null ? "–" : formatNumber(r.temperatureMarginK, 3)) : "–"}
                 </td>
               </tr>
             );
