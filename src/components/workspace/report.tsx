@@ -16,6 +16,7 @@ import { ChannelsSection } from "./report/channels-section";
 import { FindingsSection } from "./report/findings-section";
 import { HardwareSection } from "./report/hardware-section";
 import { Section } from "./report/section";
+import { SchedulesSection } from "./report/schedules-section";
 import { SourcesSection } from "./report/sources-section";
 import { buttonClass, LASER_SAFETY_TEXT, SENSITIVITY_TEXT, Spinner } from "./ui";
 
@@ -125,6 +126,8 @@ export function MissionReport({ missionId }: { missionId: string }) {
       />
 
       <ChannelsSection rows={rows} />
+
+      <SchedulesSection result={result.data} />
 
       <FindingsSection findings={findings} />
 

@@ -41,7 +41,7 @@ export function NedtBars({ schedule }: { schedule: ScheduleResult }) {
             const top = y(r.id) ?? 0;
             const failing = (v: number | null) => r.required !== null && v !== null && v > r.required;
             return (
-              <g key={r.id} data-channel={r.id}>
+              <g key={r.id} data-bar-channel={r.id}>
                 {r.current !== null ? (
                   <Bar x={0} y={top} width={x(r.current)} height={bh} fill={failing(r.current) ? "#b91c1c" : "#1d4ed8"}>
                     <title>{`${r.id} as saved: ${r.current.toFixed(3)} K`}</title>

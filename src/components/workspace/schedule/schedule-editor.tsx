@@ -157,7 +157,7 @@ export function ScheduleEditor({
             const errs =
               j >= 0 ? [...errorAt(`schedule.dwells[${j}].dwellMs`), ...errorAt(`schedule.dwells[${j}].chainId`)] : [];
             return (
-              <tr key={r.chainId} data-chain={r.key}>
+              <tr key={r.chainId} data-dwell-row={r.key}>
                 <td className="px-2 py-1">
                   <button
                     type="button"
