@@ -137,7 +137,6 @@ function LaserSchedulePanel({
       ) : null}
       {editing && q.data ? (
         <ScheduleEditor
-          key={q.data.version}
           missionId={missionId}
           current={q.data}
           chains={chains}
