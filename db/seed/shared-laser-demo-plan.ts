@@ -7,7 +7,7 @@ import type { PlanInput } from "@/schemas/plan";
  * The same plan is docs/examples/shared-laser.plan.json under another name
  * (a unit test holds the two together). As written, the 180 GHz channel
  * gets too small a share of each cycle (nedt-unmet, shared-nedt-unmet); the
- * seed then applies the result's best split as a second revision, which
+ * seed then applies the result's best split as the next revision, which
  * meets every requirement.
  */
 export const SHARED_LASER_MISSION_NAME = "Demo: Tern shared-laser sounder (invented)";

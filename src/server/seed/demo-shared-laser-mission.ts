@@ -18,8 +18,8 @@ import { saveAndCheck } from "@/server/workspace/save-and-check";
 /**
  * Seeds the second invented demo mission, the shared-laser instrument
  * (idempotent: skipped when the team already has a mission of that name):
- * revision 1 is the plan as written, revision 2 the same plan with the
- * best split of its schedule applied, both through saveAndCheck.
+ * the plan as written is one revision, the same plan with the
+ * best split of its schedule applied the next, both through saveAndCheck.
  */
 export async function seedSharedLaserMission(
   teamId: string,
