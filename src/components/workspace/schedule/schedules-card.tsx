@@ -136,12 +136,7 @@ function LaserSchedulePanel({
         </p>
       ) : null}
       {editing && q.data ? (
-        <ScheduleEditor
-          missionId={missionId}
-          current={q.data}
-          chains={chains}
-          onDone={() => setEditing(false)}
-        />
+        <ScheduleEditor missionId={missionId} current={q.data} chains={chains} onDone={() => setEditing(false)} />
       ) : null}
       {checked ? (
         <>
