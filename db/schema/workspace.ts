@@ -74,6 +74,19 @@ export const planSettings = pgTable("plan_settings", {
 
 export type ReachInterval = { minGHz: number; maxGHz: number };
 
+/**
+ * A laser pair's observation schedule as stored (docs/plan-format.md §13):
+ * its dwells name their chains by row id, so renaming a chain keeps it;
+ * a dwell whose chain row is gone is left out when the plan is assembled.
+ */
+export type StoredSchedule = {
+  cycleMs: number;
+  retuneMs: number;
+  retuneMsPerGHz: number;
+  relockMs: number;
+  dwells: { chainId: string; dwellMs: number }[];
+};
+
 export const lasers = pgTable(
   "lasers",
   {
@@ -90,6 +103,8 @@ export const lasers = pgTable(
     lockModulationMHz: doublePrecision("lock_modulation_mhz").notNull(),
     lockModulationIndex: doublePrecision("lock_modulation_index").notNull(),
     lockOrders: integer("lock_orders").notNull(),
+    /** The observation schedule (plan format version 2), or null. */
+    schedule: jsonb("schedule").$type<StoredSchedule | null>(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),

@@ -184,3 +184,20 @@ export const errorSchema = z.object({
     })
     .loose(),
 });
+
+/** A laser pair's observation schedule in the workspace (docs/plan-format.md §13), with the laser's version. */
+export const scheduleAnswerSchema = z.object({
+  laserId: z.uuid(),
+  laserKey: z.string(),
+  version: z.int().min(1),
+  schedule: z
+    .object({
+      cycleMs: z.number(),
+      retuneMs: z.number(),
+      retuneMsPerGHz: z.number(),
+      relockMs: z.number(),
+      dwells: z.array(z.object({ chainId: z.uuid(), chainKey: z.string(), dwellMs: z.number() })),
+    })
+    .nullable(),
+});
+export const scheduleSavedSchema = scheduleAnswerSchema.extend({ revision: revisionInfoSchema });

@@ -27,6 +27,8 @@ export {
   type PlanLaser,
   type PlanReach,
   type PlanLock,
+  type PlanSchedule,
+  type PlanDwell,
   type PlanResonator,
   type PlanDetector,
   type PlanChain,

@@ -96,6 +96,55 @@ export const findingSchema = z
   })
   .meta({ id: "Finding" });
 
+export const scheduleDwellResultSchema = z
+  .strictObject({
+    chain: z.string(),
+    dwellMs: num(),
+    loStepGHz: num().gte(0),
+    retuneMs: num().gte(0),
+    relockMs: num().gte(0),
+    usableMs: num().gte(0),
+    dutyCycle: num().gte(0).lte(1),
+  })
+  .meta({ id: "ScheduleDwell", description: "One dwell of an observation schedule (§13.5)" });
+
+export const scheduleChannelResultSchema = z
+  .strictObject({
+    id: z.string(),
+    chain: z.string(),
+    integrationMs: num(),
+    effectiveIntegrationMs: num().gte(0),
+    nedtK: nullable(num()),
+    worstNedtK: nullable(num()),
+    unsharedNedtK: nullable(num()),
+    unsharedWorstNedtK: nullable(num()),
+    requiredNedtK: nullable(num()),
+  })
+  .meta({ id: "ScheduleChannel", description: "A channel of a scheduled chain (§13.5)" });
+
+export const bestSplitResultSchema = z
+  .strictObject({
+    method: z.enum(["closed-form", "search"]),
+    commonMargin: num(),
+    currentMargin: num(),
+    dwellsMs: z.array(num()),
+    worstNedtK: z.array(nullable(num())),
+  })
+  .meta({ id: "BestSplit", description: "The dwell split with the largest common NEΔT margin (§13.6)" });
+
+export const scheduleResultSchema = z
+  .strictObject({
+    laser: z.string(),
+    plannedCycleMs: num(),
+    busyMs: num(),
+    cycleMs: num(),
+    idleMs: num().gte(0),
+    dwells: z.array(scheduleDwellResultSchema),
+    channels: z.array(scheduleChannelResultSchema),
+    bestSplit: nullable(bestSplitResultSchema),
+  })
+  .meta({ id: "ScheduleResult", description: "A laser pair's observation schedule as checked (§13.5)" });
+
 export const resultDocumentSchema = z
   .strictObject({
     format: z.literal(RESULT_FORMAT),
@@ -103,6 +152,9 @@ export const resultDocumentSchema = z
     channels: z.array(channelResultSchema),
     spurs: z.array(spurSchema),
     findings: z.array(findingSchema),
+    schedules: z.array(scheduleResultSchema).optional().meta({
+      description: "One entry per laser pair with an observation schedule; left out when the plan has none",
+    }),
   })
   .meta({
     title: "Heterolane result document",

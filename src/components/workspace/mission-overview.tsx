@@ -21,6 +21,7 @@ import { ChainItem, DetectorTable, LaserTable, ResonatorTable } from "./hardware
 import { EditingDrawer, type Editing } from "./overview/editing-drawer";
 import { MissionHeader } from "./overview/mission-header";
 import { SettingsCard } from "./overview/settings-card";
+import { SchedulesCard } from "./schedule/schedules-card";
 import { buttonClass, Card, ErrorNote, SENSITIVITY_TEXT, Spinner } from "./ui";
 
 /**
@@ -116,6 +117,13 @@ export function MissionOverview({
       <Card title="Laser pairs" actions={addButton("lasers")}>
         {lasers.isLoading ? <Spinner label="Loading…" /> : <LaserTable lasers={refs.lasers} onEdit={edit("lasers")} />}
       </Card>
+      <SchedulesCard
+        missionId={missionId}
+        lasers={refs.lasers}
+        chains={refs.chains}
+        result={result.data}
+        canEdit={canEdit}
+      />
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Resonators" actions={addButton("resonators")}>
           {resonators.isLoading ? <Spinner label="Loading…" /> : null}

@@ -19,6 +19,7 @@ import { EnvelopeSection } from "./report/envelope-section";
 import { FindingsSection } from "./report/findings-section";
 import { HardwareSection } from "./report/hardware-section";
 import { Section } from "./report/section";
+import { SchedulesSection } from "./report/schedules-section";
 import { SourcesSection } from "./report/sources-section";
 import { buttonClass, LASER_SAFETY_TEXT, SENSITIVITY_TEXT, Spinner } from "./ui";
 
@@ -131,6 +132,8 @@ export function MissionReport({ missionId }: { missionId: string }) {
       <ChannelsSection rows={rows} />
 
       <EnvelopeSection rows={rows} />
+
+      <SchedulesSection result={result.data} />
 
       <FindingsSection findings={findings} />
 

@@ -29,6 +29,11 @@ const TEXT: Readonly<Record<FindingCode, string>> = {
   "pd-overload": "The optical power per photodiode exceeds the detector's limit.",
   "nedt-unmet": "The channel's NEΔT is above its requirement.",
   "in-protected-band": "A passband lies wholly inside a band where all emissions are prohibited (passive use).",
+  "schedule-overrun": "The dwells of the laser pair's observation schedule add up to more than its cycle.",
+  "retune-blocked":
+    "Retuning laser 2 between two chains of a schedule would cross LO offsets outside the laser's reach.",
+  "shared-nedt-unmet":
+    "The channel would meet its NEΔT requirement with the laser pair to itself; its share of the schedule is too small.",
 };
 
 const byCode: Readonly<Record<string, string | undefined>> = TEXT;

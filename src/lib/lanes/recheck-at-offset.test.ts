@@ -1,7 +1,8 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { parsePlan, type Plan } from "@/schemas/plan";
-import { checkChainAtOffset, RESULT_FORMAT, type ResultDocument } from "@/lib/plan";
+import { checkChainAtOffset, checkPlan, RESULT_FORMAT, type ResultDocument } from "@/lib/plan";
+import sharedLaser from "../../../docs/examples/shared-laser.plan.json";
 import ex1 from "../../../tests/fixtures/plans/ex1-single-channel.plan.json";
 import { demoPlan } from "./demo-plan";
 import { recheckAtOffset } from "./recheck-at-offset";
@@ -85,5 +86,15 @@ describe("recheckAtOffset", () => {
       }),
       { numRuns: 40 },
     );
+  });
+});
+
+describe("recheckAtOffset with an observation schedule", () => {
+  it("equals checkPlan of the moved plan, schedules included (the retunes change with the LO)", () => {
+    const plan = parsed(sharedLaser);
+    const moved = recheckAtOffset(plan, checkPlan(plan), "B240", 242.5);
+    expect(moved.plan.chains[1]!.loOffsetGHz).toBe(242.5);
+    expect(moved.result).toEqual(checkPlan(moved.plan));
+    expect(moved.result.schedules![0]!.dwells[1]!.loStepGHz).toBeCloseTo(61, 9);
   });
 });

@@ -3,6 +3,7 @@ import {
   type ChannelResult,
   type PreparedChain,
   type ResultDocument,
+  checkPlan,
   evaluateAtOffset,
   prepareChain,
 } from "@/lib/plan";
@@ -21,6 +22,10 @@ export interface Recheck {
  * `checkPlan` of the moved plan (tested). Pass `prepared` (the chain
  * prepared for this plan, any LO) to skip preparing it on every frame of a
  * drag.
+ *
+ * A plan with an observation schedule is checked whole: moving one chain's
+ * LO changes the retunes of its schedule and so every scheduled chain's
+ * duty cycle and NEΔT (docs/plan-format.md §13).
  */
 export function recheckAtOffset(
   plan: Plan,
@@ -31,6 +36,7 @@ export function recheckAtOffset(
 ): Recheck {
   const chains = plan.chains.map((c) => (c.id === chainId ? { ...c, loOffsetGHz } : c));
   const moved: Plan = { ...plan, chains };
+  if (plan.lasers.some((l) => l.schedule)) return { plan: moved, result: checkPlan(moved) };
   const ev = evaluateAtOffset(prepared, loOffsetGHz);
   const fresh = new Map<string, ChannelResult>();
   for (const c of ev.channels) fresh.set(c.id, c);

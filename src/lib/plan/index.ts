@@ -27,3 +27,4 @@ export { MAX_GRID_POINTS } from "./internals/map-image-edges";
 export { MAX_SCAN_SAMPLES } from "./internals/extremum";
 export { WINDOW_SPAN_K, TEMPERATURE_CODES } from "./internals/temperature-window";
 export * from "./types";
+export { bestSplit, type BestSplit, type SplitProblem, type SplitDwell, type SplitChannel } from "./best-split";

@@ -1,3 +1,5 @@
+import type { ScheduleResult } from "./schedule-types";
+
 /**
  * Types of the result document `heterolane.result/2`
  * (docs/plan-format.md §7 "The result document", §4 "Rules and findings"
@@ -34,6 +36,9 @@ export const RULE_ORDER = [
   "pd-overload",
   "nedt-unmet",
   "in-protected-band",
+  "schedule-overrun",
+  "retune-blocked",
+  "shared-nedt-unmet",
 ] as const;
 
 export type FindingCode = (typeof RULE_ORDER)[number];
@@ -70,6 +75,9 @@ export const RULE_SEVERITY: Readonly<Record<FindingCode, Severity>> = {
   "pd-overload": "error",
   "nedt-unmet": "error",
   "in-protected-band": "info",
+  "schedule-overrun": "error",
+  "retune-blocked": "error",
+  "shared-nedt-unmet": "warning",
 };
 
 /** Codes of the per-chain rules (`channel: null`). */
@@ -80,6 +88,8 @@ export const CHAIN_LEVEL_CODES: readonly FindingCode[] = [
   "lock-inside-mode",
   "carrier-dominates-lo",
   "pd-overload",
+  "schedule-overrun",
+  "retune-blocked",
 ];
 
 const L_DEPENDENT = [
@@ -205,4 +215,12 @@ export interface ResultDocument {
   channels: ChannelResult[];
   spurs: Spur[];
   findings: Finding[];
+  /**
+   * One entry per laser pair with an observation schedule, in laser order
+   * (docs/plan-format.md §13.5); left out when the plan has no schedule, so
+   * such a plan's result is exactly what it was before schedules.
+   */
+  schedules?: ScheduleResult[];
 }
+
+export type { ScheduleResult, ScheduleDwellResult, ScheduleChannelResult, BestSplitResult } from "./schedule-types";

@@ -1,6 +1,7 @@
 import { dsbOffsetClears, halfBandGHz, isOrdered } from "../fields";
 import type { PathSegment } from "./format-path";
 import { formatNumber } from "./messages";
+import { scheduledChains, scheduleIssues } from "./schedule-rules";
 
 /**
  * The rules of the plan format that relate several fields
@@ -93,6 +94,9 @@ export function crossFieldIssues(input: unknown): RawIssue[] {
   const chains = input.chains;
   if (Array.isArray(chains)) {
     const laserServes = new Map<string, string | number>();
+    const scheduled = scheduledChains(input);
+    const users = new Map<string, number>();
+    for (const c of chains) if (isRecord(c) && isId(c.laser)) users.set(c.laser, (users.get(c.laser) ?? 0) + 1);
     chains.forEach((chain, i) => {
       if (!isRecord(chain)) return;
       minBelowMax(chain.rfInput, ["chains", i, "rfInput"], out);
@@ -111,7 +115,17 @@ export function crossFieldIssues(input: unknown): RawIssue[] {
         }
       }
       const laserRef = chain.laser;
-      if (isId(laserRef)) {
+      const listed = isId(laserRef) ? scheduled.get(laserRef) : undefined;
+      if (isId(laserRef) && listed) {
+        // a laser with a schedule serves the chains its schedule lists; any other chain on it is one too many
+        if (!(isId(chain.id) && listed.has(chain.id)) && (users.get(laserRef) ?? 0) >= 2) {
+          const names = [...listed].map((c) => `"${c}"`).join(", ");
+          out.push({
+            path: ["chains", i, "laser"],
+            message: `laser "${laserRef}" serves the chains of its schedule (${names}); add ${isId(chain.id) ? `chain "${chain.id}"` : "this chain"} to the schedule or give it a laser of its own`,
+          });
+        }
+      } else if (isId(laserRef)) {
         const earlier = laserServes.get(laserRef);
         if (earlier === undefined) laserServes.set(laserRef, isId(chain.id) ? chain.id : i);
         else {
@@ -143,5 +157,6 @@ export function crossFieldIssues(input: unknown): RawIssue[] {
       }
     });
   }
+  out.push(...scheduleIssues(input, lists.chains.complete));
   return out;
 }

@@ -15,6 +15,7 @@ import {
   resonatorV2Shape,
   settingsShape,
 } from "../fields";
+import { dwellShape, MAX_DWELLS, scheduleShape } from "../schedule-fields";
 import { crossFieldIssues } from "./cross-field";
 import {
   PLAN_FORMAT,
@@ -55,19 +56,38 @@ const reachSchema = z.strictObject({
   maxGHz: r.number(),
 });
 
+/** A version 2 field: optional in the document (its default is filled in after the version check). */
+const optionalV2 = <T extends z.ZodType>(schema: T, value: unknown, description: string) =>
+  schema
+    .optional()
+    .meta({ default: value, description: `${description} (version 2; default ${JSON.stringify(value)})` });
+
+/** One dwell of an observation schedule: a chain of the laser pair and how long each cycle stays on it. */
+const dwellSchema = z.strictObject({
+  chain: id(),
+  ...dwellShape(r),
+});
+
+/** A laser pair's observation schedule (docs/plan-format.md, "Observation schedules"), or null. */
+const scheduleSchema = z
+  .strictObject({
+    ...scheduleShape(r),
+    dwells: z.array(dwellSchema).min(1).max(MAX_DWELLS),
+  })
+  .nullable();
+
 const laserSchema = z.strictObject({
   id: id(),
   ...laserShape(r, {
     reach: z.array(reachSchema).max(PLAN_LIMITS.reachPerLaser),
     lock: z.strictObject(lockShape(r)),
   }),
+  schedule: optionalV2(
+    scheduleSchema,
+    VERSION_2_FIELDS.lasers.schedule,
+    "the laser pair's observation schedule: dwells on its chains in turn, repeated every cycle, or null",
+  ),
 });
-
-/** A version 2 field: optional in the document (its default is filled in after the version check). */
-const optionalV2 = <T extends z.ZodType>(schema: T, value: unknown, description: string) =>
-  schema
-    .optional()
-    .meta({ default: value, description: `${description} (version 2; default ${JSON.stringify(value)})` });
 
 const resonatorV2 = resonatorV2Shape(r);
 const resonatorSchema = z.strictObject({
@@ -157,6 +177,7 @@ export const planSchema = planFieldsSchema
   .transform((plan) => ({
     ...plan,
     format: PLAN_FORMAT,
+    lasers: plan.lasers.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.lasers)),
     resonators: plan.resonators.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.resonators)),
     chains: plan.chains.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.chains)),
     channels: plan.channels.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.channels)),
@@ -184,6 +205,7 @@ export const planDocumentSchema = z
     planFieldsSchema
       .extend({
         format: z.literal(PLAN_FORMAT_V1),
+        lasers: z.array(versionOne(laserSchema, VERSION_2_FIELDS.lasers)).max(PLAN_LIMITS.lasers),
         resonators: z.array(versionOne(resonatorSchema, VERSION_2_FIELDS.resonators)).max(PLAN_LIMITS.resonators),
         chains: z.array(versionOne(chainSchema, VERSION_2_FIELDS.chains)).max(PLAN_LIMITS.chains),
         channels: z.array(versionOne(channelSchema, VERSION_2_FIELDS.channels)).max(PLAN_LIMITS.channels),
@@ -207,6 +229,8 @@ export type PlanSettings = Plan["settings"];
 export type PlanLaser = Plan["lasers"][number];
 export type PlanReach = PlanLaser["reach"][number];
 export type PlanLock = PlanLaser["lock"];
+export type PlanSchedule = NonNullable<PlanLaser["schedule"]>;
+export type PlanDwell = PlanSchedule["dwells"][number];
 export type PlanResonator = Plan["resonators"][number];
 export type PlanDetector = Plan["detectors"][number];
 export type PlanChain = Plan["chains"][number];

@@ -100,9 +100,10 @@ describe("a version 1 document with a version 2 field is refused at that field",
       ["chains.0.temperatureExcursionK", V2_MESSAGE],
     ]);
   });
-  it("the table of version 2 fields names exactly the four fields of the format", () => {
+  it("the table of version 2 fields names exactly the fields of the format (the four of the envelope and the schedule)", () => {
     const listed = Object.entries(VERSION_2_FIELDS).flatMap(([place, f]) => Object.keys(f).map((k) => `${place}.${k}`));
     expect(listed).toEqual([
+      "lasers.schedule",
       "resonators.fsrShiftMHzPerK",
       "chains.temperatureExcursionK",
       "channels.ifFilter",

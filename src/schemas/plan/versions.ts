@@ -32,7 +32,7 @@ export type PlanFormat = (typeof PLAN_FORMATS)[number];
 export const VERSION_2_FIELDS = {
   document: {},
   settings: {},
-  lasers: {},
+  lasers: { schedule: null },
   resonators: { fsrShiftMHzPerK: FIELD_DEFAULTS.resonator.fsrShiftMHzPerK },
   detectors: {},
   chains: { temperatureExcursionK: FIELD_DEFAULTS.chain.temperatureExcursionK },

@@ -1,5 +1,6 @@
 import "server-only";
 import { seedDemoMission } from "./demo-mission";
+import { seedSharedLaserMission } from "./demo-shared-laser-mission";
 import { seedDemoTeam } from "./demo-team";
 
 /**
@@ -17,5 +18,11 @@ export async function seedDemo(log: (line: string) => void = console.log): Promi
     mission.created
       ? `[seed] demo mission created (${mission.missionId}), checked as revision ${mission.revision}`
       : `[seed] demo mission already there (${mission.missionId})`,
+  );
+  const shared = await seedSharedLaserMission(teamId, author);
+  log(
+    shared.created
+      ? `[seed] shared-laser demo mission created (${shared.missionId}), best split applied as revision ${shared.revision}`
+      : `[seed] shared-laser demo mission already there (${shared.missionId})`,
   );
 }

@@ -7,6 +7,7 @@ import { PLAN_FORMAT } from "@/schemas/plan";
 import type { Queryable } from "@/server/core/db";
 import { notFound } from "@/server/core/http";
 import { channelFigures } from "./mappers";
+import { scheduleOfRow } from "./schedule-rows";
 
 /**
  * Assembles the plan document (`heterolane.plan/2`, docs/plan-format.md
@@ -69,6 +70,7 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       stepMHz: l.stepMHz,
       driftMHz: l.driftMHz,
       lock: { modulationMHz: l.lockModulationMHz, modulationIndex: l.lockModulationIndex, orders: l.lockOrders },
+      schedule: scheduleOfRow(l.schedule, chainKey),
     })),
     resonators: rs.map((r) => ({
       id: r.key,

@@ -7,3 +7,4 @@ export { uploadChannels, prepareChannelUpload, applyPreparedChannels } from "./c
 export { saveAndCheck, stageRevision, prepareCheck, type ActivityNote, type RevisionInfo } from "./save-and-check";
 export { assemblePlan } from "./assemble";
 export { CAN } from "./can";
+export { getSchedule, putSchedule, type ScheduleAnswer } from "./schedule";

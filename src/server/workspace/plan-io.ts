@@ -11,6 +11,7 @@ import { getMissionRow, lockMission } from "@/server/core/mission-scope";
 import { assemblePlan } from "./assemble";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { channelFigures } from "./mappers";
+import { scheduleRowOf } from "./schedule-rows";
 
 /**
  * The plan document (`heterolane.plan/2`) of the mission's current draft. No team
@@ -209,4 +210,11 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
         ...channelFigures(ch),
       })),
     );
+  // a schedule names its chains, which exist only now
+  for (const l of plan.lasers)
+    if (l.schedule)
+      await tx
+        .update(lasers)
+        .set({ schedule: scheduleRowOf(l.schedule, chainIds) })
+        .where(eq(lasers.id, laserIds.get(l.id)!));
 }

@@ -18,6 +18,8 @@ import {
   reviewTransitionSchema,
   revisionListSchema,
   revisionSchema,
+  scheduleAnswerSchema,
+  scheduleSavedSchema,
   settingsSavedSchema,
   settingsSchema,
   uploadAnswerSchema,
@@ -44,6 +46,7 @@ import * as detector from "../missions/[missionId]/detectors/[id]/route";
 import * as findings from "../missions/[missionId]/findings/route";
 import * as lasers from "../missions/[missionId]/lasers/route";
 import * as laser from "../missions/[missionId]/lasers/[id]/route";
+import * as laserSchedule from "../missions/[missionId]/lasers/[id]/schedule/route";
 import * as plan from "../missions/[missionId]/plan/route";
 import * as settings from "../missions/[missionId]/settings/route";
 import * as resonators from "../missions/[missionId]/resonators/route";
@@ -183,6 +186,22 @@ export const OPERATIONS: Operation[] = [
     ok: { status: 200, schema: settingsSavedSchema },
   },
   ...entityOperations,
+  {
+    path: `${M}/lasers/{id}/schedule`,
+    method: "get",
+    handler: laserSchedule.GET,
+    tag: "Workspace",
+    summary: "Read a laser pair's observation schedule",
+    ok: { status: 200, schema: scheduleAnswerSchema },
+  },
+  {
+    path: `${M}/lasers/{id}/schedule`,
+    method: "put",
+    handler: laserSchedule.PUT,
+    tag: "Workspace",
+    summary: "Replace (or remove) a laser pair's observation schedule as a new revision",
+    ok: { status: 200, schema: scheduleSavedSchema },
+  },
   {
     path: `${M}/plan`,
     method: "get",

@@ -2,6 +2,7 @@ import type { ChainContext, ChannelContext } from "./chain-context";
 import { type BoxPoint, type EnvelopeBox, detuningRange, modeShiftRange, pointAt } from "./envelope-box";
 import { type ImageProblem, type ImageWorst, worstImage } from "./envelope-image";
 import { maximise, minimise } from "./extremum";
+import { type NedtModel, nedtModel } from "./nedt-model";
 import { centroidOffset, modeResponse } from "./received-band";
 import { type SlotGeometry, receivedSensitivity } from "./slot";
 
@@ -35,11 +36,16 @@ export interface CentreWorst extends BoxPoint {
   passbandCentre: number;
 }
 
+/** The largest NEΔT, and its two terms there (what an observation schedule's best split reads, §13.6). */
+export interface NedtWorst extends WorstAt {
+  model: NedtModel;
+}
+
 export interface ChannelEnvelope {
   /** The occupied-band filter cannot be built at L: the occupied band reaches 0 GHz (slot.lo ≤ D, D > 0). */
   filterImpossible: boolean;
   /** Largest NEΔT (K); null without a slot or with an impossible filter. */
-  nedt: WorstAt | null;
+  nedt: NedtWorst | null;
   /** Smallest radiometric bandwidth (MHz); null as NEΔT, or when S ≡ 0. */
   bandwidth: WorstAt | null;
   /** Lowest image rejection; null for DSB, without a slot, with an impossible filter, or when nothing of the image gets in. */
@@ -186,7 +192,9 @@ export function channelEnvelope(
     return v;
   };
   const n = maximise((d) => sens(d).nedtK, dMin, dMax, ch.envelopeStep);
-  const nedt: WorstAt | null = Number.isFinite(n.fx) ? { value: n.fx, ...pointAt(box, n.x) } : null;
+  const nedt: NedtWorst | null = Number.isFinite(n.fx)
+    ? { value: n.fx, ...pointAt(box, n.x), model: nedtModel(sens(n.x), ch.channel.gainStability) }
+    : null;
   let bandwidth: WorstAt | null = null;
   if (sens(0).radiometricBandwidthMHz !== null) {
     const b = minimise((d) => sens(d).radiometricBandwidthMHz ?? Infinity, dMin, dMax, ch.envelopeStep);

@@ -1,0 +1,1 @@
+ALTER TABLE "lasers" ADD COLUMN "schedule" jsonb;

@@ -1,0 +1,1 @@
+export { timelineSegments, type TimelineSegment } from "./timeline-segments";

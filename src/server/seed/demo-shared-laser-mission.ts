@@ -1,0 +1,71 @@
+import "server-only";
+import { and, eq } from "drizzle-orm";
+import { db } from "@db/client";
+import { lasers, missions, user } from "@db/schema";
+import {
+  SHARED_LASER_MISSION_DESCRIPTION,
+  SHARED_LASER_MISSION_NAME,
+  sharedLaserDemoPlan,
+} from "@db/seed/shared-laser-demo-plan";
+import { checkPlan } from "@/lib/plan";
+import { parsePlan } from "@/schemas/plan";
+import type { Actor } from "@/server/auth/actor";
+import { inTransaction } from "@/server/core/db";
+import { createMissionIn } from "@/server/workspace/missions";
+import { replaceDraft } from "@/server/workspace/plan-io";
+import { saveAndCheck } from "@/server/workspace/save-and-check";
+
+/**
+ * Seeds the second invented demo mission, the shared-laser instrument
+ * (idempotent: skipped when the team already has a mission of that name):
+ * the plan as written is one revision, the same plan with the
+ * best split of its schedule applied the next, both through saveAndCheck.
+ */
+export async function seedSharedLaserMission(
+  teamId: string,
+  authorUserId: string,
+): Promise<{ missionId: string; created: boolean; revision?: number }> {
+  const [existing] = await db
+    .select({ id: missions.id })
+    .from(missions)
+    .where(and(eq(missions.teamId, teamId), eq(missions.name, SHARED_LASER_MISSION_NAME)));
+  if (existing) return { missionId: existing.id, created: false };
+  const [author] = await db.select().from(user).where(eq(user.id, authorUserId));
+  if (!author) throw new Error(`seedSharedLaserMission: no user ${authorUserId}`);
+  const actor: Actor = { userId: author.id, email: author.email, name: author.name, teamId, role: "engineer" };
+  const parsed = parsePlan(sharedLaserDemoPlan());
+  if (!parsed.ok)
+    throw new Error(
+      `shared-laser demo plan is invalid: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`,
+    );
+  const best = checkPlan(parsed.plan).schedules?.[0]?.bestSplit;
+  if (!best) throw new Error("the shared-laser demo plan has no best split");
+  return inTransaction(async (tx) => {
+    const mission = await createMissionIn(tx, actor, SHARED_LASER_MISSION_NAME, SHARED_LASER_MISSION_DESCRIPTION);
+    await replaceDraft(tx, mission.id, parsed.plan);
+    await saveAndCheck(tx, mission.id, actor, {
+      action: "import",
+      entity: "plan",
+      summary: "Loaded the invented shared-laser demo plan (demo data).",
+    });
+    const [laser] = await tx.select().from(lasers).where(eq(lasers.missionId, mission.id));
+    if (!laser?.schedule) throw new Error("the shared-laser demo laser has no schedule");
+    await tx
+      .update(lasers)
+      .set({
+        schedule: {
+          ...laser.schedule,
+          dwells: laser.schedule.dwells.map((d, j) => ({ ...d, dwellMs: best.dwellsMs[j]! })),
+        },
+        version: laser.version + 1,
+        updatedAt: new Date(),
+      })
+      .where(eq(lasers.id, laser.id));
+    const revision = await saveAndCheck(tx, mission.id, actor, {
+      action: "update",
+      entity: `laser ${laser.key}`,
+      summary: `Applied the best split of laser ${laser.key}'s schedule (demo data).`,
+    });
+    return { missionId: mission.id, created: true, revision: revision.number };
+  });
+}
