@@ -2,6 +2,7 @@ import type { Plan } from "@/schemas/plan";
 import { chainContext } from "./internals/chain-context";
 import { channelResult } from "./internals/channel-result";
 import { evaluateChain } from "./internals/evaluate-chain";
+import { optimalLoMW } from "./internals/noise-budget";
 import { temperatureWindowAt } from "./internals/temperature-window";
 import type { WorkCounter } from "./internals/work-counter";
 import { feasibilityMap } from "./feasibility-map";
@@ -54,6 +55,7 @@ export function checkPlan(plan: Plan, options: CheckOptions = {}): ResultDocumen
       placeReason: place.placeReason,
       temperatureWindowK: window.intervalsK,
       temperatureMarginK: window.marginK,
+      ...(ctx.noise ? { optimalLoPowerMW: optimalLoMW(ctx.noise, ctx.detector.maxInputMW) } : {}),
     });
     for (const c of evaluation.channels) byChannelId.set(c.ch.channel.id, channelResult(c));
     spurs.push(...evaluation.spurs);
