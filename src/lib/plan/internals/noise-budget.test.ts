@@ -73,6 +73,8 @@ describe("known answers", () => {
     const f = checkPlan(plan).findings.find((x) => x.code === "carrier-dominates-lo")!;
     expect(f.message).toContain("×3.48 (+5.4 dB)");
     expect(f.data).toEqual({ carrierMW: chainContext(plan, "A").carrierMW, loMW: 2 });
+    // docs/plan-format.md §13.8, worked by hand: T_Q = 8.7975/(0.99·10^(−0.3)) = 17.7306 K, total 61.718 K
+    expect(b.totalK).toBeCloseTo(61.718, 3);
     expect(b.source).toBe("entered");
     expect(b.enteredK).toBe(5000);
     expect(b.ratio).toBeCloseTo(5000 / b.totalK, 12);
