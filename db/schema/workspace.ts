@@ -13,6 +13,13 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 import { organization } from "./auth";
+import {
+  chainNoiseColumns,
+  channelNoiseColumns,
+  detectorNoiseColumns,
+  laserNoiseColumns,
+  resonatorNoiseColumns,
+} from "./noise-columns";
 
 /**
  * The mission workspace: a mission's hardware, receiver chains, channels and
@@ -90,6 +97,7 @@ export const lasers = pgTable(
     lockModulationMHz: doublePrecision("lock_modulation_mhz").notNull(),
     lockModulationIndex: doublePrecision("lock_modulation_index").notNull(),
     lockOrders: integer("lock_orders").notNull(),
+    ...laserNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -106,6 +114,7 @@ export const resonators = pgTable(
     position: integer("position").notNull(),
     fsrGHz: doublePrecision("fsr_ghz").notNull(),
     loadedQ: doublePrecision("loaded_q").notNull(),
+    ...resonatorNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -124,6 +133,7 @@ export const detectors = pgTable(
     maxGHz: doublePrecision("max_ghz").notNull(),
     maxInputMW: doublePrecision("max_input_mw").notNull(),
     sampleRateGHz: doublePrecision("sample_rate_ghz"),
+    ...detectorNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -156,6 +166,7 @@ export const chains = pgTable(
     pathLossDB: doublePrecision("path_loss_db").notNull(),
     carrierRejectionDB: doublePrecision("carrier_rejection_db").notNull().default(0),
     sharedIf: boolean("shared_if").notNull().default(false),
+    ...chainNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -182,6 +193,7 @@ export const channels = pgTable(
     receiverK: doublePrecision("receiver_k").notNull(),
     gainStability: doublePrecision("gain_stability").notNull().default(0),
     requiredNedtK: doublePrecision("required_nedt_k"),
+    ...channelNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),

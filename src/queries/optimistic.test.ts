@@ -17,6 +17,7 @@ const ch = (id: string, centerGHz: number): Channel => ({
   receiverK: 5000,
   gainStability: 0,
   requiredNedtK: null,
+  receiverKSource: "entered",
 });
 
 describe("applyChannelEdit", () => {

@@ -33,6 +33,7 @@ import {
   rowIdSchema,
   settingsShape,
 } from "./fields";
+import { intrinsicQClears, noiseFormCreate, noiseFormFields } from "./workspace-noise";
 
 export { entityKeySchema };
 
@@ -77,7 +78,7 @@ export const DEFAULT_SETTINGS: SettingsFields = {
 
 export const lockSchema = z.object(lockShape(r), { error: "is required" }).strict();
 
-export const laserSchema = z
+const laserFields = z
   .object({
     key: entityKeySchema,
     ...laserShape(r, {
@@ -86,28 +87,36 @@ export const laserSchema = z
         .max(MAX_REACH_INTERVALS, { error: `may hold at most ${MAX_REACH_INTERVALS} intervals` }),
       lock: lockSchema,
     }),
+    ...noiseFormFields.laser,
   })
   .strict();
+export const laserSchema = laserFields.extend(noiseFormCreate.laser);
 export type LaserInput = z.infer<typeof laserSchema>;
 
-export const resonatorSchema = z
+const resonatorFields = z
   .object({
     key: entityKeySchema,
     ...resonatorShape(r),
+    ...noiseFormFields.resonator,
   })
   .strict();
+export const resonatorSchema = resonatorFields
+  .extend(noiseFormCreate.resonator)
+  .refine(intrinsicQClears, { error: "must exceed loadedQ", path: ["intrinsicQ"] });
 export type ResonatorInput = z.infer<typeof resonatorSchema>;
 
 const detectorFields = z
   .object({
     key: entityKeySchema,
     ...detectorShape(r),
+    ...noiseFormFields.detector,
   })
   .strict();
 
 export const detectorSchema = detectorFields
   .extend({
     sampleRateGHz: detectorFields.shape.sampleRateGHz.default(FIELD_DEFAULTS.detector.sampleRateGHz),
+    ...noiseFormCreate.detector,
   })
   .refine((v) => isOrdered(v.minGHz, v.maxGHz), { error: "must be above minGHz", path: ["maxGHz"] });
 export type DetectorInput = z.infer<typeof detectorSchema>;
@@ -123,12 +132,14 @@ const chainFields = z
     resonatorId: rowIdSchema,
     detectorId: rowIdSchema,
     ...chainShape(r, { rfInput: intervalGHzSchema }),
+    ...noiseFormFields.chain,
   })
   .strict();
 
 export const chainSchema = chainFields.extend({
   carrierRejectionDB: chainFields.shape.carrierRejectionDB.default(FIELD_DEFAULTS.chain.carrierRejectionDB),
   sharedIf: chainFields.shape.sharedIf.default(FIELD_DEFAULTS.chain.sharedIf),
+  ...noiseFormCreate.chain,
 });
 export type ChainInput = z.infer<typeof chainSchema>;
 
@@ -138,6 +149,7 @@ const channelFields = z
     name: requiredTextSchema(200),
     chainId: rowIdSchema,
     ...channelShape(r),
+    ...noiseFormFields.channel,
   })
   .strict();
 
@@ -147,6 +159,7 @@ export const channelSchema = channelFields
     // The forms (unlike the plan document) let gain stability be left out: an ideal receiver.
     gainStability: channelFields.shape.gainStability.default(0),
     requiredNedtK: channelFields.shape.requiredNedtK.default(FIELD_DEFAULTS.channel.requiredNedtK),
+    ...noiseFormCreate.channel,
   })
   .refine((v) => v.dsbOffsetGHz === null || dsbOffsetClears(v.dsbOffsetGHz, v.bandwidthMHz), {
     error: "must be more than half the bandwidth (bandwidthMHz/2000 GHz)",
@@ -156,8 +169,8 @@ export type ChannelInput = z.infer<typeof channelSchema>;
 
 // Updates: any subset of the fields (no defaults, so an omitted field keeps
 // its stored value) plus the version last read.
-export const laserUpdateSchema = laserSchema.partial().extend({ version: versionSchema }).strict();
-export const resonatorUpdateSchema = resonatorSchema.partial().extend({ version: versionSchema }).strict();
+export const laserUpdateSchema = laserFields.partial().extend({ version: versionSchema }).strict();
+export const resonatorUpdateSchema = resonatorFields.partial().extend({ version: versionSchema }).strict();
 export const detectorUpdateSchema = detectorFields.partial().extend({ version: versionSchema }).strict();
 export const chainUpdateSchema = chainFields.partial().extend({ version: versionSchema }).strict();
 export const channelUpdateSchema = channelFields.partial().extend({ version: versionSchema }).strict();

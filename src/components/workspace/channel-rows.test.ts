@@ -18,6 +18,7 @@ const channel = (key: string, over: Partial<Channel> = {}): Channel => ({
   receiverK: 5000,
   gainStability: 0,
   requiredNedtK: 20,
+  receiverKSource: "entered",
   ...over,
 });
 

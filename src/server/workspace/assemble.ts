@@ -7,6 +7,7 @@ import { PLAN_FORMAT } from "@/schemas/plan";
 import type { Queryable } from "@/server/core/db";
 import { notFound } from "@/server/core/http";
 import { channelFigures } from "./mappers";
+import { chainNoise, channelNoise, detectorNoise, laserNoise, resonatorNoise } from "./noise-fields";
 
 /**
  * Assembles the `heterolane.plan/1` document of a mission's current draft
@@ -68,14 +69,16 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       stepMHz: l.stepMHz,
       driftMHz: l.driftMHz,
       lock: { modulationMHz: l.lockModulationMHz, modulationIndex: l.lockModulationIndex, orders: l.lockOrders },
+      ...laserNoise(l),
     })),
-    resonators: rs.map((r) => ({ id: r.key, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ })),
+    resonators: rs.map((r) => ({ id: r.key, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ, ...resonatorNoise(r) })),
     detectors: ds.map((d) => ({
       id: d.key,
       minGHz: d.minGHz,
       maxGHz: d.maxGHz,
       maxInputMW: d.maxInputMW,
       sampleRateGHz: d.sampleRateGHz,
+      ...detectorNoise(d),
     })),
     chains: cs.map((c) => ({
       id: c.key,
@@ -90,12 +93,14 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       pathLossDB: c.pathLossDB,
       carrierRejectionDB: c.carrierRejectionDB,
       sharedIf: c.sharedIf,
+      ...chainNoise(c),
     })),
     channels: chs.map((ch) => ({
       id: ch.key,
       name: ch.name,
       chain: chainKey.get(ch.chainId) ?? "",
       ...channelFigures(ch),
+      ...channelNoise(ch),
     })),
   };
 }

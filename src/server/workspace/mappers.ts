@@ -1,6 +1,7 @@
 import "server-only";
 import type { Chain, Channel, Detector, Laser, Mission, PlanSettingsRow, Resonator } from "@db/schema";
 import type { ChainInput, ChannelInput, DetectorInput, LaserInput, ResonatorInput } from "@/schemas/workspace";
+import { chainNoise, channelNoise, detectorNoise, laserNoise, resonatorNoise } from "./noise-fields";
 
 /**
  * Row ↔ API entity mapping. API entities mirror the plan document fields
@@ -25,6 +26,7 @@ export const laserDto = (r: Laser) => ({
   stepMHz: r.stepMHz,
   driftMHz: r.driftMHz,
   lock: { modulationMHz: r.lockModulationMHz, modulationIndex: r.lockModulationIndex, orders: r.lockOrders },
+  ...laserNoise(r),
 });
 export const laserInputOf = (r: Laser): LaserInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = laserDto(r);
@@ -41,15 +43,28 @@ export const laserValues = (i: LaserInput) => ({
   lockModulationMHz: i.lock.modulationMHz,
   lockModulationIndex: i.lock.modulationIndex,
   lockOrders: i.lock.orders,
+  ...laserNoise(i),
 });
 
-export const resonatorDto = (r: Resonator) => ({ ...stamps(r), key: r.key, fsrGHz: r.fsrGHz, loadedQ: r.loadedQ });
+export const resonatorDto = (r: Resonator) => ({
+  ...stamps(r),
+  key: r.key,
+  fsrGHz: r.fsrGHz,
+  loadedQ: r.loadedQ,
+  ...resonatorNoise(r),
+});
 export const resonatorInputOf = (r: Resonator): ResonatorInput => ({
   key: r.key,
   fsrGHz: r.fsrGHz,
   loadedQ: r.loadedQ,
+  ...resonatorNoise(r),
 });
-export const resonatorValues = (i: ResonatorInput) => ({ key: i.key, fsrGHz: i.fsrGHz, loadedQ: i.loadedQ });
+export const resonatorValues = (i: ResonatorInput) => ({
+  key: i.key,
+  fsrGHz: i.fsrGHz,
+  loadedQ: i.loadedQ,
+  ...resonatorNoise(i),
+});
 
 export const detectorDto = (r: Detector) => ({
   ...stamps(r),
@@ -58,6 +73,7 @@ export const detectorDto = (r: Detector) => ({
   maxGHz: r.maxGHz,
   maxInputMW: r.maxInputMW,
   sampleRateGHz: r.sampleRateGHz,
+  ...detectorNoise(r),
 });
 export const detectorInputOf = (r: Detector): DetectorInput => ({
   key: r.key,
@@ -65,6 +81,7 @@ export const detectorInputOf = (r: Detector): DetectorInput => ({
   maxGHz: r.maxGHz,
   maxInputMW: r.maxInputMW,
   sampleRateGHz: r.sampleRateGHz,
+  ...detectorNoise(r),
 });
 export const detectorValues = (i: DetectorInput) => ({ ...i });
 
@@ -82,6 +99,7 @@ export const chainDto = (r: Chain) => ({
   pathLossDB: r.pathLossDB,
   carrierRejectionDB: r.carrierRejectionDB,
   sharedIf: r.sharedIf,
+  ...chainNoise(r),
 });
 export const chainInputOf = (r: Chain): ChainInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = chainDto(r);
@@ -101,6 +119,7 @@ export const chainValues = (i: ChainInput) => ({
   pathLossDB: i.pathLossDB,
   carrierRejectionDB: i.carrierRejectionDB,
   sharedIf: i.sharedIf,
+  ...chainNoise(i),
 });
 
 /** The measured and required quantities of a channel, in plan-document order (shared by every row ↔ plan mapping). */
@@ -140,6 +159,7 @@ export const channelDto = (r: Channel) => ({
   receiverK: r.receiverK,
   gainStability: r.gainStability,
   requiredNedtK: r.requiredNedtK,
+  ...channelNoise(r),
 });
 export const channelInputOf = (r: Channel): ChannelInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = channelDto(r);

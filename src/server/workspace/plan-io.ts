@@ -11,6 +11,7 @@ import { getMissionRow, lockMission } from "@/server/core/mission-scope";
 import { assemblePlan } from "./assemble";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { channelFigures } from "./mappers";
+import { chainNoise, channelNoise, detectorNoise, laserNoise, resonatorNoise } from "./noise-fields";
 
 /**
  * The `heterolane.plan/1` document of the mission's current draft. No team
@@ -131,6 +132,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               lockModulationMHz: l.lock.modulationMHz,
               lockModulationIndex: l.lock.modulationIndex,
               lockOrders: l.lock.orders,
+              ...laserNoise(l),
             })),
           )
           .returning({ id: lasers.id, key: lasers.key })
@@ -147,6 +149,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               key: r.id,
               fsrGHz: r.fsrGHz,
               loadedQ: r.loadedQ,
+              ...resonatorNoise(r),
             })),
           )
           .returning({ id: resonators.id, key: resonators.key })
@@ -165,6 +168,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               maxGHz: d.maxGHz,
               maxInputMW: d.maxInputMW,
               sampleRateGHz: d.sampleRateGHz,
+              ...detectorNoise(d),
             })),
           )
           .returning({ id: detectors.id, key: detectors.key })
@@ -191,6 +195,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               pathLossDB: c.pathLossDB,
               carrierRejectionDB: c.carrierRejectionDB,
               sharedIf: c.sharedIf,
+              ...chainNoise(c),
             })),
           )
           .returning({ id: chains.id, key: chains.key })
@@ -205,6 +210,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
         name: ch.name,
         chainId: chainIds.get(ch.chain)!,
         ...channelFigures(ch),
+        ...channelNoise(ch),
       })),
     );
 }
