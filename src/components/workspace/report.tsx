@@ -13,6 +13,7 @@ import { countBySeverity } from "./findings";
 import { formatNumber } from "./format";
 import { ChainsSection } from "./report/chains-section";
 import { ChannelsSection } from "./report/channels-section";
+import { NoiseBudgetSection } from "./report/noise-budget-section";
 import { FindingsSection } from "./report/findings-section";
 import { HardwareSection } from "./report/hardware-section";
 import { Section } from "./report/section";
@@ -125,6 +126,8 @@ export function MissionReport({ missionId }: { missionId: string }) {
       />
 
       <ChannelsSection rows={rows} />
+
+      <NoiseBudgetSection rows={rows} />
 
       <FindingsSection findings={findings} />
 
