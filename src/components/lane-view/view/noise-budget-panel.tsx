@@ -143,7 +143,7 @@ export function NoiseBudgetPanel({ plan }: { plan: Plan }) {
                   strokeWidth={2}
                   strokeDasharray="4 2"
                 />
-                <text x={x(limitK)} y={PAD.top - 9} fontSize={10} textAnchor="middle">
+                <text x={x(limitK)} y={PAD.top - 9} fontSize={10} textAnchor={x(limitK) > WIDTH / 2 ? "end" : "start"}>
                   {`budget from the requirement: ${fmt(limitK, 1)} K`}
                 </text>
               </>
