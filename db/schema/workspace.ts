@@ -13,6 +13,13 @@ import {
   uuid,
 } from "drizzle-orm/pg-core";
 import { organization } from "./auth";
+import {
+  chainNoiseColumns,
+  channelNoiseColumns,
+  detectorNoiseColumns,
+  laserNoiseColumns,
+  resonatorNoiseColumns,
+} from "./noise-columns";
 
 /**
  * The mission workspace: a mission's hardware, receiver chains, channels and
@@ -105,6 +112,7 @@ export const lasers = pgTable(
     lockOrders: integer("lock_orders").notNull(),
     /** The observation schedule (plan format version 2), or null. */
     schedule: jsonb("schedule").$type<StoredSchedule | null>(),
+    ...laserNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -123,6 +131,7 @@ export const resonators = pgTable(
     loadedQ: doublePrecision("loaded_q").notNull(),
     /** Plan format 2: change of the FSR per kelvin of resonator temperature (MHz/K, signed). */
     fsrShiftMHzPerK: doublePrecision("fsr_shift_mhz_per_k").notNull().default(0),
+    ...resonatorNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -141,6 +150,7 @@ export const detectors = pgTable(
     maxGHz: doublePrecision("max_ghz").notNull(),
     maxInputMW: doublePrecision("max_input_mw").notNull(),
     sampleRateGHz: doublePrecision("sample_rate_ghz"),
+    ...detectorNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -175,6 +185,7 @@ export const chains = pgTable(
     sharedIf: boolean("shared_if").notNull().default(false),
     /** Plan format 2: ± excursion of the resonator temperature while observing (K, 0..50). */
     temperatureExcursionK: doublePrecision("temperature_excursion_k").notNull().default(0),
+    ...chainNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),
@@ -207,6 +218,7 @@ export const channels = pgTable(
       .default("slot"),
     /** Plan format 2: allowed error of the effective centre frequency (MHz), or null for none. */
     centreToleranceMHz: doublePrecision("centre_tolerance_mhz"),
+    ...channelNoiseColumns(),
     version: version(),
     createdAt: created(),
     updatedAt: updated(),

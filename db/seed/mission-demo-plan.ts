@@ -39,6 +39,7 @@ const lock = { modulationMHz: 1500, modulationIndex: 0.2, orders: 1 };
 
 export function demoPlan(): PlanInput {
   return {
+    // version 2 for the noise-budget inputs of WGM-183 and H2O-183 (docs/plan-format.md §14)
     format: "heterolane.plan/2",
     name: DEMO_MISSION_NAME,
     settings: { guardMHz: 50, imageRejectionDB: 25, spurMaxOrder: 5, replicaLimitDB: -20 },
@@ -89,7 +90,8 @@ export function demoPlan(): PlanInput {
     ],
     resonators: [
       { id: "WGM-118", fsrGHz: 118.75, loadedQ: 150000, fsrShiftMHzPerK: -4.07 },
-      { id: "WGM-183", fsrGHz: 183.31, loadedQ: 150000, fsrShiftMHzPerK: -6.28 },
+      // an invented measured conversion efficiency, so the 183 GHz channels show their noise budget
+      { id: "WGM-183", fsrGHz: 183.31, loadedQ: 150000, fsrShiftMHzPerK: -6.28, conversionEfficiency: 0.01 },
       { id: "WGM-243", fsrGHz: 243.2, loadedQ: 150000, fsrShiftMHzPerK: -8.33 },
       { id: "WGM-325", fsrGHz: 325.15, loadedQ: 150000, fsrShiftMHzPerK: -11.14 },
     ],
@@ -127,6 +129,8 @@ export function demoPlan(): PlanInput {
         carrierRejectionDB: 10,
         sharedIf: false,
         temperatureExcursionK: 0.5,
+        frontEndLossDB: 0.5,
+        frontEndTemperatureK: 290,
       },
       {
         id: "WIN-243",

@@ -19,6 +19,7 @@ const ch = (id: string, centerGHz: number): Channel => ({
   requiredNedtK: null,
   ifFilter: "slot",
   centreToleranceMHz: null,
+  receiverKSource: "entered",
 });
 
 describe("applyChannelEdit", () => {

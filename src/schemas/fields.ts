@@ -51,6 +51,10 @@ export interface FieldRules {
   temperatureExcursion(): z.ZodNumber;
   /** `slot` or `occupied`: which IF band a channel's filter passes. */
   ifFilter(): z.ZodEnum<{ slot: "slot"; occupied: "occupied" }>;
+  /** An efficiency or coupling share: above 0, at most 1. */
+  efficiency(): z.ZodNumber;
+  /** `entered` or `computed`: where a channel's receiver temperature comes from. */
+  receiverKSource(): z.ZodEnum<{ entered: "entered"; computed: "computed" }>;
 }
 
 /** The largest value of a PostgreSQL `integer` column (2³¹ − 1; PostgreSQL manual §8.1.1 "Integer Types"). */
@@ -65,6 +69,8 @@ export const SIDEBANDS = ["upper", "lower"] as const;
 export const IF_FILTERS = ["slot", "occupied"] as const;
 /** The largest resonator temperature excursion a chain may state (K): well beyond any controlled resonator. */
 export const MAX_TEMPERATURE_EXCURSION_K = 50;
+/** A channel's receiver temperature is the one entered (measured), or the one its noise budget computes. */
+export const RECEIVER_K_SOURCES = ["entered", "computed"] as const;
 
 function buildRules(dialect: "document" | "form"): FieldRules {
   const form = dialect === "form";
@@ -103,6 +109,9 @@ function buildRules(dialect: "document" | "form"): FieldRules {
         .gte(0, say("must be 0 or more"))
         .lte(MAX_TEMPERATURE_EXCURSION_K, say(`must be ${MAX_TEMPERATURE_EXCURSION_K} or less`)),
     ifFilter: () => (form ? z.enum(IF_FILTERS, { error: "must be slot or occupied" }) : z.enum(IF_FILTERS)),
+    efficiency: () => number().gt(0, say("must be greater than 0")).lte(1, say("must be 1 or less")),
+    receiverKSource: () =>
+      form ? z.enum(RECEIVER_K_SOURCES, { error: "must be entered or computed" }) : z.enum(RECEIVER_K_SOURCES),
   };
 }
 
@@ -291,6 +300,59 @@ export const channelV2Shape = (r: FieldRules) => ({
   ifFilter: r.ifFilter(),
   centreToleranceMHz: r.positive().nullable(),
 });
+
+// ---------------------------------------------------------------- fields of version 2 (the noise budget)
+
+/**
+ * The noise-budget fields of `heterolane.plan/2` (docs/plan-format.md §14
+ * "Version 2: the receiver noise budget"), per entity, in document order;
+ * every one optional (`null` or a neutral default), listed with its default
+ * in `plan/versions.ts`.
+ */
+export const laserNoiseShape = (r: FieldRules) => ({
+  carrierRinDBcPerHz: r.number().nullable(),
+  loRinDBcPerHz: r.number().nullable(),
+  carrierFloorDBcPerHz: r.number().nullable(),
+  loFloorDBcPerHz: r.number().nullable(),
+  carrierPreFilterDB: r.nonNegative(),
+  loPreFilterDB: r.nonNegative(),
+});
+export const resonatorNoiseShape = (r: FieldRules) => ({
+  intrinsicQ: r.positive().nullable(),
+  conversionEfficiency: r.efficiency().nullable(),
+  g0Hz: r.positive().nullable(),
+  mmWaveQ: r.positive().nullable(),
+  mmWaveCouplingRatio: r.efficiency().nullable(),
+});
+export const detectorNoiseShape = (r: FieldRules) => ({
+  responsivityAPerW: r.positive().nullable(),
+  quantumEfficiency: r.efficiency().nullable(),
+  noiseCurrentPAPerRtHz: r.nonNegative().nullable(),
+  cmrrDB: r.nonNegative().nullable(),
+});
+export const chainNoiseShape = (r: FieldRules) => ({
+  frontEndLossDB: r.nonNegative(),
+  frontEndTemperatureK: r.nonNegative(),
+});
+export const channelNoiseShape = (r: FieldRules) => ({
+  receiverKSource: r.receiverKSource(),
+});
+
+/** The values the noise-budget fields take when left out (none of them changes a result). */
+export const NOISE_FIELD_DEFAULTS = {
+  laser: {
+    carrierRinDBcPerHz: null,
+    loRinDBcPerHz: null,
+    carrierFloorDBcPerHz: null,
+    loFloorDBcPerHz: null,
+    carrierPreFilterDB: 0,
+    loPreFilterDB: 0,
+  },
+  resonator: { intrinsicQ: null, conversionEfficiency: null, g0Hz: null, mmWaveQ: null, mmWaveCouplingRatio: null },
+  detector: { responsivityAPerW: null, quantumEfficiency: null, noiseCurrentPAPerRtHz: null, cmrrDB: null },
+  chain: { frontEndLossDB: 0, frontEndTemperatureK: 290 },
+  channel: { receiverKSource: "entered" },
+} as const;
 
 /** The values a complete entity takes for a field left out (the "if omitted" column of docs/plan-format.md §2.5–§2.7; the forms send partial updates without them). */
 export const FIELD_DEFAULTS = {

@@ -35,7 +35,7 @@ export {
   type PlanChannel,
 } from "./plan/document";
 export { crossFieldIssues } from "./plan/cross-field";
-export { VERSION_2_FIELDS, versionIssues, type PlanFormat } from "./plan/versions";
+export { VERSION_2_FIELDS, VERSION_2_NOISE_FIELDS, versionIssues, type PlanFormat } from "./plan/versions";
 export { formatPath } from "./plan/format-path";
 export type { PlanIssue } from "./plan/messages";
 export { jsonErrorOffset } from "./plan/json-text";

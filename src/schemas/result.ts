@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { RESULT_FORMAT, RULE_ORDER, SEVERITIES, SPUR_FAMILIES } from "@/lib/plan/types";
+import { NOISE_TERMS, RESULT_FORMAT, RULE_ORDER, SEVERITIES, SPUR_FAMILIES } from "@/lib/plan/types";
 
 /**
  * The zod schema of the result document `heterolane.result/2`
@@ -52,8 +52,28 @@ export const chainResultSchema = z
     placeReason: z.union([z.null(), z.literal("no-feasible-interval"), z.literal("no-grid-point")]),
     temperatureWindowK: z.array(pair()),
     temperatureMarginK: nullable(num()),
+    optimalLoPowerMW: nullable(num().gt(0)).optional().meta({
+      description:
+        "LO power that minimises the receiver temperature without pd-overload, mW, or null; only with a noise budget (§14.5)",
+    }),
   })
   .meta({ id: "ChainResult" });
+
+export const noiseBudgetSchema = z
+  .strictObject({
+    source: z.enum(["computed", "entered"]),
+    totalK: num().gte(0),
+    terms: z.array(z.strictObject({ term: z.enum(NOISE_TERMS), kelvin: num().gte(0) })),
+    enteredK: nullable(num().gte(0)),
+    ratio: nullable(num()),
+    conversionEfficiency: num().gt(0).lte(1),
+    conversionEfficiencySource: z.enum(["entered", "computed"]),
+  })
+  .meta({
+    id: "NoiseBudget",
+    description:
+      "A channel's receiver temperature computed from the hardware, term by term, in K at the antenna (§14.4)",
+  });
 
 export const channelResultSchema = z
   .strictObject({
@@ -66,6 +86,7 @@ export const channelResultSchema = z
     nedtK: nullable(num()),
     lockReplicaDB: num(),
     envelope: channelEnvelopeSchema,
+    noiseBudget: noiseBudgetSchema.optional(),
   })
   .meta({ id: "ChannelResult" });
 

@@ -37,6 +37,7 @@ import {
   rowIdSchema,
   settingsShape,
 } from "./fields";
+import { intrinsicQClears, noiseFormCreate, noiseFormFields } from "./workspace-noise";
 
 export { entityKeySchema };
 
@@ -81,7 +82,7 @@ export const DEFAULT_SETTINGS: SettingsFields = {
 
 export const lockSchema = z.object(lockShape(r), { error: "is required" }).strict();
 
-export const laserSchema = z
+const laserFields = z
   .object({
     key: entityKeySchema,
     ...laserShape(r, {
@@ -90,8 +91,10 @@ export const laserSchema = z
         .max(MAX_REACH_INTERVALS, { error: `may hold at most ${MAX_REACH_INTERVALS} intervals` }),
       lock: lockSchema,
     }),
+    ...noiseFormFields.laser,
   })
   .strict();
+export const laserSchema = laserFields.extend(noiseFormCreate.laser);
 export type LaserInput = z.infer<typeof laserSchema>;
 
 const resonatorFields = z
@@ -99,24 +102,29 @@ const resonatorFields = z
     key: entityKeySchema,
     ...resonatorShape(r),
     ...resonatorV2Shape(r),
+    ...noiseFormFields.resonator,
   })
   .strict();
-
-export const resonatorSchema = resonatorFields.extend({
-  fsrShiftMHzPerK: resonatorFields.shape.fsrShiftMHzPerK.default(FIELD_DEFAULTS.resonator.fsrShiftMHzPerK),
-});
+export const resonatorSchema = resonatorFields
+  .extend({
+    fsrShiftMHzPerK: resonatorFields.shape.fsrShiftMHzPerK.default(FIELD_DEFAULTS.resonator.fsrShiftMHzPerK),
+    ...noiseFormCreate.resonator,
+  })
+  .refine(intrinsicQClears, { error: "must exceed loadedQ", path: ["intrinsicQ"] });
 export type ResonatorInput = z.infer<typeof resonatorSchema>;
 
 const detectorFields = z
   .object({
     key: entityKeySchema,
     ...detectorShape(r),
+    ...noiseFormFields.detector,
   })
   .strict();
 
 export const detectorSchema = detectorFields
   .extend({
     sampleRateGHz: detectorFields.shape.sampleRateGHz.default(FIELD_DEFAULTS.detector.sampleRateGHz),
+    ...noiseFormCreate.detector,
   })
   .refine((v) => isOrdered(v.minGHz, v.maxGHz), { error: "must be above minGHz", path: ["maxGHz"] });
 export type DetectorInput = z.infer<typeof detectorSchema>;
@@ -133,6 +141,7 @@ const chainFields = z
     detectorId: rowIdSchema,
     ...chainShape(r, { rfInput: intervalGHzSchema }),
     ...chainV2Shape(r),
+    ...noiseFormFields.chain,
   })
   .strict();
 
@@ -140,6 +149,7 @@ export const chainSchema = chainFields.extend({
   carrierRejectionDB: chainFields.shape.carrierRejectionDB.default(FIELD_DEFAULTS.chain.carrierRejectionDB),
   sharedIf: chainFields.shape.sharedIf.default(FIELD_DEFAULTS.chain.sharedIf),
   temperatureExcursionK: chainFields.shape.temperatureExcursionK.default(FIELD_DEFAULTS.chain.temperatureExcursionK),
+  ...noiseFormCreate.chain,
 });
 export type ChainInput = z.infer<typeof chainSchema>;
 
@@ -150,6 +160,7 @@ const channelFields = z
     chainId: rowIdSchema,
     ...channelShape(r),
     ...channelV2Shape(r),
+    ...noiseFormFields.channel,
   })
   .strict();
 
@@ -161,6 +172,7 @@ export const channelSchema = channelFields
     requiredNedtK: channelFields.shape.requiredNedtK.default(FIELD_DEFAULTS.channel.requiredNedtK),
     ifFilter: channelFields.shape.ifFilter.default(FIELD_DEFAULTS.channel.ifFilter),
     centreToleranceMHz: channelFields.shape.centreToleranceMHz.default(FIELD_DEFAULTS.channel.centreToleranceMHz),
+    ...noiseFormCreate.channel,
   })
   .refine((v) => v.dsbOffsetGHz === null || dsbOffsetClears(v.dsbOffsetGHz, v.bandwidthMHz), {
     error: "must be more than half the bandwidth (bandwidthMHz/2000 GHz)",
@@ -170,7 +182,7 @@ export type ChannelInput = z.infer<typeof channelSchema>;
 
 // Updates: any subset of the fields (no defaults, so an omitted field keeps
 // its stored value) plus the version last read.
-export const laserUpdateSchema = laserSchema.partial().extend({ version: versionSchema }).strict();
+export const laserUpdateSchema = laserFields.partial().extend({ version: versionSchema }).strict();
 export const resonatorUpdateSchema = resonatorFields.partial().extend({ version: versionSchema }).strict();
 export const detectorUpdateSchema = detectorFields.partial().extend({ version: versionSchema }).strict();
 export const chainUpdateSchema = chainFields.partial().extend({ version: versionSchema }).strict();

@@ -11,6 +11,7 @@ import { Legend } from "./legend";
 import { useLiveRecheck, type FrameTime } from "./use-live-recheck";
 import { ChainControls } from "./view/chain-controls";
 import { ChannelFigures } from "./view/channel-figures";
+import { NoiseBudgetPanel } from "./view/noise-budget-panel";
 import { DetailsPanel } from "./view/details-panel";
 import { FindingsPanel } from "./view/live-findings";
 import { LaneToolbar, type LaneViewMode } from "./view/toolbar";
@@ -144,6 +145,7 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
       </div>
       <ChannelFigures plan={live.plan} result={live.result} />
       <EnvelopeSection plan={live.plan} result={live.result} />
+      <NoiseBudgetPanel plan={live.plan} />
       <details className="rounded border border-ink-faint p-3">
         <summary className="cursor-pointer text-sm font-semibold">Legend</summary>
         <div className="mt-2">

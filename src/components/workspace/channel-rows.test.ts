@@ -20,6 +20,7 @@ const channel = (key: string, over: Partial<Channel> = {}): Channel => ({
   requiredNedtK: 20,
   ifFilter: "slot",
   centreToleranceMHz: null,
+  receiverKSource: "entered",
   ...over,
 });
 

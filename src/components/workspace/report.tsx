@@ -16,6 +16,7 @@ import { ChainsSection } from "./report/chains-section";
 import { ChannelsSection } from "./report/channels-section";
 import { EnvelopePlotsSection } from "./report/envelope-plots-section";
 import { EnvelopeSection } from "./report/envelope-section";
+import { NoiseBudgetSection } from "./report/noise-budget-section";
 import { FindingsSection } from "./report/findings-section";
 import { HardwareSection } from "./report/hardware-section";
 import { Section } from "./report/section";
@@ -134,6 +135,7 @@ export function MissionReport({ missionId }: { missionId: string }) {
       <EnvelopeSection rows={rows} />
 
       <SchedulesSection result={result.data} />
+      <NoiseBudgetSection rows={rows} />
 
       <FindingsSection findings={findings} />
 

@@ -27,6 +27,9 @@ const TEXT: Readonly<Record<FindingCode, string>> = {
     "The lock modulation frequency is below the linewidth: the lock sidebands sit inside the pump mode.",
   "carrier-dominates-lo": "The residual carrier at the detector is stronger than the LO and sets the shot-noise floor.",
   "pd-overload": "The optical power per photodiode exceeds the detector's limit.",
+  "thermal-noise-limited":
+    "The detector's own current noise is more than a third of the LO's shot noise: more LO power or a quieter amplifier would help.",
+  "laser-noise-dominates": "A laser's intensity noise or broadband floor adds more noise than the shot noise does.",
   "nedt-unmet": "The channel's NEΔT is above its requirement.",
   "in-protected-band": "A passband lies wholly inside a band where all emissions are prohibited (passive use).",
   "schedule-overrun": "The dwells of the laser pair's observation schedule add up to more than its cycle.",

@@ -7,6 +7,7 @@ import { mergeFindings } from "./internals/merge-findings";
 import { type ScheduledChain, scheduleRules } from "./internals/rules/schedule-rules";
 import { dutyByChain, scheduleResult, withEffectiveIntegration } from "./internals/schedule-result";
 import { scheduledLasers, scheduleTiming } from "./internals/schedule-timing";
+import { optimalLoMW } from "./internals/noise-budget";
 import { temperatureWindowAt } from "./internals/temperature-window";
 import type { WorkCounter } from "./internals/work-counter";
 import { feasibilityMap } from "./feasibility-map";
@@ -70,6 +71,7 @@ export function checkPlan(written: Plan, options: CheckOptions = {}): ResultDocu
       placeReason: place.placeReason,
       temperatureWindowK: window.intervalsK,
       temperatureMarginK: window.marginK,
+      ...(ctx.noise ? { optimalLoPowerMW: optimalLoMW(ctx.noise, ctx.detector.maxInputMW) } : {}),
     });
     for (const c of evaluation.channels) byChannelId.set(c.ch.channel.id, channelResult(c));
     spurs.push(...evaluation.spurs);

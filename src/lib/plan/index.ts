@@ -19,6 +19,7 @@ export {
   type TemperatureMapRow,
 } from "./temperature-map";
 export { temperatureWindow, type TemperatureWindow } from "./temperature-window";
+export { noiseWhatIf, type NoiseWhatIf, type NoiseWhatIfChannel, type NoiseWhatIfInputs } from "./noise-what-if";
 export type { WorkCounter } from "./internals/work-counter";
 // The engine's enumeration limits (docs/decisions/017 and 018), for the tests that bound its work.
 export { MAX_LOCK_ORDER_ENUMERATED } from "./internals/spurs";

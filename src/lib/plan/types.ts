@@ -34,6 +34,8 @@ export const RULE_ORDER = [
   "lock-inside-mode",
   "carrier-dominates-lo",
   "pd-overload",
+  "thermal-noise-limited",
+  "laser-noise-dominates",
   "nedt-unmet",
   "in-protected-band",
   "schedule-overrun",
@@ -73,6 +75,8 @@ export const RULE_SEVERITY: Readonly<Record<FindingCode, Severity>> = {
   "lock-inside-mode": "warning",
   "carrier-dominates-lo": "warning",
   "pd-overload": "error",
+  "thermal-noise-limited": "warning",
+  "laser-noise-dominates": "warning",
   "nedt-unmet": "error",
   "in-protected-band": "info",
   "schedule-overrun": "error",
@@ -90,6 +94,8 @@ export const CHAIN_LEVEL_CODES: readonly FindingCode[] = [
   "pd-overload",
   "schedule-overrun",
   "retune-blocked",
+  "thermal-noise-limited",
+  "laser-noise-dominates",
 ];
 
 const L_DEPENDENT = [
@@ -165,6 +171,48 @@ export interface ChainResult {
    * one interval of the window (K, to 1 mK); null when the window is empty.
    */
   temperatureMarginK: number | null;
+  /**
+   * The LO power (mW) that minimises the receiver temperature of every
+   * channel without `pd-overload`; null when none avoids it. Only present
+   * when the chain has a noise budget (docs/plan-format.md §14.5).
+   */
+  optimalLoPowerMW?: number | null;
+}
+
+/** The terms of a noise budget, in the order the result lists them (docs/plan-format.md §14.4). */
+export const NOISE_TERMS = [
+  "front-end-loss",
+  "quantum-limit",
+  "conversion-loss",
+  "carrier-shot-noise",
+  "detector-noise",
+  "carrier-floor",
+  "lo-floor",
+  "carrier-rin",
+  "lo-rin",
+] as const;
+export type NoiseTerm = (typeof NOISE_TERMS)[number];
+
+/** One term of a noise budget: kelvin referred to the antenna, ≥ 0. */
+export interface NoiseTermEntry {
+  term: NoiseTerm;
+  kelvin: number;
+}
+
+/** A channel's receiver noise computed from the hardware (docs/plan-format.md §14.4). */
+export interface NoiseBudget {
+  /** `computed`: NEΔT uses `totalK`; `entered`: NEΔT uses the channel's `receiverK`. */
+  source: "computed" | "entered";
+  /** The sum of the terms (K). */
+  totalK: number;
+  terms: NoiseTermEntry[];
+  /** The channel's `receiverK` when it is used (source `entered`), else null. */
+  enteredK: number | null;
+  /** `enteredK/totalK`, or null. */
+  ratio: number | null;
+  /** The photon conversion efficiency η the budget used, and where it came from. */
+  conversionEfficiency: number;
+  conversionEfficiencySource: "entered" | "computed";
 }
 
 /** A point of the operating envelope: LO shift u in MHz and resonator temperature offset t in K. */
@@ -207,6 +255,8 @@ export interface ChannelResult {
   lockReplicaDB: number;
   /** The channel over the operating envelope (version 2). */
   envelope: ChannelEnvelopeResult;
+  /** The receiver noise budget; only present when the chain's hardware gives one (version 2, §14). */
+  noiseBudget?: NoiseBudget;
 }
 
 export interface ResultDocument {

@@ -2,26 +2,33 @@ import { z } from "zod";
 import {
   channelShape,
   channelV2Shape,
+  chainNoiseShape,
   chainShape,
   chainV2Shape,
+  channelNoiseShape,
+  detectorNoiseShape,
   detectorShape,
   documentRules as r,
   FIELD_DEFAULTS,
+  laserNoiseShape,
   laserShape,
   lockShape,
   MAX_REACH_INTERVALS,
   planIdSchema as id,
+  resonatorNoiseShape,
   resonatorShape,
   resonatorV2Shape,
   settingsShape,
 } from "../fields";
 import { dwellShape, MAX_DWELLS, scheduleShape } from "../schedule-fields";
 import { crossFieldIssues } from "./cross-field";
+import { noiseFieldIssues } from "./cross-field-noise";
 import {
   PLAN_FORMAT,
   PLAN_FORMAT_V1,
   PLAN_FORMATS,
   VERSION_2_FIELDS,
+  VERSION_2_NOISE_FIELDS,
   versionIssues,
   withVersion2Fields,
 } from "./versions";
@@ -75,6 +82,18 @@ const scheduleSchema = z
     dwells: z.array(dwellSchema).min(1).max(MAX_DWELLS),
   })
   .nullable();
+/** The noise-budget fields of an entity (docs/plan-format.md §14.1), each optional with its default. */
+function noiseFields<S extends Record<string, z.ZodType>>(
+  shape: S,
+  defaults: { [K in keyof S]: unknown },
+  descriptions: { [K in keyof S]: string },
+): { [K in keyof S]: ReturnType<typeof optionalV2<S[K]>> } {
+  const out: Record<string, z.ZodType> = {};
+  for (const k of Object.keys(shape) as (keyof S & string)[]) {
+    out[k] = optionalV2(shape[k] as S[typeof k], defaults[k], descriptions[k]);
+  }
+  return out as { [K in keyof S]: ReturnType<typeof optionalV2<S[K]>> };
+}
 
 const laserSchema = z.strictObject({
   id: id(),
@@ -87,6 +106,16 @@ const laserSchema = z.strictObject({
     VERSION_2_FIELDS.lasers.schedule,
     "the laser pair's observation schedule: dwells on its chains in turn, repeated every cycle, or null",
   ),
+  ...noiseFields(laserNoiseShape(r), VERSION_2_NOISE_FIELDS.lasers, {
+    carrierRinDBcPerHz: "relative intensity noise of the carrier at the IF offsets, dBc/Hz, or null",
+    loRinDBcPerHz: "relative intensity noise of the LO at the IF offsets, dBc/Hz, or null",
+    carrierFloorDBcPerHz:
+      "broadband noise floor of the carrier laser at the signal's offset from it (about the RF frequency), dBc/Hz, or null",
+    loFloorDBcPerHz:
+      "broadband noise floor of the LO laser at the residual carrier's offset from it (about the LO offset), dBc/Hz, or null",
+    carrierPreFilterDB: "rejection of the carrier's broadband floor by a filter before the resonator, dB",
+    loPreFilterDB: "rejection of the LO's broadband floor by a filter before the detector, dB",
+  }),
 });
 
 const resonatorV2 = resonatorV2Shape(r);
@@ -98,6 +127,13 @@ const resonatorSchema = z.strictObject({
     VERSION_2_FIELDS.resonators.fsrShiftMHzPerK,
     "change of the FSR per kelvin of resonator temperature, MHz/K, signed",
   ),
+  ...noiseFields(resonatorNoiseShape(r), VERSION_2_NOISE_FIELDS.resonators, {
+    intrinsicQ: "intrinsic (unloaded) Q of the optical modes, above loadedQ, or null",
+    conversionEfficiency: "measured photon conversion efficiency η of the wanted mode, 0 < η ≤ 1, or null",
+    g0Hz: "single-photon electro-optic coupling rate g₀/2π, Hz, or null",
+    mmWaveQ: "loaded Q of the mm-wave mode, or null",
+    mmWaveCouplingRatio: "coupling share κ_ex/κ of the mm-wave mode, 0 < r ≤ 1, or null",
+  }),
 });
 
 const detector = detectorShape(r);
@@ -105,6 +141,12 @@ const detectorSchema = z.strictObject({
   id: id(),
   ...detector,
   sampleRateGHz: detector.sampleRateGHz.default(FIELD_DEFAULTS.detector.sampleRateGHz),
+  ...noiseFields(detectorNoiseShape(r), VERSION_2_NOISE_FIELDS.detectors, {
+    responsivityAPerW: "responsivity of each photodiode, A/W, or null",
+    quantumEfficiency: "quantum efficiency of the photodiodes, 0 < η ≤ 1, or null",
+    noiseCurrentPAPerRtHz: "input-referred current noise density of the balanced receiver, pA/√Hz, or null",
+    cmrrDB: "common-mode rejection of the balanced pair, dB, or null",
+  }),
 });
 
 const chain = chainShape(r, {
@@ -127,6 +169,10 @@ const chainSchema = z.strictObject({
     VERSION_2_FIELDS.chains.temperatureExcursionK,
     "± excursion of the resonator temperature about its set point while observing, K",
   ),
+  ...noiseFields(chainNoiseShape(r), VERSION_2_NOISE_FIELDS.chains, {
+    frontEndLossDB: "loss between the antenna and the resonator, dB",
+    frontEndTemperatureK: "physical temperature of that loss, K",
+  }),
 });
 
 const channel = channelShape(r);
@@ -147,6 +193,9 @@ const channelSchema = z.strictObject({
     VERSION_2_FIELDS.channels.centreToleranceMHz,
     "allowed error of the effective centre of each passband, MHz, or null",
   ),
+  ...noiseFields(channelNoiseShape(r), VERSION_2_NOISE_FIELDS.channels, {
+    receiverKSource: '"entered": NEΔT uses receiverK; "computed": NEΔT uses the noise budget\'s total',
+  }),
 });
 
 /** The field rules of the whole document, without the cross-field rules. */
@@ -170,17 +219,26 @@ const planFieldsSchema = z.strictObject({
  */
 export const planSchema = planFieldsSchema
   .superRefine((plan, ctx) => {
-    for (const issue of [...crossFieldIssues(plan), ...versionIssues(plan)]) {
+    for (const issue of [...crossFieldIssues(plan), ...noiseFieldIssues(plan), ...versionIssues(plan)]) {
       ctx.addIssue({ code: "custom", path: issue.path, message: issue.message });
     }
   })
   .transform((plan) => ({
     ...plan,
     format: PLAN_FORMAT,
-    lasers: plan.lasers.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.lasers)),
-    resonators: plan.resonators.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.resonators)),
-    chains: plan.chains.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.chains)),
-    channels: plan.channels.map((e) => withVersion2Fields(e, VERSION_2_FIELDS.channels)),
+    lasers: plan.lasers.map((e) =>
+      withVersion2Fields(withVersion2Fields(e, VERSION_2_NOISE_FIELDS.lasers), VERSION_2_FIELDS.lasers),
+    ),
+    detectors: plan.detectors.map((e) => withVersion2Fields(e, VERSION_2_NOISE_FIELDS.detectors)),
+    resonators: plan.resonators.map((e) =>
+      withVersion2Fields(withVersion2Fields(e, VERSION_2_NOISE_FIELDS.resonators), VERSION_2_FIELDS.resonators),
+    ),
+    chains: plan.chains.map((e) =>
+      withVersion2Fields(withVersion2Fields(e, VERSION_2_NOISE_FIELDS.chains), VERSION_2_FIELDS.chains),
+    ),
+    channels: plan.channels.map((e) =>
+      withVersion2Fields(withVersion2Fields(e, VERSION_2_NOISE_FIELDS.channels), VERSION_2_FIELDS.channels),
+    ),
   }));
 
 /** An entity schema without the fields version 2 added to it (a version 1 document's entity). */
@@ -205,10 +263,19 @@ export const planDocumentSchema = z
     planFieldsSchema
       .extend({
         format: z.literal(PLAN_FORMAT_V1),
-        lasers: z.array(versionOne(laserSchema, VERSION_2_FIELDS.lasers)).max(PLAN_LIMITS.lasers),
-        resonators: z.array(versionOne(resonatorSchema, VERSION_2_FIELDS.resonators)).max(PLAN_LIMITS.resonators),
-        chains: z.array(versionOne(chainSchema, VERSION_2_FIELDS.chains)).max(PLAN_LIMITS.chains),
-        channels: z.array(versionOne(channelSchema, VERSION_2_FIELDS.channels)).max(PLAN_LIMITS.channels),
+        lasers: z
+          .array(versionOne(laserSchema, { ...VERSION_2_NOISE_FIELDS.lasers, ...VERSION_2_FIELDS.lasers }))
+          .max(PLAN_LIMITS.lasers),
+        detectors: z.array(versionOne(detectorSchema, VERSION_2_NOISE_FIELDS.detectors)).max(PLAN_LIMITS.detectors),
+        resonators: z
+          .array(versionOne(resonatorSchema, { ...VERSION_2_NOISE_FIELDS.resonators, ...VERSION_2_FIELDS.resonators }))
+          .max(PLAN_LIMITS.resonators),
+        chains: z
+          .array(versionOne(chainSchema, { ...VERSION_2_NOISE_FIELDS.chains, ...VERSION_2_FIELDS.chains }))
+          .max(PLAN_LIMITS.chains),
+        channels: z
+          .array(versionOne(channelSchema, { ...VERSION_2_NOISE_FIELDS.channels, ...VERSION_2_FIELDS.channels }))
+          .max(PLAN_LIMITS.channels),
       })
       .meta({
         title: "heterolane.plan/1",

@@ -1,4 +1,5 @@
 import { crossFieldIssues } from "./cross-field";
+import { noiseFieldIssues } from "./cross-field-noise";
 import { planSchema, type Plan } from "./document";
 import { readJsonText } from "./json-text";
 import { issueMessage, orderIssues, toRawIssues, type PlanIssue } from "./messages";
@@ -18,7 +19,12 @@ export function parsePlan(input: unknown): ParsePlanResult {
   if (result.success) return { ok: true, plan: result.data };
   return {
     ok: false,
-    issues: orderIssues([...toRawIssues(result.error.issues), ...crossFieldIssues(input), ...versionIssues(input)]),
+    issues: orderIssues([
+      ...toRawIssues(result.error.issues),
+      ...crossFieldIssues(input),
+      ...noiseFieldIssues(input),
+      ...versionIssues(input),
+    ]),
   };
 }
 

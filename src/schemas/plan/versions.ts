@@ -1,4 +1,4 @@
-import { FIELD_DEFAULTS } from "../fields";
+import { FIELD_DEFAULTS, NOISE_FIELD_DEFAULTS } from "../fields";
 import type { RawIssue } from "./cross-field";
 
 /**
@@ -43,6 +43,22 @@ export const VERSION_2_FIELDS = {
 } as const;
 export type Version2Place = keyof typeof VERSION_2_FIELDS;
 
+/**
+ * The noise-budget fields version 2 adds (docs/plan-format.md §14), in the
+ * same form as `VERSION_2_FIELDS` (the fields of the operating envelope):
+ * a version 1 document may carry neither. A parsed entry lists them after
+ * its version 1 fields and before the envelope's.
+ */
+export const VERSION_2_NOISE_FIELDS = {
+  document: {},
+  settings: {},
+  lasers: NOISE_FIELD_DEFAULTS.laser,
+  resonators: NOISE_FIELD_DEFAULTS.resonator,
+  detectors: NOISE_FIELD_DEFAULTS.detector,
+  chains: NOISE_FIELD_DEFAULTS.chain,
+  channels: NOISE_FIELD_DEFAULTS.channel,
+} as const;
+
 function isRecord(v: unknown): v is Record<string, unknown> {
   return typeof v === "object" && v !== null && !Array.isArray(v);
 }
@@ -64,12 +80,14 @@ export function versionIssues(input: unknown): RawIssue[] {
       if (Object.hasOwn(obj, key)) out.push({ path: [...path, key], message: VERSION_2_FIELD_MESSAGE });
     }
   };
-  for (const [place, fields] of Object.entries(VERSION_2_FIELDS) as [Version2Place, Record<string, unknown>][]) {
-    if (place === "document") flag(input, fields, []);
-    else if (place === "settings") flag(input.settings, fields, ["settings"]);
-    else {
-      const list = input[place];
-      if (Array.isArray(list)) list.forEach((entry, i) => flag(entry, fields, [place, i]));
+  for (const table of [VERSION_2_FIELDS, VERSION_2_NOISE_FIELDS]) {
+    for (const [place, fields] of Object.entries(table) as [Version2Place, Record<string, unknown>][]) {
+      if (place === "document") flag(input, fields, []);
+      else if (place === "settings") flag(input.settings, fields, ["settings"]);
+      else {
+        const list = input[place];
+        if (Array.isArray(list)) list.forEach((entry, i) => flag(entry, fields, [place, i]));
+      }
     }
   }
   return out;

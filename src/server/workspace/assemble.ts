@@ -8,6 +8,7 @@ import type { Queryable } from "@/server/core/db";
 import { notFound } from "@/server/core/http";
 import { channelFigures } from "./mappers";
 import { scheduleOfRow } from "./schedule-rows";
+import { chainNoise, channelNoise, detectorNoise, laserNoise, resonatorNoise } from "./noise-fields";
 
 /**
  * Assembles the plan document (`heterolane.plan/2`, docs/plan-format.md
@@ -71,12 +72,14 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       driftMHz: l.driftMHz,
       lock: { modulationMHz: l.lockModulationMHz, modulationIndex: l.lockModulationIndex, orders: l.lockOrders },
       schedule: scheduleOfRow(l.schedule, chainKey),
+      ...laserNoise(l),
     })),
     resonators: rs.map((r) => ({
       id: r.key,
       fsrGHz: r.fsrGHz,
       loadedQ: r.loadedQ,
       fsrShiftMHzPerK: r.fsrShiftMHzPerK,
+      ...resonatorNoise(r),
     })),
     detectors: ds.map((d) => ({
       id: d.key,
@@ -84,6 +87,7 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       maxGHz: d.maxGHz,
       maxInputMW: d.maxInputMW,
       sampleRateGHz: d.sampleRateGHz,
+      ...detectorNoise(d),
     })),
     chains: cs.map((c) => ({
       id: c.key,
@@ -99,12 +103,14 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       carrierRejectionDB: c.carrierRejectionDB,
       sharedIf: c.sharedIf,
       temperatureExcursionK: c.temperatureExcursionK,
+      ...chainNoise(c),
     })),
     channels: chs.map((ch) => ({
       id: ch.key,
       name: ch.name,
       chain: chainKey.get(ch.chainId) ?? "",
       ...channelFigures(ch),
+      ...channelNoise(ch),
     })),
   };
 }

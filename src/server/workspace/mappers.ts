@@ -1,6 +1,7 @@
 import "server-only";
 import type { Chain, Channel, Detector, Laser, Mission, PlanSettingsRow, Resonator } from "@db/schema";
 import type { ChainInput, ChannelInput, DetectorInput, LaserInput, ResonatorInput } from "@/schemas/workspace";
+import { chainNoise, channelNoise, detectorNoise, laserNoise, resonatorNoise } from "./noise-fields";
 
 /**
  * Row ↔ API entity mapping. API entities mirror the plan document fields
@@ -26,6 +27,7 @@ export const laserDto = (r: Laser) => ({
   stepMHz: r.stepMHz,
   driftMHz: r.driftMHz,
   lock: { modulationMHz: r.lockModulationMHz, modulationIndex: r.lockModulationIndex, orders: r.lockOrders },
+  ...laserNoise(r),
 });
 export const laserInputOf = (r: Laser): LaserInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = laserDto(r);
@@ -42,6 +44,7 @@ export const laserValues = (i: LaserInput) => ({
   lockModulationMHz: i.lock.modulationMHz,
   lockModulationIndex: i.lock.modulationIndex,
   lockOrders: i.lock.orders,
+  ...laserNoise(i),
 });
 
 export const resonatorDto = (r: Resonator) => ({
@@ -50,18 +53,21 @@ export const resonatorDto = (r: Resonator) => ({
   fsrGHz: r.fsrGHz,
   loadedQ: r.loadedQ,
   fsrShiftMHzPerK: r.fsrShiftMHzPerK,
+  ...resonatorNoise(r),
 });
 export const resonatorInputOf = (r: Resonator): ResonatorInput => ({
   key: r.key,
   fsrGHz: r.fsrGHz,
   loadedQ: r.loadedQ,
   fsrShiftMHzPerK: r.fsrShiftMHzPerK,
+  ...resonatorNoise(r),
 });
 export const resonatorValues = (i: ResonatorInput) => ({
   key: i.key,
   fsrGHz: i.fsrGHz,
   loadedQ: i.loadedQ,
   fsrShiftMHzPerK: i.fsrShiftMHzPerK,
+  ...resonatorNoise(i),
 });
 
 export const detectorDto = (r: Detector) => ({
@@ -71,6 +77,7 @@ export const detectorDto = (r: Detector) => ({
   maxGHz: r.maxGHz,
   maxInputMW: r.maxInputMW,
   sampleRateGHz: r.sampleRateGHz,
+  ...detectorNoise(r),
 });
 export const detectorInputOf = (r: Detector): DetectorInput => ({
   key: r.key,
@@ -78,6 +85,7 @@ export const detectorInputOf = (r: Detector): DetectorInput => ({
   maxGHz: r.maxGHz,
   maxInputMW: r.maxInputMW,
   sampleRateGHz: r.sampleRateGHz,
+  ...detectorNoise(r),
 });
 export const detectorValues = (i: DetectorInput) => ({ ...i });
 
@@ -96,6 +104,7 @@ export const chainDto = (r: Chain) => ({
   carrierRejectionDB: r.carrierRejectionDB,
   sharedIf: r.sharedIf,
   temperatureExcursionK: r.temperatureExcursionK,
+  ...chainNoise(r),
 });
 export const chainInputOf = (r: Chain): ChainInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = chainDto(r);
@@ -116,6 +125,7 @@ export const chainValues = (i: ChainInput) => ({
   carrierRejectionDB: i.carrierRejectionDB,
   sharedIf: i.sharedIf,
   temperatureExcursionK: i.temperatureExcursionK,
+  ...chainNoise(i),
 });
 
 /** The measured and required quantities of a channel, in plan-document order (shared by every row ↔ plan mapping). */
@@ -161,6 +171,7 @@ export const channelDto = (r: Channel) => ({
   requiredNedtK: r.requiredNedtK,
   ifFilter: r.ifFilter,
   centreToleranceMHz: r.centreToleranceMHz,
+  ...channelNoise(r),
 });
 export const channelInputOf = (r: Channel): ChannelInput => {
   const { id: _i, version: _v, createdAt: _c, updatedAt: _u, ...rest } = channelDto(r);

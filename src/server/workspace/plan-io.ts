@@ -12,6 +12,7 @@ import { assemblePlan } from "./assemble";
 import { saveAndCheck, type RevisionInfo } from "./save-and-check";
 import { channelFigures } from "./mappers";
 import { scheduleRowOf } from "./schedule-rows";
+import { chainNoise, channelNoise, detectorNoise, laserNoise, resonatorNoise } from "./noise-fields";
 
 /**
  * The plan document (`heterolane.plan/2`) of the mission's current draft. No team
@@ -132,6 +133,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               lockModulationMHz: l.lock.modulationMHz,
               lockModulationIndex: l.lock.modulationIndex,
               lockOrders: l.lock.orders,
+              ...laserNoise(l),
             })),
           )
           .returning({ id: lasers.id, key: lasers.key })
@@ -149,6 +151,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               fsrGHz: r.fsrGHz,
               loadedQ: r.loadedQ,
               fsrShiftMHzPerK: r.fsrShiftMHzPerK,
+              ...resonatorNoise(r),
             })),
           )
           .returning({ id: resonators.id, key: resonators.key })
@@ -167,6 +170,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               maxGHz: d.maxGHz,
               maxInputMW: d.maxInputMW,
               sampleRateGHz: d.sampleRateGHz,
+              ...detectorNoise(d),
             })),
           )
           .returning({ id: detectors.id, key: detectors.key })
@@ -194,6 +198,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
               carrierRejectionDB: c.carrierRejectionDB,
               sharedIf: c.sharedIf,
               temperatureExcursionK: c.temperatureExcursionK,
+              ...chainNoise(c),
             })),
           )
           .returning({ id: chains.id, key: chains.key })
@@ -208,6 +213,7 @@ export async function replaceDraft(tx: Tx, missionId: string, plan: Plan): Promi
         name: ch.name,
         chainId: chainIds.get(ch.chain)!,
         ...channelFigures(ch),
+        ...channelNoise(ch),
       })),
     );
   // a schedule names its chains, which exist only now

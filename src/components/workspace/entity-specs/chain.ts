@@ -1,4 +1,5 @@
 import type { FieldGroup } from "../entity-form";
+import { chainNoiseGroups } from "./noise";
 import type { RefOption } from "../entity-specs";
 
 /** The form fields and new-entity defaults of a receiver chain. */
@@ -102,6 +103,7 @@ export function chainGroups(refs: {
         },
       ],
     },
+    ...chainNoiseGroups(),
   ];
 }
 

@@ -1,4 +1,5 @@
 import type { FieldGroup } from "../entity-form";
+import { channelNoiseFields } from "./noise";
 import type { RefOption } from "../entity-specs";
 
 /** The form fields and new-entity defaults of a channel. */
@@ -57,6 +58,7 @@ export function channelGroups(refs: { chains: RefOption[] }): FieldGroup[] {
           kind: "number",
           placeholder: "no requirement",
         },
+        ...channelNoiseFields(),
       ],
     },
     {

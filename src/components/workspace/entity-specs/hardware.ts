@@ -1,4 +1,5 @@
 import type { FieldGroup } from "../entity-form";
+import { detectorNoiseGroups, laserNoiseGroups, resonatorNoiseGroups } from "./noise";
 
 /** The form fields and new-entity defaults of the hardware: laser pairs, resonators and detectors. */
 
@@ -90,6 +91,7 @@ export function laserGroups(): FieldGroup[] {
         },
       ],
     },
+    ...laserNoiseGroups(),
   ];
 }
 
@@ -136,6 +138,7 @@ export function resonatorGroups(): FieldGroup[] {
         },
       ],
     },
+    ...resonatorNoiseGroups(),
   ];
 }
 
@@ -172,6 +175,7 @@ export function detectorGroups(): FieldGroup[] {
         },
       ],
     },
+    ...detectorNoiseGroups(),
   ];
 }
 

@@ -30,6 +30,7 @@ const channel: Channel = {
   requiredNedtK: 20,
   ifFilter: "slot",
   centreToleranceMHz: 5,
+  receiverKSource: "entered",
 };
 
 describe("the report's envelope sections", () => {

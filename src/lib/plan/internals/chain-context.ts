@@ -4,6 +4,8 @@ import { type EnvelopeBox, envelopeBox } from "./envelope-box";
 import { type Interval, mergeIntervals } from "./intervals";
 import { lorentzianIntegral, lorentzianSquaredIntegral } from "./lorentz";
 import { lockReplicaDB } from "./lock-replica";
+import type { NoiseBudget } from "../types";
+import { type ChainNoise, channelBudget, chainNoise, throughTransmission } from "./noise-budget";
 
 /**
  * Everything about one channel that does not depend on the LO offset L
@@ -40,6 +42,10 @@ export interface ChannelContext {
    * scale of the linewidth whatever the band's width.
    */
   envelopeStep: number;
+  /** The receiver temperature NEΔT uses (K): `receiverK`, or the budget's total when the channel's is computed. */
+  receiverK: number;
+  /** The channel's noise budget, or null when the chain has none (docs/plan-format.md §14.4). */
+  budget: NoiseBudget | null;
 }
 
 /**
@@ -88,6 +94,14 @@ export interface ChainContext {
   carrierMW: number;
   loMW: number;
   pdMW: number;
+  /**
+   * The through-port transmission at resonance that `carrierMW` includes when
+   * the resonator's intrinsic Q is given (docs/plan-format.md §14.3), else null
+   * (the upper bound of version 1).
+   */
+  throughTransmission: number | null;
+  /** The chain's noise figures, or null without a conversion efficiency (no budget). */
+  noise: ChainNoise | null;
   channels: ChannelContext[];
 }
 
@@ -109,9 +123,20 @@ export function chainContext(plan: Plan, chainId: string): ChainContext {
   const nStar = s * chain.mode;
   const modeCentre = nStar * fsr;
   const fm = laser.lock.modulationMHz / 1000;
-  const carrierMW =
+  const through = resonator.intrinsicQ === null ? null : throughTransmission(resonator.loadedQ, resonator.intrinsicQ);
+  const bound =
     laser.carrierPowerMW * (1 - chain.tapFraction) * 10 ** (-(chain.pathLossDB + chain.carrierRejectionDB) / 10);
+  const carrierMW = through === null ? bound : bound * through;
   const loMW = laser.loPowerMW;
+  const noise = chainNoise({
+    laser,
+    resonator,
+    detector,
+    chain,
+    modeGHz: Math.abs(modeCentre),
+    carrierMW,
+    loMW,
+  });
   const ctx: ChainContext = {
     plan,
     chain,
@@ -146,10 +171,16 @@ export function chainContext(plan: Plan, chainId: string): ChainContext {
     carrierMW,
     loMW,
     pdMW: (carrierMW + loMW) / 2,
+    throughTransmission: through,
+    noise,
     channels: [],
   };
   plan.channels.forEach((channel, index) => {
-    if (channel.chain === chain.id) ctx.channels.push(channelContext(ctx, channel, index));
+    if (channel.chain !== chain.id) return;
+    const computed = noise ? channelBudget(noise, channel) : null;
+    // absurd magnitudes (η near the smallest double) can overflow: such a budget is left out
+    const budget = computed && Number.isFinite(computed.totalK) ? computed : null;
+    ctx.channels.push(channelContext(ctx, channel, index, budget));
   });
   return ctx;
 }
@@ -159,6 +190,7 @@ export function channelContext(
   ctx: Pick<ChainContext, "s" | "modeCentre" | "delta" | "fm" | "beta" | "lockOrders">,
   channel: PlanChannel,
   index: number,
+  budget: NoiseBudget | null = null,
 ): ChannelContext {
   const B = channel.bandwidthMHz / 1000;
   const c = channel.centerGHz;
@@ -188,5 +220,7 @@ export function channelContext(
     occupiedFilter: channel.ifFilter === "occupied",
     centreToleranceGHz: channel.centreToleranceMHz === null ? null : channel.centreToleranceMHz / 1000,
     envelopeStep: ctx.delta / 16,
+    receiverK: budget && budget.source === "computed" ? budget.totalK : channel.receiverK,
+    budget,
   };
 }

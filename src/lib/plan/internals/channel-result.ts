@@ -46,5 +46,6 @@ export function channelResult(c: ChannelAtOffset): ChannelResult {
     nedtK: c.sensitivity ? finite(c.sensitivity.nedtK) : null,
     lockReplicaDB: c.ch.lockReplicaDB,
     envelope: envelopeResult(c.envelope),
+    ...(c.ch.budget ? { noiseBudget: c.ch.budget } : {}),
   };
 }

@@ -9,6 +9,7 @@ import { lockRules } from "./rules/lock-rules";
 import { loRules } from "./rules/lo-rules";
 import { overlapRules } from "./rules/overlap-rules";
 import { passbandRules } from "./rules/passband-rules";
+import { noiseRules } from "./rules/noise-rules";
 import { powerRules } from "./rules/power-rules";
 import { centreRules } from "./rules/centre-rules";
 import { regulatoryRules } from "./rules/regulatory-rules";
@@ -60,6 +61,7 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
   samplingRules(at, out);
   lockRules(at, out);
   powerRules(at, out);
+  noiseRules(at, out);
   passbandRules(at, out);
   centreRules(at, out);
   detectorRules(at, out);

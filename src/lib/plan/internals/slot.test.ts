@@ -25,6 +25,7 @@ function channel(over: Partial<PlanChannel>): PlanChannel {
     requiredNedtK: null,
     ifFilter: "slot",
     centreToleranceMHz: null,
+    receiverKSource: "entered",
     ...over,
   };
 }

@@ -58,7 +58,7 @@ export interface Sensitivity {
 }
 
 /**
- * `S(y) = antennaK·W(y) + receiverK` over the union of the band images;
+ * `S(y) = antennaK·W(y) + receiverK` (the channel's, or its computed budget's total) over the union of the band images;
  * `NEΔT = sqrt(∫S²/τ + (ΔG/G)²(∫S)²)/∫W`, integrals in hertz. The DSB cross
  * term `2∫M(x₁(y))M(x₂(y))dy` over the overlap of the two images is added
  * in closed form.
@@ -118,7 +118,8 @@ export function receivedSensitivity(
     unionGHz = unionLength(images);
   }
   const Hz = 1e9;
-  const { antennaK: Ta, receiverK: Tr, gainStability: g, integrationMs } = ch.channel;
+  const { antennaK: Ta, gainStability: g, integrationMs } = ch.channel;
+  const Tr = ch.receiverK;
   const intS = (Ta * intW + Tr * unionGHz) * Hz;
   const intS2 = (Ta * Ta * intW2 + 2 * Ta * Tr * intW + Tr * Tr * unionGHz) * Hz;
   const tau = integrationMs / 1000;
