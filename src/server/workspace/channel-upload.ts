@@ -203,7 +203,7 @@ export async function prepareChannelUpload(
   );
   // The engine runs here, without the lock, on the plan the apply should leave; under the lock
   // saveAndCheck uses this result only if the plan there is exactly this one.
-  const check = prepareCheck(planAfter(await assemblePlan(db, missionId), parsed.rows));
+  const check = await prepareCheck(planAfter(await assemblePlan(db, missionId), parsed.rows));
   return { prepared: { text, file, rows: parsed.rows, chainsBefore, check } };
 }
 
