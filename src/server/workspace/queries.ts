@@ -42,9 +42,10 @@ export async function getMission(actor: Actor, missionId: string, q: Queryable =
   const [r] = await q
     .select({
       m: missions,
-      status: sql<
-        string | null
-      >`(select r.status from plan_revisions r where r.mission_id = ${missions.id} order by r.number desc limit 1)`,
+      // Written out in full: drizzle names a column of the outer table without its table inside `sql`.
+      status: sql<string | null>`${sql.raw(
+        '(select r.status from plan_revisions r where r.mission_id = "missions"."id" order by r.number desc limit 1)',
+      )}`,
     })
     .from(missions)
     .where(and(eq(missions.id, missionId), eq(missions.teamId, actor.teamId)));
