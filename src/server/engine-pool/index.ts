@@ -5,8 +5,13 @@ import type { ResultDocument } from "@/lib/plan";
 import type { Plan } from "@/schemas/plan";
 import { HttpError } from "@/server/core/http";
 import { PoolError, WorkerPool } from "./pool";
+import type { EngineAnswer, EngineTask, TextCheck } from "./protocol";
 
 export { PoolError, WorkerPool } from "./pool";
+export type { EngineAnswer, EngineTask, TextCheck } from "./protocol";
+
+/** The engine pool's type: engine tasks in, their answers out. */
+export type EnginePool = WorkerPool<EngineTask, EngineAnswer>;
 
 /**
  * The server's engine pool (docs/decisions/028-api-speed.md): every check
@@ -52,12 +57,12 @@ export function spawnTypeScriptWorker(url: URL): Worker {
   return new Worker(boot, { eval: true });
 }
 
-let pool: WorkerPool<Plan, ResultDocument> | null = null;
+let pool: EnginePool | null = null;
 
 /** The process's one engine pool, started on first use (its threads on demand). */
-export function enginePool(): WorkerPool<Plan, ResultDocument> {
+export function enginePool(): EnginePool {
   if (!pool) {
-    pool = new WorkerPool<Plan, ResultDocument>({ size: enginePoolSize(), spawn: spawnEngineWorker });
+    pool = new WorkerPool<EngineTask, EngineAnswer>({ size: enginePoolSize(), spawn: spawnEngineWorker });
     // A stopping Node process (no more work) shuts the pool down; `process.exit` (Next's
     // SIGTERM/SIGINT handling) ends its threads with the process. Idle threads never hold it open.
     process.once("beforeExit", () => void closeEnginePool());
@@ -94,18 +99,32 @@ export const checkFailed = () =>
     "The engine could not check this plan (the fault is on our side and has been logged); nothing was saved.",
   );
 
+/** Runs one engine task on the pool, its faults turned into HttpErrors (422 / 503), never a 500. */
+async function runTask(task: EngineTask, what: string, engine: () => EnginePool): Promise<EngineAnswer> {
+  try {
+    return await engine().run(task);
+  } catch (err) {
+    if (!(err instanceof PoolError)) throw err;
+    console.error(`[engine-pool] check of ${what} failed (${err.kind}): ${err.message}`);
+    if (err.kind === "failed") throw checkFailed();
+    throw engineUnavailable(err.kind === "closed" ? "the server is stopping" : "the checking thread stopped");
+  }
+}
+
 /**
  * `checkPlan(plan)` run on the engine pool: the same result document, or an
  * HttpError (422 `check-failed` when the engine throws, 503
  * `engine-unavailable` when its thread dies or the pool is closing), never a 500.
  */
-export async function checkInPool(plan: Plan, engine: () => WorkerPool<Plan, ResultDocument> = enginePool) {
-  try {
-    return await engine().run(plan);
-  } catch (err) {
-    if (!(err instanceof PoolError)) throw err;
-    console.error(`[engine-pool] check of plan "${plan.name}" failed (${err.kind}): ${err.message}`);
-    if (err.kind === "failed") throw checkFailed();
-    throw engineUnavailable(err.kind === "closed" ? "the server is stopping" : "the checking thread stopped");
-  }
+export async function checkInPool(plan: Plan, engine: () => EnginePool = enginePool): Promise<ResultDocument> {
+  return (await runTask({ kind: "plan", plan }, `plan "${plan.name}"`, engine)) as ResultDocument;
+}
+
+/**
+ * `parsePlanText(text)` and, for a valid plan, `JSON.stringify(checkPlan(plan))`,
+ * both on the engine pool (POST /api/v1/check): the plan's issues or its
+ * result as JSON text; faults as in checkInPool.
+ */
+export async function checkTextInPool(text: string, engine: () => EnginePool = enginePool): Promise<TextCheck> {
+  return (await runTask({ kind: "text", text }, "a posted plan", engine)) as TextCheck;
 }

@@ -2,14 +2,24 @@ import { execFile } from "node:child_process";
 import { promisify } from "node:util";
 import fc from "fast-check";
 import { afterAll, describe, expect, it, vi } from "vitest";
-import { checkPlan, type ResultDocument } from "@/lib/plan";
-import { parsePlan, type Plan } from "@/schemas/plan";
+import { checkPlan } from "@/lib/plan";
+import { parsePlan, parsePlanText, type Plan } from "@/schemas/plan";
 import { HttpError } from "@/server/core/http";
 import { demoPlan } from "@db/seed/mission-demo-plan";
 import { limitsPlan } from "@/bench/limits-plan";
 import { validPlanArb } from "../../../tests/fixtures/plan-arbitrary";
 import { validPlanInput } from "../../../tests/fixtures/valid-plan";
-import { checkInPool, enginePoolSize, PoolError, spawnEngineWorker, spawnTypeScriptWorker, WorkerPool } from ".";
+import {
+  checkInPool,
+  checkTextInPool,
+  enginePoolSize,
+  PoolError,
+  spawnEngineWorker,
+  spawnTypeScriptWorker,
+  WorkerPool,
+  type EngineAnswer,
+  type EngineTask,
+} from ".";
 
 // Correctness of the engine pool (docs/decisions/028-api-speed.md): the
 // threads answer exactly what the engine answers in the request thread,
@@ -27,12 +37,13 @@ function plan(doc: unknown): Plan {
 const named = (name: string) => plan({ ...validPlanInput(), name });
 
 const faultyWorker = new URL("../../../tests/fixtures/engine-pool/faulty-worker.ts", import.meta.url);
-const pools: WorkerPool<Plan, ResultDocument>[] = [];
+const pools: WorkerPool<EngineTask, EngineAnswer>[] = [];
 function newPool(size: number, spawn = spawnEngineWorker) {
-  const p = new WorkerPool<Plan, ResultDocument>({ size, spawn });
+  const p = new WorkerPool<EngineTask, EngineAnswer>({ size, spawn });
   pools.push(p);
   return p;
 }
+const task = (p: Plan): EngineTask => ({ kind: "plan", plan: p });
 afterAll(async () => {
   await Promise.all(pools.map((p) => p.close()));
 });
@@ -43,7 +54,7 @@ describe("engine pool: same results as the engine in the request thread", () => 
   it("checks the demo plan and the plan at the format's limits exactly as checkPlan does", async () => {
     for (const doc of [demoPlan(), limitsPlan()]) {
       const p = plan(doc);
-      expect(await pool.run(p)).toEqual(checkPlan(p));
+      expect(await checkInPool(p, () => pool)).toEqual(checkPlan(p));
     }
   });
 
@@ -51,32 +62,45 @@ describe("engine pool: same results as the engine in the request thread", () => 
     await fc.assert(
       fc.asyncProperty(fc.array(validPlanArb, { minLength: 1, maxLength: 6 }), async (docs) => {
         const plans = docs.map(plan);
-        const answers = await Promise.all(plans.map((p) => pool.run(p)));
+        const answers = await Promise.all(plans.map((p) => checkInPool(p, () => pool)));
         answers.forEach((a, i) => expect(a).toEqual(checkPlan(plans[i]!)));
+        // The same plans as JSON text: the thread validates them too and writes the result as JSON.
+        const texts = await Promise.all(docs.map((d) => checkTextInPool(JSON.stringify(d), () => pool)));
+        texts.forEach((t, i) => expect(t).toEqual({ ok: true, json: JSON.stringify(checkPlan(plans[i]!)) }));
       }),
       { numRuns: 8 },
     );
     expect(pool.threads).toBeLessThanOrEqual(2);
     expect(pool.pending).toBe(0);
   });
+
+  it("answers the issues parsePlanText finds in a posted text, malformed JSON included", async () => {
+    const broken = JSON.stringify({ ...validPlanInput(), channels: [{ id: "x" }] });
+    for (const text of ["{ not json", "[]", broken, '{"format":"heterolane.plan/9"}']) {
+      const expected = parsePlanText(text);
+      expect(expected.ok).toBe(false);
+      if (expected.ok) continue;
+      expect(await checkTextInPool(text, () => pool)).toEqual({ ok: false, issues: expected.issues });
+    }
+  });
 });
 
 describe("engine pool: faults", () => {
   it("rejects a task whose engine throws with kind failed, and the thread goes on serving", async () => {
     const pool = newPool(1, () => spawnTypeScriptWorker(faultyWorker));
-    await expect(pool.run(named("throw"))).rejects.toMatchObject({
+    await expect(pool.run(task(named("throw")))).rejects.toMatchObject({
       kind: "failed",
       message: "engine fault for the test",
     });
     const ok = named("fine");
-    expect(await pool.run(ok)).toEqual(checkPlan(ok));
+    expect(await pool.run(task(ok))).toEqual(checkPlan(ok));
     expect(pool.threads).toBe(1);
   });
 
   it("rejects the task of a thread that dies with kind crashed, replaces the thread and runs the tasks queued behind it", async () => {
     const pool = newPool(1, () => spawnTypeScriptWorker(faultyWorker));
     const ok = named("after the crash");
-    const [crashed, after] = await Promise.allSettled([pool.run(named("exit")), pool.run(ok)]);
+    const [crashed, after] = await Promise.allSettled([pool.run(task(named("exit"))), pool.run(task(ok))]);
     expect(crashed.status).toBe("rejected");
     expect((crashed as PromiseRejectedResult).reason).toBeInstanceOf(PoolError);
     expect((crashed as PromiseRejectedResult).reason.kind).toBe("crashed");
@@ -86,9 +110,9 @@ describe("engine pool: faults", () => {
   it("refuses an input that cannot be sent to a thread, as that task's failure only", async () => {
     const pool = newPool(1);
     const bad = { ...named("unsendable"), extra: () => 1 } as unknown as Plan;
-    await expect(pool.run(bad)).rejects.toMatchObject({ kind: "failed" });
+    await expect(pool.run(task(bad))).rejects.toMatchObject({ kind: "failed" });
     const ok = named("sendable");
-    expect(await pool.run(ok)).toEqual(checkPlan(ok));
+    expect(await pool.run(task(ok))).toEqual(checkPlan(ok));
   });
 
   it("turns the engine's faults into 422 check-failed and 503 engine-unavailable answers, never a 500", async () => {
@@ -124,7 +148,11 @@ describe("engine pool: faults", () => {
 describe("engine pool: shutting down", () => {
   it("close() stops every thread, refuses the waiting and new tasks, and resolves", async () => {
     const pool = newPool(2, () => spawnTypeScriptWorker(faultyWorker));
-    const running = Promise.allSettled([pool.run(named("hang")), pool.run(named("hang")), pool.run(named("queued"))]);
+    const running = Promise.allSettled([
+      pool.run(task(named("hang"))),
+      pool.run(task(named("hang"))),
+      pool.run(task(named("queued"))),
+    ]);
     await new Promise((r) => setTimeout(r, 50));
     await pool.close();
     const settled = await running;
@@ -133,7 +161,7 @@ describe("engine pool: shutting down", () => {
       expect((s as PromiseRejectedResult).reason.kind).toBe("closed");
     }
     expect(pool.threads).toBe(0);
-    await expect(pool.run(named("late"))).rejects.toMatchObject({ kind: "closed" });
+    await expect(pool.run(task(named("late")))).rejects.toMatchObject({ kind: "closed" });
   });
 
   it("an idle pool does not hold a finished process open", async () => {
