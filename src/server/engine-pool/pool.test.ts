@@ -38,8 +38,8 @@ const named = (name: string) => plan({ ...validPlanInput(), name });
 
 const faultyWorker = new URL("../../../tests/fixtures/engine-pool/faulty-worker.ts", import.meta.url);
 const pools: WorkerPool<EngineTask, EngineAnswer>[] = [];
-function newPool(size: number, spawn = spawnEngineWorker) {
-  const p = new WorkerPool<EngineTask, EngineAnswer>({ size, spawn });
+function newPool(size: number, spawn = spawnEngineWorker, perThread?: number) {
+  const p = new WorkerPool<EngineTask, EngineAnswer>({ size, spawn, perThread });
   pools.push(p);
   return p;
 }
@@ -98,13 +98,37 @@ describe("engine pool: faults", () => {
   });
 
   it("rejects the task of a thread that dies with kind crashed, replaces the thread and runs the tasks queued behind it", async () => {
-    const pool = newPool(1, () => spawnTypeScriptWorker(faultyWorker));
+    const pool = newPool(1, () => spawnTypeScriptWorker(faultyWorker), 1);
     const ok = named("after the crash");
     const [crashed, after] = await Promise.allSettled([pool.run(task(named("exit"))), pool.run(task(ok))]);
     expect(crashed.status).toBe("rejected");
     expect((crashed as PromiseRejectedResult).reason).toBeInstanceOf(PoolError);
     expect((crashed as PromiseRejectedResult).reason.kind).toBe("crashed");
     expect(after).toEqual({ status: "fulfilled", value: checkPlan(ok) });
+  });
+
+  it("with two tasks handed to a thread, rejects both when it dies and runs the next queued task on a new thread", async () => {
+    const pool = newPool(1, () => spawnTypeScriptWorker(faultyWorker), 2);
+    const ok = named("queued behind");
+    const settled = await Promise.allSettled([
+      pool.run(task(named("exit"))),
+      pool.run(task(named("handed with it"))),
+      pool.run(task(ok)),
+    ]);
+    expect(settled.slice(0, 2).map((r) => r.status === "rejected" && r.reason.kind)).toEqual(["crashed", "crashed"]);
+    expect(settled[2]).toEqual({ status: "fulfilled", value: checkPlan(ok) });
+  });
+
+  it("hands a thread at most perThread tasks and answers each with its own result", async () => {
+    const pool = newPool(2, spawnEngineWorker, 3);
+    const plans = Array.from({ length: 9 }, (_, i) => named(`plan ${i}`));
+    const running = plans.map((p) => pool.run(task(p)));
+    expect(pool.threads).toBe(2);
+    expect(pool.handed).toEqual([3, 3]);
+    expect(pool.pending).toBe(9);
+    const answers = await Promise.all(running);
+    answers.forEach((a, i) => expect(a).toEqual(checkPlan(plans[i]!)));
+    expect(pool.pending).toBe(0);
   });
 
   it("refuses an input that cannot be sent to a thread, as that task's failure only", async () => {
