@@ -35,7 +35,8 @@ import { limitsPlan } from "./limits-plan";
 
 /**
  * Throughput of `POST /api/v1/check` (demo plan, 50 connections, 30 s) on
- * the code before this work, measured with this script on this machine
+ * the code before this work (commit 157dd27), measured with this script on
+ * this machine at a load average of about 5.5, its best run of the day
  * (docs/calculations.md, "Speed of the API").
  */
 const BEFORE_CHECK_RPS = 132.6;
