@@ -27,6 +27,11 @@ const EnvSchema = z.object({
     .string()
     .regex(/^\d$/, "HETEROLANE_TRUSTED_PROXY_HOPS must be a whole number from 0 to 9")
     .optional(),
+  // Read by the engine pool (src/server/engine-pool), which checks it again; refused here at start-up.
+  HETEROLANE_ENGINE_THREADS: z
+    .string()
+    .regex(/^([1-9]|[1-5]\d|6[0-4])$/, "HETEROLANE_ENGINE_THREADS must be a whole number from 1 to 64")
+    .optional(),
   HETEROLANE_TRUSTED_ORIGINS: z
     .string()
     .optional()

@@ -125,6 +125,20 @@ describe("every transition × every role", () => {
       }
 });
 
+describe("the mission's status is its latest revision's", () => {
+  it("GET of a mission answers the status of its newest revision in every review state", async () => {
+    for (const state of ["in-review", "baselined"] as const) {
+      const id = await missionIn(state);
+      const n = await latestNumber(id);
+      const rev = await call(team.viewer, "GET", `/api/v1/missions/${id}/revisions/${n}`);
+      const m = await call(team.viewer, "GET", `/api/v1/missions/${id}`);
+      expect(m.status).toBe(200);
+      expect(rev.body.status).toBe(state);
+      expect(m.body.status).toBe(rev.body.status);
+    }
+  });
+});
+
 describe("a baselined revision is never modified", () => {
   it("an edit after a baseline stores a new draft revision and leaves the baseline exactly as approved", async () => {
     const id = await missionIn("baselined");

@@ -125,6 +125,13 @@ function operationObject(op: Operation): Json {
   if (writes)
     responses["409"] = errorResponse("Stale `version` (or `baseRevision`): someone saved first; nothing was changed.");
   if (writes) responses["413"] = errorResponse("The body is too large.");
+  // Every write re-checks the plan (and POST /check checks one) on the engine pool (ADR 028).
+  if (writes)
+    responses["422"] = errorResponse("`check-failed`: the engine could not check the plan; nothing was saved.");
+  if (writes)
+    responses["503"] = errorResponse(
+      "`unavailable` or `engine-unavailable`: the database or the checking engine cannot be reached; nothing was saved. Retry after `Retry-After` seconds.",
+    );
   responses["429"] = errorResponse("The token's rate limit is reached; `retryAfterSeconds` says when to try again.");
   o.responses = responses;
   o.security = [{ bearerToken: [] }, { sessionCookie: [] }];

@@ -4,23 +4,15 @@ import { hashPassword } from "better-auth/crypto";
 import { and, eq } from "drizzle-orm";
 import { db } from "@db/client";
 import { account, member, organization, user } from "@db/schema";
-
-/**
- * The invented demo team and its four people, one per role. Demo data, marked
- * as such in every name. Idempotent: existing rows are kept (and the role and
- * verified flag corrected), nothing is duplicated.
- */
-export const DEMO_PASSWORD = "demo-password-2026";
-export const DEMO_TEAM = { name: "Demo: Aurora sounder team", slug: "demo-aurora" } as const;
-export const DEMO_PEOPLE = [
-  { email: "olga.owner@demo.heterolane.local", name: "Olga Owner (demo)", role: "owner" },
-  { email: "liam.lead@demo.heterolane.local", name: "Liam Lead (demo)", role: "lead" },
-  { email: "erin.engineer@demo.heterolane.local", name: "Erin Engineer (demo)", role: "engineer" },
-  { email: "victor.viewer@demo.heterolane.local", name: "Victor Viewer (demo)", role: "viewer" },
-] as const;
+import { DEMO_PASSWORD, DEMO_PEOPLE, DEMO_TEAM } from "./demo-people";
 
 const newId = () => randomBytes(16).toString("base64url");
 
+/**
+ * Seeds the invented demo team and its four people (demo-people.ts).
+ * Idempotent: existing rows are kept (and the role and verified flag
+ * corrected), nothing is duplicated.
+ */
 export async function seedDemoTeam(): Promise<{ teamId: string; userIds: Record<string, string> }> {
   const now = new Date();
   let team = (await db.select().from(organization).where(eq(organization.slug, DEMO_TEAM.slug)).limit(1))[0];

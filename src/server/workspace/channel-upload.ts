@@ -222,7 +222,7 @@ export async function prepareChannelUpload(
   );
   // The engine runs here, without the lock, on the plan the apply should leave; under the lock
   // saveAndCheck uses this result only if the plan there is exactly this one.
-  const check = prepareCheck(planAfter(await assemblePlan(db, missionId), parsed.rows, parsed.keptColumns));
+  const check = await prepareCheck(planAfter(await assemblePlan(db, missionId), parsed.rows, parsed.keptColumns));
   return { prepared: { text, file, rows: parsed.rows, keptColumns: parsed.keptColumns, chainsBefore, check } };
 }
 

@@ -18,7 +18,7 @@ import type { FindingsQuery } from "@/schemas/workspace";
 import type { Actor } from "@/server/auth/actor";
 import type { Queryable } from "@/server/core/db";
 import { notFound } from "@/server/core/http";
-import { getMissionRow } from "@/server/core/mission-scope";
+import { isUuid } from "@/server/core/input";
 import {
   chainDto,
   channelDto,
@@ -32,19 +32,25 @@ import {
 
 /** Named read queries of the workspace. Every one is scoped to the actor's team. */
 
-async function latestStatus(q: Queryable, missionId: string): Promise<string> {
-  const [r] = await q
-    .select({ status: planRevisions.status })
-    .from(planRevisions)
-    .where(eq(planRevisions.missionId, missionId))
-    .orderBy(desc(planRevisions.number))
-    .limit(1);
-  return r?.status ?? "draft";
-}
-
+/**
+ * The mission of the actor's team with the status of its latest revision,
+ * in one query (the status by a subquery; "draft" before the first
+ * revision), or 404 like getMissionRow.
+ */
 export async function getMission(actor: Actor, missionId: string, q: Queryable = db) {
-  const m = await getMissionRow(actor, missionId, q);
-  return missionDto(m, await latestStatus(q, m.id));
+  if (!isUuid(missionId)) throw notFound("mission");
+  const [r] = await q
+    .select({
+      m: missions,
+      // Written out in full: drizzle names a column of the outer table without its table inside `sql`.
+      status: sql<string | null>`${sql.raw(
+        '(select r.status from plan_revisions r where r.mission_id = "missions"."id" order by r.number desc limit 1)',
+      )}`,
+    })
+    .from(missions)
+    .where(and(eq(missions.id, missionId), eq(missions.teamId, actor.teamId)));
+  if (!r) throw notFound("mission");
+  return missionDto(r.m, r.status ?? "draft");
 }
 
 export async function listMissions(actor: Actor) {

@@ -3,11 +3,12 @@ import { isDeepStrictEqual } from "node:util";
 import { eq, sql } from "drizzle-orm";
 import { findings, missions, planRevisions } from "@db/schema";
 import { parsePlan, type Plan } from "@/schemas/plan";
-import { checkPlan, type ResultDocument } from "@/lib/plan";
+import type { ResultDocument } from "@/lib/plan";
 import type { Actor } from "@/server/auth/actor";
 import { writeActivity, type ActivityEntry } from "@/server/core/activity";
 import type { Tx } from "@/server/core/db";
 import { HttpError } from "@/server/core/http";
+import { checkInPool } from "@/server/engine-pool";
 import type { PlanEvents } from "@/server/core/plan-events";
 import { reviewPlanEvents } from "@/server/review/plan-events";
 import { assemblePlan } from "./assemble";
@@ -40,10 +41,10 @@ export interface PreparedCheck {
   result: ResultDocument;
 }
 
-/** Checks a plan document as saveAndCheck would store it, or null when it is not a valid plan. */
-export function prepareCheck(doc: unknown): PreparedCheck | null {
+/** Checks a plan document as saveAndCheck would store it (on the engine pool), or null when it is not a valid plan. */
+export async function prepareCheck(doc: unknown): Promise<PreparedCheck | null> {
   const parsed = parsePlan(doc);
-  return parsed.ok ? { plan: parsed.plan, result: checkPlan(parsed.plan) } : null;
+  return parsed.ok ? { plan: parsed.plan, result: await checkInPool(parsed.plan) } : null;
 }
 
 /** A prepared check already written as a revision row with its findings, under a placeholder number. */
@@ -141,7 +142,8 @@ export async function saveAndCheck(
       "This change would leave the plan invalid; nothing was saved.",
       parsed.issues,
     );
-  const result: ResultDocument = matches ? prepared!.result : checkPlan(parsed.plan);
+  // The engine runs on the pool's thread (src/server/engine-pool) while this transaction waits.
+  const result: ResultDocument = matches ? prepared!.result : await checkInPool(parsed.plan);
   // Placeholder numbers of staged rows are negative: they are not revisions yet.
   const [{ max } = { max: null }] = await tx
     .select({ max: sql<number | null>`max(${planRevisions.number}) filter (where ${planRevisions.number} > 0)` })

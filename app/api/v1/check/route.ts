@@ -1,6 +1,6 @@
-import { checkPlan } from "@/lib/plan";
-import { parsePlanText, type PlanIssue } from "@/schemas/plan";
-import { ANY_MEMBER, guarded, HttpError, json, readJsonText } from "@/server/core";
+import type { PlanIssue } from "@/schemas/plan";
+import { ANY_MEMBER, guarded, HttpError, readJsonText } from "@/server/core";
+import { checkTextInPool } from "@/server/engine-pool";
 
 export const dynamic = "force-dynamic";
 
@@ -21,10 +21,18 @@ function invalidPlan(issues: PlanIssue[]): HttpError {
  * JSON, 413 above 1 MB (declared or streamed; the body is read once, never
  * copied), 400 `invalid-plan` with every issue (malformed JSON included,
  * with its position). The body is parsed here, not by the guard: a plan
- * document has its own issue format.
+ * document has its own issue format. Validation and the engine run on the
+ * server's engine pool (src/server/engine-pool), never on the request
+ * thread, with the same parsePlanText and checkPlan as before: 422
+ * `check-failed` if it throws on the plan, 503 `engine-unavailable` if its
+ * thread stops.
  */
 export const POST = guarded(ANY_MEMBER, { what: "check plans" }, async ({ request }) => {
-  const parsed = parsePlanText(await readJsonText(request));
-  if (!parsed.ok) throw invalidPlan(parsed.issues);
-  return json(checkPlan(parsed.plan), 200, { "cache-control": "no-store" });
+  const checked = await checkTextInPool(await readJsonText(request));
+  if (!checked.ok) throw invalidPlan(checked.issues);
+  // The result comes back from the engine thread already written as JSON.
+  return new Response(checked.json, {
+    status: 200,
+    headers: { "content-type": "application/json", "cache-control": "no-store" },
+  });
 });
