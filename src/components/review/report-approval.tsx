@@ -13,7 +13,7 @@ const STATE: Record<ReviewState, string> = {
   draft: "Draft (not reviewed)",
   "in-review": "In review (not approved yet)",
   baselined: "Baselined",
-  "changes-requested": "Changes requested (not approved)",
+  "changes-requested": "Returned for rework (not approved)",
 };
 
 const day = (iso: string | null) => (iso ? `${iso.slice(0, 16).replace("T", " ")} UTC` : "–");

@@ -1,6 +1,7 @@
 "use client";
 
 import { OpticalFrequency } from "@/components/tools";
+import { placeReasonText } from "@/lib/plan";
 import type { Chain, ChainResult, Detector, Laser, Resonator } from "@/queries/types";
 import { formatGHz, formatInterval, formatMHz, formatNumber, formatQ } from "./format";
 import { buttonClass, Empty, LaserSafetyNote } from "./ui";
@@ -228,9 +229,9 @@ export function ChainItem({
                     : result.feasibleGHz.map((iv) => formatInterval(iv)).join(", "),
                 ],
                 [
-                  "Place",
+                  "Suggested LO",
                   result.placeGHz === null
-                    ? `no place (${result.placeReason ?? "unknown"})`
+                    ? `none: ${placeReasonText(result.placeReason) ?? "no result"}`
                     : `${formatGHz(result.placeGHz)} GHz`,
                 ],
               ] as [string, string][])

@@ -24,7 +24,7 @@ const TEXT: Readonly<Record<FindingCode, string>> = {
   "noise-folding": "The detector band spans more than one Nyquist zone, so its noise folds onto every slot.",
   "lock-replica": "The lock sidebands copy too much of the neighbouring spectrum into the channel.",
   "lock-inside-mode":
-    "The lock modulation frequency is below the linewidth: the lock sidebands sit inside the pump mode.",
+    "The lock modulation frequency is below the linewidth: the lock sidebands sit inside the carrier's mode.",
   "carrier-dominates-lo": "The residual carrier at the detector is stronger than the LO and sets the shot-noise floor.",
   "pd-overload": "The optical power per photodiode exceeds the detector's limit.",
   "nedt-unmet": "The channel's NEΔT is above its requirement.",

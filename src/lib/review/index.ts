@@ -5,6 +5,7 @@
  */
 export * from "./types";
 export { nextReviewState } from "./next-review-state";
+export { reviewStateLabel } from "./review-state-label";
 export { findingKey } from "./finding-key";
 export { unwaivedErrors } from "./unwaived-errors";
 export {

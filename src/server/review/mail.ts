@@ -27,7 +27,7 @@ export function reviewRequestedMail(
 ) {
   return message(
     to,
-    `Review requested: ${p.mission}, revision ${p.revision}`,
+    `Submitted for review: ${p.mission}, revision ${p.revision}`,
     [
       `${p.by} submitted revision ${p.revision} of the plan "${p.mission}" for review.`,
       `Open error findings: ${p.openErrors}.`,
@@ -49,10 +49,10 @@ export function reviewDecidedMail(
     note: string;
   },
 ) {
-  const what = p.decision === "baseline" ? "baselined" : "sent back with changes requested";
+  const what = p.decision === "baseline" ? "baselined" : "returned for rework";
   return message(
     to,
-    `${p.decision === "baseline" ? "Baselined" : "Changes requested"}: ${p.mission}, revision ${p.revision}`,
+    `${p.decision === "baseline" ? "Baselined" : "Returned for rework"}: ${p.mission}, revision ${p.revision}`,
     [`${p.by} ${what} revision ${p.revision} of the plan "${p.mission}".`, ...(p.note ? [`Note: ${p.note}`] : [])],
     `/missions/${p.missionId}`,
     "Open the mission",

@@ -4,7 +4,7 @@ import { useDecideMutation, useSubmitMutation, type ReviewOverview } from "../us
 import type { ReviewAbilities } from "./abilities";
 import { ErrorLine } from "./error-line";
 
-/** Submit the newest revision, or baseline it or request changes, with an optional note; or say why neither is possible. */
+/** Submit the newest revision, or baseline it or return it for rework, with an optional note; or say why neither is possible. */
 export function Actions({ missionId, data, can }: { missionId: string; data: ReviewOverview; can: ReviewAbilities }) {
   const submit = useSubmitMutation(missionId);
   const decide = useDecideMutation(missionId);
@@ -30,7 +30,7 @@ export function Actions({ missionId, data, can }: { missionId: string; data: Rev
   return (
     <div className="mt-3">
       <label htmlFor={noteId} className="block text-sm font-medium text-slate-800">
-        Note {canDecideNow ? "(required when requesting changes)" : "(optional)"}
+        Note {canDecideNow ? "(required when returning for rework)" : "(optional)"}
       </label>
       <textarea
         id={noteId}
@@ -77,7 +77,7 @@ export function Actions({ missionId, data, can }: { missionId: string; data: Rev
               }
               className="rounded border border-rose-700 px-3 py-1.5 text-sm font-medium text-rose-800 disabled:opacity-50"
             >
-              Request changes
+              Return for rework
             </button>
           </>
         ) : null}
@@ -85,7 +85,7 @@ export function Actions({ missionId, data, can }: { missionId: string; data: Rev
       {canDecideNow && unwaived > 0 ? (
         <p className="mt-2 text-sm text-amber-900">
           {unwaived} open error finding{unwaived === 1 ? "" : "s"} without a waiver: record a waiver for each below, or
-          request changes.
+          return the plan for rework.
         </p>
       ) : null}
       <ErrorLine error={submit.error ?? decide.error} />
