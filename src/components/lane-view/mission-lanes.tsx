@@ -1,11 +1,13 @@
 "use client";
 
+import { useWaivers } from "@/components/waivers";
 import { useCallback } from "react";
 import Link from "next/link";
 import { useQuery, useQueryClient } from "@tanstack/react-query";
 import { parsePlan } from "@/schemas/plan";
 import type { ResultDocument } from "@/lib/plan";
 import { api, apiFetch, sendJson } from "@/queries/api";
+import { confirmEditDuringReview } from "@/queries/edit-during-review";
 import { missionKeys } from "@/queries/keys";
 import { invalidateMission, useCollectionQuery, useResultQuery } from "@/queries/missions";
 import { LaneView, type SaveOutcome } from "./lane-view";
@@ -19,6 +21,7 @@ const planKey = (missionId: string) => [...missionKeys.detail(missionId), "plan-
  */
 export function MissionLanes({ missionId, canEdit = false }: { missionId: string; canEdit?: boolean }) {
   const qc = useQueryClient();
+  const waivers = useWaivers(missionId);
   const planQuery = useQuery({
     queryKey: planKey(missionId),
     queryFn: async () => {
@@ -40,6 +43,7 @@ export function MissionLanes({ missionId, canEdit = false }: { missionId: string
       const list = (await chainsQuery.refetch()).data ?? [];
       const row = list.find((c) => c.key === chainKey);
       if (!row) throw new Error(`Chain ${chainKey} is no longer in the mission; reload the page.`);
+      await confirmEditDuringReview(missionId);
       const body = await sendJson<{ revision?: { number: number; errorCount: number; warningCount: number } }>(
         api.item(missionId, "chains", row.id),
         "PATCH",
@@ -80,6 +84,7 @@ export function MissionLanes({ missionId, canEdit = false }: { missionId: string
       plan={plan}
       result={(resultQuery.data as unknown as ResultDocument | null) ?? null}
       onSaveLo={canEdit ? onSaveLo : undefined}
+      waivers={waivers}
     />
   );
 }

@@ -1,5 +1,6 @@
 "use client";
 
+import { useWaivers } from "@/components/waivers";
 import Link from "next/link";
 import {
   useCollectionQuery,
@@ -38,6 +39,7 @@ export function MissionReport({ missionId }: { missionId: string }) {
   const detectors = useCollectionQuery(missionId, "detectors");
   const chains = useCollectionQuery(missionId, "chains");
   const channels = useCollectionQuery(missionId, "channels");
+  const waivers = useWaivers(missionId);
   const settings = useSettingsQuery(missionId);
   const result = useResultQuery(missionId);
   const revisions = useRevisionsQuery(missionId);
@@ -126,7 +128,7 @@ export function MissionReport({ missionId }: { missionId: string }) {
 
       <ChannelsSection rows={rows} />
 
-      <FindingsSection findings={findings} />
+      <FindingsSection findings={findings} channelCount={channels.data?.length} waivers={waivers} />
 
       <SourcesSection />
     </article>

@@ -59,6 +59,24 @@ export function reviewDecidedMail(
   );
 }
 
+export function reviewWithdrawnMail(
+  to: string,
+  p: { mission: string; missionId: string; revision: number; by: string; newRevision: number | null },
+) {
+  return message(
+    to,
+    `Review withdrawn: ${p.mission}, revision ${p.revision}`,
+    [
+      `${p.by} edited the plan "${p.mission}" while revision ${p.revision} was in review, so that review was withdrawn: there is nothing to decide until the plan is submitted again.`,
+      p.newRevision === null
+        ? "The edit is stored as a new draft revision."
+        : `The edit is stored as draft revision ${p.newRevision}.`,
+    ],
+    `/missions/${p.missionId}`,
+    "Open the mission",
+  );
+}
+
 export function mentionMail(
   to: string,
   p: { mission: string; missionId: string; revision: number; by: string; body: string; target: string },
