@@ -29,6 +29,11 @@ const TEXT: Readonly<Record<FindingCode, string>> = {
   "pd-overload": "The optical power per photodiode exceeds the detector's limit.",
   "nedt-unmet": "The channel's NEΔT is above its requirement.",
   "in-protected-band": "A passband lies wholly inside a band where all emissions are prohibited (passive use).",
+  "carrier-outside-telecom":
+    "The laser carrier lies outside the telecom bands (1260–1675 nm): check the value and its unit.",
+  "q-beyond-lithium-niobate":
+    "The resonator's loaded Q is above what lithium niobate resonators have been shown to reach.",
+  "receiver-noise-implausible": "The receiver noise temperature is above 10⁶ K, far beyond any radiometer receiver.",
 };
 
 const byCode: Readonly<Record<string, string | undefined>> = TEXT;

@@ -34,6 +34,9 @@ export const RULE_ORDER = [
   "pd-overload",
   "nedt-unmet",
   "in-protected-band",
+  "carrier-outside-telecom",
+  "q-beyond-lithium-niobate",
+  "receiver-noise-implausible",
 ] as const;
 
 export type FindingCode = (typeof RULE_ORDER)[number];
@@ -70,6 +73,9 @@ export const RULE_SEVERITY: Readonly<Record<FindingCode, Severity>> = {
   "pd-overload": "error",
   "nedt-unmet": "error",
   "in-protected-band": "info",
+  "carrier-outside-telecom": "warning",
+  "q-beyond-lithium-niobate": "warning",
+  "receiver-noise-implausible": "warning",
 };
 
 /** Codes of the per-chain rules (`channel: null`). */
@@ -80,6 +86,8 @@ export const CHAIN_LEVEL_CODES: readonly FindingCode[] = [
   "lock-inside-mode",
   "carrier-dominates-lo",
   "pd-overload",
+  "carrier-outside-telecom",
+  "q-beyond-lithium-niobate",
 ];
 
 const L_DEPENDENT = [

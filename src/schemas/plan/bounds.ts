@@ -96,7 +96,6 @@ export const PLAN_BOUNDS: readonly Bound[] = [
     reason: "10 W is beyond the input of any photodiode",
   },
   { entity: "detectors", field: ["sampleRateGHz"], max: 1_000, reason: "no digitiser samples faster than 1 THz" },
-  { entity: "chains", field: ["mode"], max: 1_000_000, reason: "a mode number above a million is no microwave mode" },
   {
     entity: "chains",
     field: ["loOffsetGHz"],
