@@ -151,7 +151,7 @@ export function DetectorTable({ detectors, onEdit }: { detectors: Detector[]; on
           <tr className="border-b border-ink/20">
             <th className={th}>Detector</th>
             <th className={th}>IF band (GHz)</th>
-            <th className={th}>Max input per diode (mW)</th>
+            <th className={th}>Max input per photodiode (mW)</th>
             <th className={th}>Sample rate (GHz)</th>
           </tr>
         </thead>

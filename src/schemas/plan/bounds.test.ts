@@ -5,7 +5,7 @@ import { describe, expect, it } from "vitest";
 import { validPlanInput } from "../../../tests/fixtures/valid-plan";
 import { validPlanArb } from "../../../tests/fixtures/plan-arbitrary";
 import { formatPath } from "../issues";
-import { PLAN_BOUNDS, planBoundIssues, type Bound } from "./bounds";
+import { PLAN_BOUNDS, planBoundIssues, REACH_REASON, type Bound } from "./bounds";
 import { parsePlan } from "./parse";
 import type { Plan } from "./document";
 
@@ -63,6 +63,20 @@ describe("hard ranges of the plan's numbers", () => {
       }
     });
   }
+
+  it("reach edges: ±20 000 GHz accepted, just beyond refused with the path", () => {
+    const plan = structuredClone(base());
+    plan.lasers[0]!.reach = [{ minGHz: -20_000, maxGHz: 20_000 }];
+    expect(planBoundIssues(plan)).toEqual([]);
+    plan.lasers[0]!.reach = [
+      { minGHz: 1, maxGHz: 2 },
+      { minGHz: -20_000.001, maxGHz: 20_000.001 },
+    ];
+    expect(planBoundIssues(plan)).toEqual([
+      { path: "lasers[0].reach[1].minGHz", message: expect.stringContaining(REACH_REASON) as unknown as string },
+      { path: "lasers[0].reach[1].maxGHz", message: expect.stringContaining(REACH_REASON) as unknown as string },
+    ]);
+  });
 
   it("refuses the issue's absurd values, each by its path", () => {
     const plan = structuredClone(base());

@@ -31,6 +31,8 @@ export interface Bound {
 
 /** Largest LO offset, RF and IF frequency, GHz: 20 THz, far beyond any microwave-photonic receiver. */
 const MAX_FREQUENCY_GHZ = 20_000;
+/** Why a reach edge has the LO offset's range. */
+export const REACH_REASON = "a laser pair's reach beyond ±20 THz is beyond any difference frequency in use";
 /** Largest optical power, mW: 10 W, beyond the output of a bench fibre amplifier (a kilowatt is refused). */
 const MAX_OPTICAL_MW = 10_000;
 
@@ -160,6 +162,18 @@ function refusal(b: Bound, v: number): string | null {
   return null;
 }
 
+/** A laser pair's reach intervals, each edge within the LO offset's range. */
+function reachIssues(l: Plan["lasers"][number], i: number, issues: Issue[]): void {
+  l.reach.forEach((iv, j) => {
+    for (const edge of ["minGHz", "maxGHz"] as const)
+      if (Math.abs(iv[edge]) > MAX_FREQUENCY_GHZ)
+        issues.push({
+          path: formatPath(["lasers", i, "reach", j, edge]),
+          message: `must be between -${MAX_FREQUENCY_GHZ} and ${MAX_FREQUENCY_GHZ} (${REACH_REASON})`,
+        });
+  });
+}
+
 /**
  * Every number of a parsed plan outside its hard range, as issues with the
  * document path (`lasers[0].carrierTHz`), in document order. Empty for a
@@ -189,6 +203,7 @@ export function planBoundIssues(plan: Plan): Issue[] {
             message,
           });
       }
+      if (entity === "lasers") reachIssues(plan.lasers[i]!, i, issues);
     });
   return issues;
 }
