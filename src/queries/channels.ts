@@ -7,6 +7,7 @@ import { invalidateMission, type EntityInput } from "./missions";
 import type { Channel } from "./types";
 import { unwrapItem } from "./unwrap";
 import { applyChannelEdit } from "./optimistic";
+import { confirmEditDuringReview } from "./edit-during-review";
 
 /**
  * Channel edit with an optimistic update: the table shows the new values at
@@ -17,8 +18,10 @@ export function useUpdateChannelMutation(missionId: string) {
   const qc = useQueryClient();
   const key = missionKeys.channels(missionId);
   return useMutation({
-    mutationFn: async ({ id, input }: { id: string; input: EntityInput }) =>
-      unwrapItem<Channel>(await sendJson(api.item(missionId, "channels", id), "PATCH", input), "channel"),
+    mutationFn: async ({ id, input }: { id: string; input: EntityInput }) => {
+      await confirmEditDuringReview(missionId);
+      return unwrapItem<Channel>(await sendJson(api.item(missionId, "channels", id), "PATCH", input), "channel");
+    },
     onMutate: async ({ id, input }) => {
       await qc.cancelQueries({ queryKey: key });
       const previous = qc.getQueryData<Channel[]>(key);

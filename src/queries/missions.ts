@@ -1,5 +1,6 @@
 "use client";
 
+import { confirmEditDuringReview } from "./edit-during-review";
 import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { MissionCreateInput, MissionUpdateInput, SettingsUpdateInput } from "@/schemas/workspace";
 import { api, apiFetch, sendJson } from "./api";
@@ -144,11 +145,13 @@ export function useDeleteMissionMutation(missionId: string) {
 export function useSaveSettingsMutation(missionId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async (input: SettingsUpdateInput) =>
-      unwrapItem<Settings & MutationRevision>(
+    mutationFn: async (input: SettingsUpdateInput) => {
+      await confirmEditDuringReview(missionId);
+      return unwrapItem<Settings & MutationRevision>(
         await sendJson(api.collection(missionId, "settings"), "PUT", input),
         "settings",
-      ),
+      );
+    },
     onSettled: () => invalidateMission(qc, missionId),
   });
 }
@@ -160,6 +163,7 @@ export function useSaveEntityMutation<C extends Collection>(missionId: string, c
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async ({ id, input }: { id?: string; input: EntityInput }) => {
+      await confirmEditDuringReview(missionId);
       const body = id
         ? await sendJson(api.item(missionId, c, id), "PATCH", input)
         : await sendJson(api.collection(missionId, c), "POST", input);
@@ -172,8 +176,10 @@ export function useSaveEntityMutation<C extends Collection>(missionId: string, c
 export function useDeleteEntityMutation(missionId: string, c: Collection) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: ({ id, version }: { id: string; version: number }) =>
-      apiFetch<unknown>(`${api.item(missionId, c, id)}?version=${version}`, { method: "DELETE" }),
+    mutationFn: async ({ id, version }: { id: string; version: number }) => {
+      await confirmEditDuringReview(missionId);
+      return apiFetch<unknown>(`${api.item(missionId, c, id)}?version=${version}`, { method: "DELETE" });
+    },
     onSettled: () => invalidateMission(qc, missionId),
   });
 }

@@ -69,6 +69,7 @@ export const missionListSchema = z.object({
       channelCount: z.int(),
       openErrors: z.int(),
       openWarnings: z.int(),
+      waivedErrors: z.int().meta({ description: "Errors of the newest revision that carry a recorded waiver." }),
       updatedAt: iso(),
       version: z.int(),
     }),

@@ -40,3 +40,4 @@ export { formatPath } from "./plan/format-path";
 export type { PlanIssue } from "./plan/messages";
 export { jsonErrorOffset } from "./plan/json-text";
 export { parsePlan, parsePlanText, type ParsePlanResult } from "./plan/parse";
+export { PLAN_BOUNDS, planBoundIssues, type Bound } from "./plan/bounds";

@@ -66,7 +66,7 @@ describe("review flow", () => {
     await screenshot(eng, "review-engineer-submitted");
 
     // The lead is notified twice: review requested and mentioned.
-    await readMail(team.lead.email, `review requested: ${name}`);
+    await readMail(team.lead.email, `submitted for review: ${name}`);
     const mention = await readMail(team.lead.email, `mentioned you on ${name}`);
     expect(mention.text).toContain("please waive it");
 

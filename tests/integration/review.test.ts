@@ -290,13 +290,13 @@ describe("e-mail", () => {
     const s = await call(team.engineer, "POST", `${R(id)}/submit`, { note: "first look" });
     expect(s.status).toBe(200);
     expect(s.body.notified.sort()).toEqual([team.owner.email, team.lead.email].sort());
-    const toLead = await readMail(team.lead.email, `review requested: ${name}`);
+    const toLead = await readMail(team.lead.email, `submitted for review: ${name}`);
     expect(toLead.text).toContain(`/missions/${id}`);
     expect(toLead.text).toContain("first look");
-    await readMail(team.owner.email, `review requested: ${name}`);
+    await readMail(team.owner.email, `submitted for review: ${name}`);
     const { rows } = await testPool().query(
       `select recipients from captured_mail where subject ilike $1 and received_at >= $2`,
-      [`Review requested: ${name}%`, since],
+      [`Submitted for review: ${name}%`, since],
     );
     const all = rows.flatMap((r: { recipients: string[] }) => r.recipients);
     expect(all).not.toContain(team.engineer.email);
@@ -306,7 +306,7 @@ describe("e-mail", () => {
       note: "widen the guard",
     });
     expect(d.body.notified).toEqual([team.engineer.email]);
-    const back = await readMail(team.engineer.email, `changes requested: ${name}`);
+    const back = await readMail(team.engineer.email, `returned for rework: ${name}`);
     expect(back.text).toContain("widen the guard");
   });
 
@@ -321,8 +321,8 @@ describe("e-mail", () => {
       const id = await missionWithPlan(team.engineer, cleanPlan(name));
       const s = await call(team.engineer, "POST", `${R(id)}/submit`, {});
       expect(s.body.notified).toEqual([team.owner.email]);
-      await readMail(team.owner.email, `review requested: ${name}`);
-      await expect(readMail(team.lead.email, `review requested: ${name}`, 1500)).rejects.toThrow(/no mail/);
+      await readMail(team.owner.email, `submitted for review: ${name}`);
+      await expect(readMail(team.lead.email, `submitted for review: ${name}`, 1500)).rejects.toThrow(/no mail/);
     } finally {
       await testPool().query(`delete from notification_preferences where user_id = $1`, [team.lead.userId]);
     }

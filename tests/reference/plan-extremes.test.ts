@@ -3,6 +3,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { createInterface } from "node:readline";
 import { join } from "node:path";
 import { MAX_GRID_POINTS, MAX_LOCK_ORDER_ENUMERATED } from "@/lib/plan";
+import { parsePlan, planBoundIssues } from "@/schemas/plan";
 import { validPlanInput } from "../fixtures/valid-plan";
 
 // The validator accepts any finite number within the plan format's signs and
@@ -131,5 +132,50 @@ describe("checkPlan on accepted documents with absurd magnitudes", { timeout: 60
     expect(r.hung).toBeUndefined();
     expect(r.steps).toBeGreaterThan(0);
     expect(r.steps).toBeLessThan(workStepBound(doc));
+  });
+});
+
+/**
+ * The same documents are refused by the workspace (ADR 030): every save and
+ * import checks the hard ranges of docs/plan-format.md §15, and each of the
+ * cases above holds at least one value outside them, named by its path. The
+ * format and the engine still accept them (above), for the check endpoint
+ * and the command line.
+ */
+const namedPaths: Record<string, string[]> = {
+  "reach spanning ±1e12 GHz": ["lasers[0].reach[0].minGHz", "lasers[0].reach[0].maxGHz"],
+  "reach of 1e300 GHz": ["lasers[1].reach[0].minGHz"],
+  "stepMHz of 1e-300": [],
+  "stepMHz of 1e300": ["lasers[0].stepMHz"],
+  "lock.orders of 1e12": [],
+  "driftMHz of 1e13 with a sampled IF": ["lasers[1].driftMHz"],
+  "fsrGHz of 1e-298": [],
+  "sampleRateGHz of 1e-299": [],
+  "centerGHz of 1e302": ["channels[0].centerGHz"],
+  "DSB channel at 1e190 GHz with a sampled IF": ["channels[2].centerGHz"],
+  "lower-sideband channel at 1e302 GHz with a sampled IF": ["channels[2].centerGHz"],
+  "guardMHz of 1e300": ["settings.guardMHz"],
+  "loadedQ of 1e300": ["resonators[1].loadedQ"],
+  "carrierTHz of 1e-300": ["lasers[1].carrierTHz"],
+  "LO offsets near 1e10 GHz, where doubles are wider apart than the image edge bracket": [
+    "lasers[0].reach[0].minGHz",
+    "lasers[0].reach[0].maxGHz",
+    "resonators[0].fsrGHz",
+    "chains[0].loOffsetGHz",
+    "chains[0].rfInput.minGHz",
+    "chains[0].rfInput.maxGHz",
+    "channels[0].centerGHz",
+    "channels[1].centerGHz",
+  ],
+};
+
+describe("the workspace's hard ranges on the same documents", () => {
+  it.each(cases)("%s: the values outside the hard ranges are named by path", (label, edit) => {
+    const doc = validPlanInput() as Doc;
+    edit(doc);
+    const r = parsePlan(doc);
+    expect(r.ok).toBe(true);
+    if (!r.ok) return;
+    expect(planBoundIssues(r.plan).map((i) => i.path)).toEqual(namedPaths[label]);
   });
 });

@@ -37,7 +37,7 @@ export default async function AccountPage() {
           </Link>{" "}
           as you, in one team, with the role you give it (never above yours). Send it as{" "}
           <code>Authorization: Bearer …</code>, never in a URL. Only a hash is stored: copy the token when it is shown.
-          See <code>docs/automation.md</code> for examples.
+          The API reference lists every operation with its request and answer.
         </p>
         {teams.length ? (
           <CreateTokenForm action={createTokenAction} teams={teams} />

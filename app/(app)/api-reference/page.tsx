@@ -20,8 +20,7 @@ export default async function ApiReferencePage() {
           <Link href="/account" className="underline">
             account page
           </Link>
-          : <code>Authorization: Bearer hl_…</code>. Examples with curl, the <code>heterolane</code> command line and
-          Python are in <code>docs/automation.md</code>.
+          : <code>Authorization: Bearer hl_…</code>. Every operation is listed below with its request and its answer.
         </p>
       </header>
       <ApiReference />

@@ -1,5 +1,6 @@
 "use client";
 
+import type { WaiverMap } from "@/components/waivers";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import type { Plan } from "@/schemas/plan";
 import type { ResultDocument } from "@/lib/plan";
@@ -30,6 +31,8 @@ export interface LaneViewProps {
   onSaveLo?: (chainId: string, loOffsetGHz: number) => Promise<SaveOutcome>;
   /** Called with the time of every live re-check frame (ms). */
   onFrame?: (t: FrameTime) => void;
+  /** Recorded waivers by finding key: the live findings mark waived errors. */
+  waivers?: WaiverMap;
 }
 
 /**
@@ -41,7 +44,7 @@ export interface LaneViewProps {
  * figures, and the hooks for the lane model, the visible ranges, the chart
  * width and saving).
  */
-export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
+export function LaneView({ plan, result, onSaveLo, onFrame, waivers }: LaneViewProps) {
   // The frame time is written straight into the page (no re-render per frame).
   const frameText = useRef<HTMLSpanElement>(null);
   const onFrameRef = useRef(onFrame);
@@ -141,7 +144,7 @@ export function LaneView({ plan, result, onSaveLo, onFrame }: LaneViewProps) {
 
       <div className="grid gap-4 lg:grid-cols-[minmax(0,2fr)_minmax(0,3fr)]">
         <DetailsPanel item={selectedLive} plan={live.plan} result={live.result} onZoom={zoomTo} />
-        <FindingsPanel result={live.result} />
+        <FindingsPanel result={live.result} waivers={waivers} />
       </div>
       <ChannelFigures plan={live.plan} result={live.result} />
       <EnvelopeSection plan={live.plan} result={live.result} />

@@ -1,10 +1,12 @@
 "use client";
 
+import { useWaivers } from "@/components/waivers";
 import { useCallback } from "react";
 import Link from "next/link";
 import { useQueryClient } from "@tanstack/react-query";
 import type { ResultDocument } from "@/lib/plan";
 import { api, sendJson } from "@/queries/api";
+import { confirmEditDuringReview } from "@/queries/edit-during-review";
 import { missionKeys } from "@/queries/keys";
 import { invalidateMission, useCollectionQuery, useResultQuery } from "@/queries/missions";
 import { usePlanDocumentQuery } from "@/queries/plan-document";
@@ -17,6 +19,7 @@ import { LaneView, type SaveOutcome } from "./lane-view";
  */
 export function MissionLanes({ missionId, canEdit = false }: { missionId: string; canEdit?: boolean }) {
   const qc = useQueryClient();
+  const waivers = useWaivers(missionId);
   const planQuery = usePlanDocumentQuery(missionId);
   const resultQuery = useResultQuery(missionId);
   const chainsQuery = useCollectionQuery(missionId, "chains");
@@ -27,6 +30,7 @@ export function MissionLanes({ missionId, canEdit = false }: { missionId: string
       const list = (await chainsQuery.refetch()).data ?? [];
       const row = list.find((c) => c.key === chainKey);
       if (!row) throw new Error(`Chain ${chainKey} is no longer in the mission; reload the page.`);
+      await confirmEditDuringReview(missionId);
       const body = await sendJson<{ revision?: { number: number; errorCount: number; warningCount: number } }>(
         api.item(missionId, "chains", row.id),
         "PATCH",
@@ -67,6 +71,7 @@ export function MissionLanes({ missionId, canEdit = false }: { missionId: string
       plan={plan}
       result={(resultQuery.data as unknown as ResultDocument | null) ?? null}
       onSaveLo={canEdit ? onSaveLo : undefined}
+      waivers={waivers}
     />
   );
 }

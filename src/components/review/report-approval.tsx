@@ -1,4 +1,4 @@
-import type { ReviewState } from "@/lib/review";
+import { findingKeyText, reviewStateLabel, type ReviewState } from "@/lib/review";
 import type { getApproval } from "@/server/review";
 
 /**
@@ -9,11 +9,12 @@ import type { getApproval } from "@/server/review";
  */
 export type ReportApprovalData = NonNullable<Awaited<ReturnType<typeof getApproval>>>;
 
-const STATE: Record<ReviewState, string> = {
-  draft: "Draft (not reviewed)",
-  "in-review": "In review (not approved yet)",
-  baselined: "Baselined",
-  "changes-requested": "Changes requested (not approved)",
+/** What the state means for the approval, after its label. */
+const NOTE: Record<ReviewState, string> = {
+  draft: " (not reviewed)",
+  "in-review": " (not approved yet)",
+  baselined: "",
+  "changes-requested": " for rework (not approved)",
 };
 
 const day = (iso: string | null) => (iso ? `${iso.slice(0, 16).replace("T", " ")} UTC` : "–");
@@ -36,7 +37,10 @@ export function ReportApproval({ approval }: { approval: ReportApprovalData | nu
             <dt className="font-medium text-slate-700">Revision</dt>
             <dd>{approval.revision}</dd>
             <dt className="font-medium text-slate-700">State</dt>
-            <dd>{STATE[approval.state]}</dd>
+            <dd>
+              {reviewStateLabel(approval.state)}
+              {NOTE[approval.state]}
+            </dd>
             <dt className="font-medium text-slate-700">Submitted by</dt>
             <dd>{approval.submittedBy ? `${approval.submittedBy}, ${day(approval.submittedAt)}` : "–"}</dd>
             <dt className="font-medium text-slate-700">Approved by</dt>
@@ -59,7 +63,7 @@ export function ReportApproval({ approval }: { approval: ReportApprovalData | nu
             <table className="mt-1 w-full border-collapse text-left text-sm">
               <thead>
                 <tr className="border-b border-slate-400">
-                  <th className="py-1 pr-3 font-medium">Finding (rule | chain | channel)</th>
+                  <th className="py-1 pr-3 font-medium">Finding</th>
                   <th className="py-1 pr-3 font-medium">Reason</th>
                   <th className="py-1 pr-3 font-medium">Waived by</th>
                   <th className="py-1 font-medium">When</th>
@@ -68,7 +72,9 @@ export function ReportApproval({ approval }: { approval: ReportApprovalData | nu
               <tbody>
                 {approval.waivers.map((w) => (
                   <tr key={w.findingKey} className="border-b border-slate-200 align-top">
-                    <td className="py-1 pr-3 font-mono text-xs">{w.findingKey}</td>
+                    <td className="py-1 pr-3" title={w.findingKey}>
+                      {findingKeyText(w.findingKey)}
+                    </td>
                     <td className="py-1 pr-3">{w.reason}</td>
                     <td className="py-1 pr-3">{w.waivedByName}</td>
                     <td className="py-1">{day(w.waivedAt)}</td>

@@ -5,8 +5,8 @@ import { usePathname } from "next/navigation";
 const LINKS = [
   { href: "/missions", label: "Missions" },
   { href: "/team", label: "Team" },
-  { href: "/tools", label: "Tools" },
-  { href: "/audit", label: "Audit" },
+  { href: "/tools", label: "Engineering tools" },
+  { href: "/audit", label: "Audit trail" },
   { href: "/settings/notifications", label: "Notifications" },
 ] as const;
 

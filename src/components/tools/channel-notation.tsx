@@ -17,7 +17,7 @@ export interface ChannelNotationProps {
 
 const PART_LABEL = {
   centre: "Centre",
-  offset: "Sideband offset",
+  offset: "DSB offset",
   bandwidth: "Bandwidth",
   notation: "Notation",
 } as const;
@@ -42,7 +42,7 @@ export function ChannelNotation({
     <HelperCard
       id="channel-notation"
       title="Channel notation"
-      summary="Read a channel as sounder tables write it (f0 ± d, 2 × b) into centre, sideband offset and bandwidth."
+      summary="Read a channel as sounder tables write it (f0 ± d, 2 × b) into centre, DSB offset and bandwidth."
     >
       <label htmlFor={`${id}-text`} className="text-sm font-medium text-ink">
         Channel
@@ -76,7 +76,7 @@ export function ChannelNotation({
       <div className="mt-1">
         <ResultRow label="Centre" value={channel ? String(channel.centerGHz) : "—"} unit="GHz" testId="cn-centre" />
         <ResultRow
-          label="Sideband offset"
+          label="DSB offset"
           value={channel ? (channel.dsbOffsetGHz === null ? "single sideband" : String(channel.dsbOffsetGHz)) : "—"}
           unit={channel?.dsbOffsetGHz != null ? "GHz" : undefined}
         />

@@ -218,9 +218,9 @@ export function DriftBudget({
           ["combination", combine === "rss" ? "root-sum-square" : "worst case"],
         ]}
         sources={[
-          "Bookkeeping of laser-2, resonator, lock and step terms: derived in docs/helpers.md (Drift budget)",
+          "Bookkeeping of laser-2, resonator, lock and step terms: the sum or root-sum-square shown in the working above",
           "Guard ≥ full peak-to-peak drift or 3× RMS, plus half the step: common practice",
-          "Mode shift: Jundt, Opt. Lett. 22, 1553 (1997) and Kim & Smith, J. Appl. Phys. 40, 4637 (1969), formula derived in docs/helpers.md",
+          "Mode shift: Jundt, Opt. Lett. 22, 1553 (1997) and Kim & Smith, J. Appl. Phys. 40, 4637 (1969); dν/dT = −ν·[(n/n_g)·α_a + (∂n/∂T)/n_g], from 2πR·n·ν/c = m at fixed m",
           "Root-sum-square assumes independent random terms; the half-step is a bound, so rss is optimistic about it",
         ]}
       />

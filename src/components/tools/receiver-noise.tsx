@@ -185,7 +185,7 @@ export function ReceiverNoise({
         ]}
         sources={[
           "h, k_B exact (SI 2019)",
-          "Quantum-limited up-conversion estimate T_up = h·f/(k_B·η): derived in docs/helpers.md (Receiver noise)",
+          "Quantum-limited up-conversion estimate T_up = h·f/(k_B·η): derived from the photon energy h·f and the conversion efficiency η (working above)",
           "Pozar, Microwave Engineering, 4th ed. (Wiley, 2012), noise chapter: lossy line and cascaded stages",
           "Skou & Le Vine, Microwave Radiometer Systems, 2nd ed. (Artech House): receiver noise temperature",
         ]}

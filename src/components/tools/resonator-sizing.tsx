@@ -301,7 +301,7 @@ export function ResonatorSizing({
           "Zelmon, Small & Jundt, JOSA B 14, 3319 (1997): LiNbO3 Sellmeier, 21 °C",
           "Jundt, Opt. Lett. 22, 1553 (1997): temperature-dependent n_e (used for the thermal shifts in every case)",
           "Kim & Smith, J. Appl. Phys. 40, 4637 (1969): thermal expansion ⊥ c, α_a",
-          "FSR and thermal-shift formulas: derived (docs/helpers.md); material dispersion only, a measured FSR is better",
+          "FSR and thermal-shift formulas: derived from the relations above (FSR = c/(2πR·n_g)); material dispersion only, a measured FSR is better",
         ]}
       />
     </HelperCard>

@@ -25,7 +25,7 @@ export function WavelengthGrid({
   initialTHz = 193.4,
   initialUnit = "THz",
   onApply,
-  applyLabel = "Apply",
+  applyLabel = "Apply carrier",
 }: WavelengthGridProps) {
   const id = useId();
   const [unit, setUnit] = useState<"THz" | "nm">(initialUnit);

@@ -1,5 +1,6 @@
 "use client";
 
+import { WaivedMark, waiverOf, type WaiverMap } from "@/components/waivers";
 import { useMemo, useState } from "react";
 import type { Chain, Channel, PlanResult } from "@/queries/types";
 import { buildChannelRows, channelCell, channelText, type ChannelRow, type ChannelSortKey } from "./channel-rows";
@@ -27,6 +28,7 @@ export function ChannelsTable({
   canEdit,
   onEdit,
   onSelect,
+  waivers,
 }: {
   /** True while the latest check is still loading: its columns show an ellipsis, not "no slot". */
   resultPending?: boolean;
@@ -36,6 +38,8 @@ export function ChannelsTable({
   canEdit: boolean;
   onEdit: (c: Channel) => void;
   onSelect?: (key: string) => void;
+  /** Recorded waivers by finding key: a waived worst finding is marked as such. */
+  waivers?: WaiverMap;
 }) {
   const [sort, setSort] = useState<SortState<ChannelSortKey>>({ key: "center", dir: "asc" });
   const [query, setQuery] = useState("");
@@ -141,6 +145,7 @@ export function ChannelsTable({
                   canEdit={canEdit}
                   onEdit={onEdit}
                   onSelect={onSelect}
+                  waivers={waivers}
                 />
               ))}
             </tbody>
@@ -157,14 +162,17 @@ function ChannelTr({
   canEdit,
   onEdit,
   onSelect,
+  waivers,
 }: {
   row: ChannelRow;
   pending: boolean;
   canEdit: boolean;
   onEdit: (c: Channel) => void;
   onSelect?: (key: string) => void;
+  waivers?: WaiverMap;
 }) {
   const r = row.result;
+  const waiver = row.worst ? waiverOf(row.worst, waivers) : null;
   const nedtClass =
     row.nedt.state === "unmet" ? "text-sev-error font-semibold" : row.nedt.state === "met" ? "text-sev-ok" : "";
   return (
@@ -202,6 +210,11 @@ function ChannelTr({
         {formatK(r?.nedtK)} / {row.channel.requiredNedtK === null ? "none" : formatK(row.channel.requiredNedtK)}
       </td>
       <td className="px-2 py-1.5" data-testid="worst-finding">
+        {waiver ? (
+          <span className="float-right ml-1">
+            <WaivedMark waiver={waiver} />
+          </span>
+        ) : null}
         {row.worst ? (
           <button
             type="button"

@@ -2,6 +2,7 @@
 
 import { OpticalFrequency } from "@/components/tools";
 import { fmtNumber, fmtWindow } from "@/components/envelope/format";
+import { placeReasonText } from "@/lib/plan";
 import type { Chain, ChainResult, Detector, Laser, Resonator } from "@/queries/types";
 import { formatGHz, formatInterval, formatMHz, formatNumber, formatQ } from "./format";
 import { buttonClass, Empty, LaserSafetyNote } from "./ui";
@@ -151,7 +152,7 @@ export function DetectorTable({ detectors, onEdit }: { detectors: Detector[]; on
           <tr className="border-b border-ink/20">
             <th className={th}>Detector</th>
             <th className={th}>IF band (GHz)</th>
-            <th className={th}>Max input per diode (mW)</th>
+            <th className={th}>Max input per photodiode (mW)</th>
             <th className={th}>Sample rate (GHz)</th>
           </tr>
         </thead>
@@ -230,9 +231,9 @@ export function ChainItem({
                 ],
                 ["Temperature window", temperatureWindowText(chain.temperatureExcursionK, result)],
                 [
-                  "Place",
+                  "Suggested LO",
                   result.placeGHz === null
-                    ? `no place (${result.placeReason ?? "unknown"})`
+                    ? `none: ${placeReasonText(result.placeReason) ?? "no result"}`
                     : `${formatGHz(result.placeGHz)} GHz`,
                 ],
               ] as [string, string][])

@@ -1,5 +1,6 @@
 "use client";
 
+import { useWaivers, waivedErrorCount } from "@/components/waivers";
 import { useRouter } from "next/navigation";
 import { useCallback, useMemo, useState } from "react";
 import type { Collection } from "@/queries/keys";
@@ -61,6 +62,7 @@ export function MissionOverview({
   const result = useResultQuery(missionId);
   const revisions = useRevisionsQuery(missionId);
   const activity = useActivityQuery(missionId);
+  const waivers = useWaivers(missionId);
   const [editing, setEditing] = useState<Editing | null>(null);
   const [focus, setFocus] = useState<string | null>(null);
   const close = useCallback(() => setEditing(null), []);
@@ -105,6 +107,7 @@ export function MissionOverview({
         deleteError={deleteMission.error}
         latest={latest}
         counts={result.data ? counts : null}
+        waivedErrors={waivedErrorCount(findings, waivers)}
         resultLoading={result.isLoading}
         busy={busy}
       />
@@ -182,6 +185,7 @@ export function MissionOverview({
             chains={refs.chains}
             result={result.data}
             canEdit={canEdit}
+            waivers={waivers}
             onEdit={(c: Channel) =>
               setEditing({
                 kind: "channels",
@@ -202,7 +206,13 @@ export function MissionOverview({
           {result.isLoading ? (
             <Spinner label="Loading findings…" />
           ) : (
-            <FindingsPanel findings={findings} channelNames={channelNames} focus={focus} />
+            <FindingsPanel
+              findings={findings}
+              channelNames={channelNames}
+              focus={focus}
+              channelCount={channels.data?.length}
+              waivers={waivers}
+            />
           )}
         </Card>
         <SettingsCard

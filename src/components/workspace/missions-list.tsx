@@ -1,5 +1,6 @@
 "use client";
 
+import { reviewStateLabel } from "@/lib/review";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
@@ -111,7 +112,7 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
             <option value="">all</option>
             {statuses.map((s) => (
               <option key={s} value={s}>
-                {s}
+                {reviewStateLabel(s)}
               </option>
             ))}
           </select>
@@ -162,12 +163,19 @@ export function MissionsList({ canCreate }: { canCreate: boolean }) {
                   {m.description ? <div className="line-clamp-1 text-xs text-ink-soft">{m.description}</div> : null}
                 </td>
                 <td className="px-2 py-2">
-                  <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs uppercase tracking-wide">{m.status}</span>
+                  <span className="rounded bg-ink-faint px-1.5 py-0.5 text-xs" data-testid="mission-state">
+                    {reviewStateLabel(m.status)}
+                  </span>
                 </td>
                 <td className="px-2 py-2 text-right tabular-nums">{m.chainCount}</td>
                 <td className="px-2 py-2 text-right tabular-nums">{m.channelCount}</td>
                 <td className="px-2 py-2 text-right">
                   <CountPill n={m.openErrors} severity="error" />
+                  {m.waivedErrors > 0 ? (
+                    <div className="text-xs text-emerald-900" data-testid="mission-waived">
+                      {m.waivedErrors >= m.openErrors ? "all waived" : `${m.waivedErrors} waived`}
+                    </div>
+                  ) : null}
                 </td>
                 <td className="px-2 py-2 text-right">
                   <CountPill n={m.openWarnings} severity="warning" />

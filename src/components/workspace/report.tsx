@@ -1,5 +1,6 @@
 "use client";
 
+import { useWaivers } from "@/components/waivers";
 import Link from "next/link";
 import {
   useCollectionQuery,
@@ -43,6 +44,7 @@ export function MissionReport({ missionId }: { missionId: string }) {
   const detectors = useCollectionQuery(missionId, "detectors");
   const chains = useCollectionQuery(missionId, "chains");
   const channels = useCollectionQuery(missionId, "channels");
+  const waivers = useWaivers(missionId);
   const settings = useSettingsQuery(missionId);
   const result = useResultQuery(missionId);
   const revisions = useRevisionsQuery(missionId);
@@ -137,7 +139,7 @@ export function MissionReport({ missionId }: { missionId: string }) {
       <SchedulesSection result={result.data} />
       <NoiseBudgetSection rows={rows} />
 
-      <FindingsSection findings={findings} />
+      <FindingsSection findings={findings} channelCount={channels.data?.length} waivers={waivers} />
 
       <EnvelopePlotsSection plan={plan.data} result={result.data ?? null} />
 

@@ -24,7 +24,7 @@ const TEXT: Readonly<Record<FindingCode, string>> = {
   "noise-folding": "The detector band spans more than one Nyquist zone, so its noise folds onto every slot.",
   "lock-replica": "The lock sidebands copy too much of the neighbouring spectrum into the channel.",
   "lock-inside-mode":
-    "The lock modulation frequency is below the linewidth: the lock sidebands sit inside the pump mode.",
+    "The lock modulation frequency is below the linewidth: the lock sidebands sit inside the carrier's mode.",
   "carrier-dominates-lo": "The residual carrier at the detector is stronger than the LO and sets the shot-noise floor.",
   "pd-overload": "The optical power per photodiode exceeds the detector's limit.",
   "thermal-noise-limited":
@@ -37,6 +37,11 @@ const TEXT: Readonly<Record<FindingCode, string>> = {
     "Retuning laser 2 between two chains of a schedule would cross LO offsets outside the laser's reach.",
   "shared-nedt-unmet":
     "The channel would meet its NEΔT requirement with the laser pair to itself; its share of the schedule is too small.",
+  "carrier-outside-telecom":
+    "The laser carrier lies outside the telecom bands (1260–1675 nm): check the value and its unit.",
+  "q-beyond-lithium-niobate":
+    "The resonator's loaded Q is above what lithium niobate resonators have been shown to reach.",
+  "receiver-noise-implausible": "The receiver noise temperature is above 10⁶ K, far beyond any radiometer receiver.",
 };
 
 const byCode: Readonly<Record<string, string | undefined>> = TEXT;

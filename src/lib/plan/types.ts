@@ -41,6 +41,9 @@ export const RULE_ORDER = [
   "schedule-overrun",
   "retune-blocked",
   "shared-nedt-unmet",
+  "carrier-outside-telecom",
+  "q-beyond-lithium-niobate",
+  "receiver-noise-implausible",
 ] as const;
 
 export type FindingCode = (typeof RULE_ORDER)[number];
@@ -82,6 +85,9 @@ export const RULE_SEVERITY: Readonly<Record<FindingCode, Severity>> = {
   "schedule-overrun": "error",
   "retune-blocked": "error",
   "shared-nedt-unmet": "warning",
+  "carrier-outside-telecom": "warning",
+  "q-beyond-lithium-niobate": "warning",
+  "receiver-noise-implausible": "warning",
 };
 
 /** Codes of the per-chain rules (`channel: null`). */
@@ -96,6 +102,8 @@ export const CHAIN_LEVEL_CODES: readonly FindingCode[] = [
   "retune-blocked",
   "thermal-noise-limited",
   "laser-noise-dominates",
+  "carrier-outside-telecom",
+  "q-beyond-lithium-niobate",
 ];
 
 const L_DEPENDENT = [

@@ -5,7 +5,9 @@
  */
 export * from "./types";
 export { nextReviewState } from "./next-review-state";
+export { reviewStateLabel } from "./review-state-label";
 export { findingKey } from "./finding-key";
+export { findingKeyText } from "./finding-key-text";
 export { unwaivedErrors } from "./unwaived-errors";
 export {
   compareRevisions,
@@ -19,5 +21,7 @@ export {
 } from "./compare-revisions";
 export { isEmptyComparison } from "./is-empty-comparison";
 export { findMentions, type Mentionable } from "./find-mentions";
+export { resolveMentions, type ResolvedMentions, type UnresolvedMention } from "./resolve-mentions";
+export { unresolvedMentionsMessage } from "./unresolved-mentions-message";
 export { auditCsv, AUDIT_CSV_HEADER, type AuditCsvRow } from "./audit-csv";
 export type { Json } from "./internals/flatten";

@@ -4,7 +4,7 @@ import type { ReviewAction, ReviewOutcome, ReviewState, ReviewStep } from "./typ
 const NEEDS: Record<ReviewAction, { permission: Permission; what: string }> = {
   submit: { permission: { review: ["submit"] }, what: "submit a plan for review" },
   baseline: { permission: { review: ["decide"] }, what: "baseline a plan" },
-  "request-changes": { permission: { review: ["decide"] }, what: "request changes to a plan" },
+  "request-changes": { permission: { review: ["decide"] }, what: "return a plan for rework" },
   edit: { permission: { plan: ["edit"] }, what: "edit the plan" },
 };
 
@@ -27,7 +27,7 @@ const LABEL: Record<ReviewState, string> = {
   draft: "a draft",
   "in-review": "in review",
   baselined: "baselined",
-  "changes-requested": "waiting for changes",
+  "changes-requested": "returned for rework",
 };
 
 /**
@@ -49,7 +49,7 @@ export function nextReviewState(step: ReviewStep): ReviewOutcome {
     return {
       ok: false,
       code: "invalid-transition",
-      reason: `The plan is ${LABEL[step.state]}; "${step.action}" is only possible when it is ${FROM[step.action]
+      reason: `The plan is ${LABEL[step.state]}; you can ${need.what} only when it is ${FROM[step.action]
         .map((s) => LABEL[s])
         .join(" or ")}.`,
     };

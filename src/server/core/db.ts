@@ -6,9 +6,40 @@ export type Tx = Parameters<Parameters<typeof db.transaction>[0]>[0];
 /** The database or a transaction: read helpers accept either. */
 export type Queryable = typeof db | Tx;
 
-/** Runs `fn` in one transaction; anything thrown rolls everything back. */
-export function inTransaction<T>(fn: (tx: Tx) => Promise<T>): Promise<T> {
-  return db.transaction(fn);
+/** Work queued by `afterCommit`, per open transaction (a WeakMap: a finished transaction leaves nothing behind). */
+const AFTER_COMMIT = new WeakMap<Tx, (() => Promise<void>)[]>();
+
+/**
+ * Runs `fn` in one transaction; anything thrown rolls everything back.
+ * Work queued with `afterCommit` runs once the transaction has committed
+ * (never after a rollback), in order; a failure there is logged and does not
+ * undo the committed change.
+ */
+export async function inTransaction<T>(fn: (tx: Tx) => Promise<T>): Promise<T> {
+  const queued: (() => Promise<void>)[] = [];
+  const out = await db.transaction((tx) => {
+    AFTER_COMMIT.set(tx, queued);
+    return fn(tx);
+  });
+  for (const work of queued) {
+    try {
+      await work();
+    } catch (err) {
+      console.error("[db] work after commit failed:", err);
+    }
+  }
+  return out;
+}
+
+/**
+ * Queues `work` (e.g. sending e-mail about the change) to run after `tx`
+ * commits. Outside a transaction of `inTransaction` the work is dropped with
+ * a log line: it must never run for a change that may still roll back.
+ */
+export function afterCommit(tx: Tx, work: () => Promise<void>): void {
+  const queued = AFTER_COMMIT.get(tx);
+  if (queued) queued.push(work);
+  else console.error("[db] afterCommit outside inTransaction: the work was dropped");
 }
 
 /**

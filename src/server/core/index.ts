@@ -28,7 +28,7 @@ export { isDatabaseUnreachable } from "./unavailable";
 export { needsOriginCheck, isBearerOnly, crossSiteReason } from "./request-origin";
 export { clientAddress, CLIENT_ADDRESS_HEADER } from "./client-address";
 export { parseOr400, isUuid, UUID } from "./input";
-export { inTransaction, mapDbError, type Tx, type Queryable } from "./db";
+export { afterCommit, inTransaction, mapDbError, type Tx, type Queryable } from "./db";
 export { getMissionRow, lockMission } from "./mission-scope";
 export { writeActivity, type ActivityEntry, type ActivityActor } from "./activity";
 export type { PlanEvents, PlanEditedEvent } from "./plan-events";

@@ -3,7 +3,7 @@ import { and, asc, eq } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@db/client";
 import { findings, planRevisions, reviewComments, type PlanRevision } from "@db/schema";
-import { findMentions } from "@/lib/review";
+import { resolveMentions, unresolvedMentionsMessage } from "@/lib/review";
 import { paramTextSchema } from "@/schemas/fields";
 import type { Actor } from "@/server/auth/actor";
 import { writeActivity } from "@/server/core/activity";
@@ -58,7 +58,14 @@ export async function createComment(
   input: { body: string; revision?: number; channelKey?: string; findingId?: string },
 ) {
   const members = await listTeamMembers(actor.teamId);
-  const mentioned = findMentions(input.body, members).filter((m) => m.userId !== actor.userId);
+  const resolved = resolveMentions(input.body, members);
+  const unknown = unresolvedMentionsMessage(resolved.unresolved);
+  if (unknown)
+    throw invalidInput(
+      [{ path: "body", message: `${unknown}. Mention team members by name or e-mail address.` }],
+      "The comment mentions someone who is not in the team; nothing was posted.",
+    );
+  const mentioned = resolved.mentioned.filter((m) => m.userId !== actor.userId);
   const made = await inTransaction(async (tx) => {
     const mission = await lockMission(tx, actor, missionId);
     let rev: PlanRevision | null;

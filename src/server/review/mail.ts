@@ -27,7 +27,7 @@ export function reviewRequestedMail(
 ) {
   return message(
     to,
-    `Review requested: ${p.mission}, revision ${p.revision}`,
+    `Submitted for review: ${p.mission}, revision ${p.revision}`,
     [
       `${p.by} submitted revision ${p.revision} of the plan "${p.mission}" for review.`,
       `Open error findings: ${p.openErrors}.`,
@@ -49,11 +49,29 @@ export function reviewDecidedMail(
     note: string;
   },
 ) {
-  const what = p.decision === "baseline" ? "baselined" : "sent back with changes requested";
+  const what = p.decision === "baseline" ? "baselined" : "returned for rework";
   return message(
     to,
-    `${p.decision === "baseline" ? "Baselined" : "Changes requested"}: ${p.mission}, revision ${p.revision}`,
+    `${p.decision === "baseline" ? "Baselined" : "Returned for rework"}: ${p.mission}, revision ${p.revision}`,
     [`${p.by} ${what} revision ${p.revision} of the plan "${p.mission}".`, ...(p.note ? [`Note: ${p.note}`] : [])],
+    `/missions/${p.missionId}`,
+    "Open the mission",
+  );
+}
+
+export function reviewWithdrawnMail(
+  to: string,
+  p: { mission: string; missionId: string; revision: number; by: string; newRevision: number | null },
+) {
+  return message(
+    to,
+    `Review withdrawn: ${p.mission}, revision ${p.revision}`,
+    [
+      `${p.by} edited the plan "${p.mission}" while revision ${p.revision} was in review, so that review was withdrawn: there is nothing to decide until the plan is submitted again.`,
+      p.newRevision === null
+        ? "The edit is stored as a new draft revision."
+        : `The edit is stored as draft revision ${p.newRevision}.`,
+    ],
     `/missions/${p.missionId}`,
     "Open the mission",
   );

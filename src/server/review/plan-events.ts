@@ -1,9 +1,12 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
-import { planRevisions, reviews } from "@db/schema";
+import { and, desc, eq } from "drizzle-orm";
+import { missions, planRevisions, reviews } from "@db/schema";
 import type { ReviewState } from "@/lib/review";
 import { writeActivity } from "@/server/core/activity";
+import { afterCommit } from "@/server/core/db";
 import type { PlanEditedEvent, PlanEvents } from "@/server/core/plan-events";
+import { deliver, reviewWithdrawnMail } from "./mail";
+import { acceptingMail, listTeamMembers } from "./members";
 
 /**
  * Review's side of the plan events (src/server/core/plan-events.ts): the one
@@ -11,7 +14,9 @@ import type { PlanEditedEvent, PlanEvents } from "@/server/core/plan-events";
  * edit (every change stores a new draft revision, so a baselined revision
  * stays exactly as approved); an edit during a review withdraws that review:
  * the submitted revision goes back to draft and its open review row is
- * closed as `withdrawn`.
+ * closed as `withdrawn`. Once the edit has committed, the team's leads and
+ * owners (but the person who edited, and anyone who turned review-request
+ * mail off) get an e-mail saying the review was withdrawn.
  */
 async function withdrawOpenReview({ tx, missionId, actor }: PlanEditedEvent): Promise<void> {
   const inReview: ReviewState = "in-review";
@@ -32,6 +37,26 @@ async function withdrawOpenReview({ tx, missionId, actor }: PlanEditedEvent): Pr
       decisionNote: "The plan was edited during the review.",
     })
     .where(and(eq(reviews.missionId, missionId), eq(reviews.outcome, "open")));
+  const [mission] = await tx
+    .select({ name: missions.name, teamId: missions.teamId })
+    .from(missions)
+    .where(eq(missions.id, missionId));
+  const [latest] = await tx
+    .select({ number: planRevisions.number })
+    .from(planRevisions)
+    .where(eq(planRevisions.missionId, missionId))
+    .orderBy(desc(planRevisions.number))
+    .limit(1);
+  if (mission)
+    afterCommit(tx, () =>
+      mailWithdrawn(
+        actor,
+        missionId,
+        mission,
+        pending.map((p) => p.number),
+        (latest?.number ?? 0) + 1,
+      ),
+    );
   for (const p of pending)
     await writeActivity(tx, actor, {
       missionId,
@@ -41,6 +66,30 @@ async function withdrawOpenReview({ tx, missionId, actor }: PlanEditedEvent): Pr
       revisionBefore: p.number,
       revisionAfter: p.number,
     });
+}
+
+/** The withdrawal e-mails, after the edit has committed. */
+async function mailWithdrawn(
+  actor: PlanEditedEvent["actor"],
+  missionId: string,
+  mission: { name: string; teamId: string },
+  revisions: number[],
+  newRevision: number,
+): Promise<void> {
+  const members = await listTeamMembers(mission.teamId);
+  const reviewers = members.filter((m) => (m.role === "lead" || m.role === "owner") && m.userId !== actor.userId);
+  const ok = await acceptingMail(
+    reviewers.map((r) => r.userId),
+    "reviewRequested",
+  );
+  const mails = reviewers
+    .filter((r) => ok.has(r.userId))
+    .flatMap((r) =>
+      revisions.map((revision) =>
+        reviewWithdrawnMail(r.email, { mission: mission.name, missionId, revision, by: actor.name, newRevision }),
+      ),
+    );
+  await deliver(mails);
 }
 
 export const reviewPlanEvents: PlanEvents = { planEdited: withdrawOpenReview };

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
 import { planRevisions, reviews, type WaiverSnapshot } from "@db/schema";
-import { nextReviewState, type ReviewAction, type ReviewRefusal } from "@/lib/review";
+import { findingKeyText, nextReviewState, type ReviewAction, type ReviewRefusal } from "@/lib/review";
 import type { Actor } from "@/server/auth/actor";
 import { writeActivity } from "@/server/core/activity";
 import { inTransaction, type Tx } from "@/server/core/db";
@@ -20,10 +20,16 @@ function refusal(r: ReviewRefusal): HttpError {
       409,
       "unwaived-errors",
       r.reason,
-      r.unwaived.map((k) => ({ path: `findings.${k}`, message: "open error finding without a waiver" })),
+      r.unwaived.map((k) => ({ path: `findings.${k}`, message: `no waiver yet for ${findingKeyText(k)}` })),
       { unwaived: r.unwaived },
     );
   return new HttpError(409, "invalid-transition", r.reason);
+}
+
+/** How many channels a stored plan document holds (0 for anything that is not a plan with a channel list). */
+function planChannelCount(plan: unknown): number {
+  const channels = (plan as { channels?: unknown } | null)?.channels;
+  return Array.isArray(channels) ? channels.length : 0;
 }
 
 /** Loads the newest revision under the mission lock and applies one workflow action through the state machine. */
@@ -55,6 +61,12 @@ async function transition(tx: Tx, actor: Actor, missionId: string, action: Revie
     waivedKeys: active.map((w) => w.findingKey),
   });
   if (!outcome.ok) throw refusal(outcome);
+  if (action === "submit" && planChannelCount(latest.plan) === 0)
+    throw new HttpError(
+      409,
+      "no-channels",
+      `Revision ${latest.number} has no channels, so no rule has checked anything yet: add at least one channel before submitting the plan for review.`,
+    );
   await tx.update(planRevisions).set({ status: outcome.next }).where(eq(planRevisions.id, latest.id));
   return { mission, latest, next: outcome.next, open, active };
 }

@@ -68,7 +68,7 @@ function checkChannelLimit(existingKeys: Iterable<string>, rows: ChannelCsvRow[]
   throw new HttpError(
     400,
     "invalid-file",
-    `"${filename}" would give the mission ${keys.size} channels (it has ${before}); a plan holds at most ${PLAN_LIMITS.channels} (docs/plan-format.md §2.10 "List limits"). Nothing was saved.`,
+    `"${filename}" would give the mission ${keys.size} channels (it has ${before}); a plan holds at most ${PLAN_LIMITS.channels} (the limit of a plan document). Nothing was saved.`,
     [
       {
         path: `row ${firstOver}`,

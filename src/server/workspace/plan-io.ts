@@ -2,7 +2,7 @@ import "server-only";
 import { eq, sql } from "drizzle-orm";
 import { db } from "@db/client";
 import { chains, channels, detectors, lasers, missions, planRevisions, planSettings, resonators } from "@db/schema";
-import { parsePlan, type Plan } from "@/schemas/plan";
+import { parsePlan, planBoundIssues, type Plan } from "@/schemas/plan";
 import type { Actor } from "@/server/auth/actor";
 import { inTransaction, type Queryable, type Tx } from "@/server/core/db";
 import { HttpError } from "@/server/core/http";
@@ -68,7 +68,7 @@ export async function importPlanDocument(
   const parsed = parsePlan(body);
   if (!parsed.ok)
     throw new HttpError(400, "invalid-plan", "The plan document is not valid; nothing was imported.", parsed.issues);
-  const unstorable = unstorableIssues(parsed.plan);
+  const unstorable = [...planBoundIssues(parsed.plan), ...unstorableIssues(parsed.plan)];
   if (unstorable.length)
     throw new HttpError(400, "invalid-plan", "The plan document cannot be stored; nothing was imported.", unstorable);
   return inTransaction(async (tx) => {

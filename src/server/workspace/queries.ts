@@ -66,6 +66,14 @@ export async function listMissions(actor: Actor) {
       openWarnings: sql<number | null>`${latest("warning_count")}`,
       chainCount: sql<number>`${sql.raw('(select count(*)::int from chains c where c.mission_id = "missions"."id")')}`,
       channelCount: sql<number>`${sql.raw('(select count(*)::int from channels c where c.mission_id = "missions"."id")')}`,
+      // Errors of the newest revision whose finding key (code|chain|channel) carries a waiver not withdrawn.
+      waivedErrors: sql<number>`${sql.raw(
+        `(select count(*)::int from findings f
+           where f.severity = 'error'
+             and f.revision_id = (select r.id from plan_revisions r where r.mission_id = "missions"."id" order by r.number desc limit 1)
+             and exists (select 1 from waivers w where w.mission_id = "missions"."id" and w.withdrawn_at is null
+                           and w.finding_key = f.code || '|' || f.chain_key || '|' || coalesce(f.channel_key, '')))`,
+      )}`,
     })
     .from(missions)
     .where(eq(missions.teamId, actor.teamId))
@@ -79,6 +87,7 @@ export async function listMissions(actor: Actor) {
     channelCount: Number(r.channelCount),
     openErrors: Number(r.openErrors ?? 0),
     openWarnings: Number(r.openWarnings ?? 0),
+    waivedErrors: Number(r.waivedErrors ?? 0),
     updatedAt: r.m.updatedAt.toISOString(),
     version: r.m.version,
   }));

@@ -2,7 +2,7 @@ import "server-only";
 import { isDeepStrictEqual } from "node:util";
 import { eq, sql } from "drizzle-orm";
 import { findings, missions, planRevisions } from "@db/schema";
-import { parsePlan, type Plan } from "@/schemas/plan";
+import { parsePlan, planBoundIssues, type Plan } from "@/schemas/plan";
 import type { ResultDocument } from "@/lib/plan";
 import type { Actor } from "@/server/auth/actor";
 import { writeActivity, type ActivityEntry } from "@/server/core/activity";
@@ -141,6 +141,15 @@ export async function saveAndCheck(
       "invalid-plan",
       "This change would leave the plan invalid; nothing was saved.",
       parsed.issues,
+    );
+  // Hard ranges (ADR 030) on every save: a stored value outside them, kept from before they existed, is named here.
+  const outOfRange = planBoundIssues(parsed.plan);
+  if (outOfRange.length)
+    throw new HttpError(
+      400,
+      "invalid-plan",
+      "The plan would hold a value outside what a laboratory bench can produce; nothing was saved.",
+      outOfRange,
     );
   // The engine runs on the pool's thread (src/server/engine-pool) while this transaction waits.
   const result: ResultDocument = matches ? prepared!.result : await checkInPool(parsed.plan);

@@ -48,7 +48,7 @@ export function ToolsBoard() {
             setCarrierTHz(thz);
             setApplied({ what: "carrier (THz)", value: String(thz) });
           }}
-          applyLabel="Use as carrier"
+          applyLabel="Apply carrier"
         />
         <ResonatorSizing
           initialCarrierTHz={carrierTHz}
@@ -62,7 +62,7 @@ export function ToolsBoard() {
         <ChannelNotation
           onApply={(ch) =>
             setApplied({
-              what: "channel centre (GHz), sideband offset (GHz), bandwidth (MHz)",
+              what: "channel centre (GHz), DSB offset (GHz), bandwidth (MHz)",
               value: `${ch.centerGHz}, ${ch.dsbOffsetGHz ?? "none"}, ${ch.bandwidthMHz}`,
             })
           }

@@ -299,7 +299,7 @@ export const OPERATIONS: Operation[] = [
     method: "post",
     handler: decide.POST,
     tag: "Review",
-    summary: "Decide a review (baseline or request changes)",
+    summary: "Decide a review (baseline it, or return it for rework)",
     ok: { status: 200, schema: reviewTransitionSchema },
   },
   {

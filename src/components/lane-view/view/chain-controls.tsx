@@ -1,6 +1,6 @@
 import { TemperatureWindowLine } from "@/components/envelope/temperature-window-line";
 import { explainCode } from "@/lib/lanes";
-import type { ResultDocument } from "@/lib/plan";
+import { placeReasonText, type ResultDocument } from "@/lib/plan";
 import type { Plan } from "@/schemas/plan";
 import { SEVERITY_COLOUR } from "../vocabulary";
 import { fmt } from "./format";
@@ -53,7 +53,7 @@ export function ChainControls({ plan, result, canSave, saveState, onPlace, onSav
                 disabled={r?.placeGHz == null}
                 title={
                   r?.placeGHz == null
-                    ? `No place: ${r?.placeReason ?? "no result"}`
+                    ? `No LO to suggest: ${placeReasonText(r?.placeReason) ?? "no result yet"}`
                     : `Set the LO to ${fmt(r.placeGHz)} GHz, the middle of the widest feasible interval`
                 }
                 onClick={() => r?.placeGHz != null && onPlace(c.id, r.placeGHz)}

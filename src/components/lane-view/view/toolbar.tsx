@@ -39,7 +39,7 @@ export function LaneToolbar({
             className={`px-3 py-1 ${view === v ? "bg-ink text-white" : "bg-white hover:bg-ink-faint"}`}
             onClick={() => onView(v)}
           >
-            {v === "chart" ? "Chart" : "Table view"}
+            {v === "chart" ? "Chart" : "Table"}
           </button>
         ))}
       </div>

@@ -4,6 +4,8 @@ export interface ReviewAbilities {
   canDecide: boolean;
   canWaive: boolean;
   canComment: boolean;
+  /** The signed-in person (their own @mention notifies nobody). */
+  userId?: string;
 }
 
 /** An ISO time as "YYYY-MM-DD HH:MM UTC". */

@@ -2,9 +2,11 @@
 import { useId, useState } from "react";
 import { useDecideMutation, useSubmitMutation, type ReviewOverview } from "../use-review";
 import type { ReviewAbilities } from "./abilities";
+import { BlockedBaseline } from "./blocked-baseline";
 import { ErrorLine } from "./error-line";
+import type { ApiError } from "@/queries/api";
 
-/** Submit the newest revision, or baseline it or request changes, with an optional note; or say why neither is possible. */
+/** Submit the newest revision, or baseline it or return it for rework, with an optional note; or say why neither is possible. */
 export function Actions({ missionId, data, can }: { missionId: string; data: ReviewOverview; can: ReviewAbilities }) {
   const submit = useSubmitMutation(missionId);
   const decide = useDecideMutation(missionId);
@@ -12,25 +14,28 @@ export function Actions({ missionId, data, can }: { missionId: string; data: Rev
   const noteId = useId();
   const rev = data.revision?.number;
   const unwaived = data.errors.filter((e) => !e.waiver).length;
-  const canSubmitNow =
-    can.canSubmit && rev !== undefined && (data.state === "draft" || data.state === "changes-requested");
+  const submittable = rev !== undefined && (data.state === "draft" || data.state === "changes-requested");
+  const empty = data.channels.length === 0;
+  const canSubmitNow = can.canSubmit && submittable && !empty;
   const canDecideNow = can.canDecide && data.state === "in-review";
   if (!canSubmitNow && !canDecideNow)
     return (
-      <p className="mt-3 text-sm text-slate-700">
-        {data.state === "in-review" && !can.canDecide
-          ? "Waiting for a lead or owner to decide."
-          : data.state === "baselined"
-            ? "This revision is the baseline. Any edit starts a new draft; the baseline stays as approved."
-            : rev === undefined
-              ? "No plan revision yet."
-              : "Your role may not submit or decide."}
+      <p className="mt-3 text-sm text-slate-700" data-testid="review-not-possible">
+        {can.canSubmit && submittable && empty
+          ? "This plan has no channels, so no rule has checked anything yet: add at least one channel before submitting it for review."
+          : data.state === "in-review" && !can.canDecide
+            ? "Waiting for a lead or owner to decide."
+            : data.state === "baselined"
+              ? "This revision is the baseline. Any edit starts a new draft; the baseline stays as approved."
+              : rev === undefined
+                ? "No plan revision yet."
+                : "Your role may not submit or decide."}
       </p>
     );
   return (
     <div className="mt-3">
       <label htmlFor={noteId} className="block text-sm font-medium text-slate-800">
-        Note {canDecideNow ? "(required when requesting changes)" : "(optional)"}
+        Note {canDecideNow ? "(required when returning for rework)" : "(optional)"}
       </label>
       <textarea
         id={noteId}
@@ -77,7 +82,7 @@ export function Actions({ missionId, data, can }: { missionId: string; data: Rev
               }
               className="rounded border border-rose-700 px-3 py-1.5 text-sm font-medium text-rose-800 disabled:opacity-50"
             >
-              Request changes
+              Return for rework
             </button>
           </>
         ) : null}
@@ -85,10 +90,17 @@ export function Actions({ missionId, data, can }: { missionId: string; data: Rev
       {canDecideNow && unwaived > 0 ? (
         <p className="mt-2 text-sm text-amber-900">
           {unwaived} open error finding{unwaived === 1 ? "" : "s"} without a waiver: record a waiver for each below, or
-          request changes.
+          return the plan for rework.
         </p>
       ) : null}
-      <ErrorLine error={submit.error ?? decide.error} />
+      {(decide.error as ApiError | null)?.code === "unwaived-errors" ? (
+        <>
+          <BlockedBaseline data={data} />
+          <ErrorLine error={submit.error} />
+        </>
+      ) : (
+        <ErrorLine error={submit.error ?? decide.error} />
+      )}
     </div>
   );
 }

@@ -3,6 +3,7 @@ import { useId, useState } from "react";
 import { useCommentMutation, useCommentsQuery, type ReviewOverview } from "../use-review";
 import { when, type ReviewAbilities } from "./abilities";
 import { ErrorLine } from "./error-line";
+import { MentionField } from "./mention-field";
 
 /** The comment thread, and a form to comment on the revision, one of its channels or one of its error findings. */
 export function Comments({ missionId, data, can }: { missionId: string; data: ReviewOverview; can: ReviewAbilities }) {
@@ -12,6 +13,8 @@ export function Comments({ missionId, data, can }: { missionId: string; data: Re
   const [target, setTarget] = useState("");
   const bodyId = useId();
   const targetId = useId();
+  const previewId = useId();
+  const [mentionsOk, setMentionsOk] = useState(true);
   const findingName = new Map(
     data.errors.map((e) => [e.id, `${e.code} (${e.chain}${e.channel ? `/${e.channel}` : ""})`]),
   );
@@ -73,19 +76,19 @@ export function Comments({ missionId, data, can }: { missionId: string; data: Re
             ))}
           </select>
           <label htmlFor={bodyId} className="mt-2 block text-xs font-medium text-slate-800">
-            Comment (mention someone with @name or @e-mail address to send them an e-mail)
+            Comment (type @ and a name or e-mail address to mention a team member: they get an e-mail)
           </label>
-          <textarea
+          <MentionField
             id={bodyId}
             value={body}
-            onChange={(e) => setBody(e.target.value)}
-            rows={2}
-            maxLength={5000}
-            className="w-full rounded border border-slate-400 px-2 py-1 text-sm"
+            onChange={setBody}
+            errorId={previewId}
+            selfUserId={can.userId}
+            onValidity={setMentionsOk}
           />
           <button
             type="submit"
-            disabled={post.isPending || body.trim() === ""}
+            disabled={post.isPending || body.trim() === "" || !mentionsOk}
             className="mt-1 rounded bg-slate-900 px-3 py-1.5 text-sm font-medium text-white disabled:opacity-50"
           >
             Post comment

@@ -1,15 +1,10 @@
+import { reviewStateLabel } from "@/lib/review";
 import type { ReviewOverview } from "../use-review";
 import { when } from "./abilities";
 
 /** Every review of the mission: who submitted which revision, and the outcome. */
 export function History({ data }: { data: ReviewOverview }) {
   if (data.reviews.length === 0) return null;
-  const label: Record<string, string> = {
-    open: "waiting for a decision",
-    baselined: "baselined",
-    "changes-requested": "changes requested",
-    withdrawn: "withdrawn by an edit",
-  };
   return (
     <div className="mt-4">
       <h3 className="text-sm font-semibold text-slate-900">Reviews</h3>
@@ -17,7 +12,7 @@ export function History({ data }: { data: ReviewOverview }) {
         {data.reviews.map((r) => (
           <li key={r.id}>
             Revision {r.revision}: submitted by {r.submittedBy} ({when(r.submittedAt)}){r.note ? ` “${r.note}”` : ""} —{" "}
-            {label[r.outcome] ?? r.outcome}
+            {reviewStateLabel(r.outcome, { outcome: true })}
             {r.decidedBy && r.outcome !== "withdrawn" ? ` by ${r.decidedBy}` : ""}
             {r.decisionNote && r.outcome !== "withdrawn" ? `: “${r.decisionNote}”` : ""}
             {r.waivers.length ? ` (${r.waivers.length} waiver${r.waivers.length === 1 ? "" : "s"})` : ""}

@@ -160,7 +160,7 @@ export function detectorGroups(): FieldGroup[] {
         { name: "maxGHz", label: "Usable IF band to", unit: "GHz", kind: "number" },
         {
           name: "maxInputMW",
-          label: "Maximum optical input per photodiode",
+          label: "Max input per photodiode",
           unit: "mW",
           kind: "number",
           caution: "laser",

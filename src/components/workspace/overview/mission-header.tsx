@@ -1,6 +1,7 @@
 import Link from "next/link";
 import { api } from "@/queries/api";
 import type { Mission } from "@/queries/types";
+import { errorCountText } from "@/components/waivers";
 import { formatAge, plural } from "../format";
 import { buttonClass, ErrorNote, Spinner } from "../ui";
 
@@ -17,6 +18,8 @@ export interface MissionHeaderProps {
   latest: number | null;
   /** The latest check's counts, or null while there is none. */
   counts: { error: number; warning: number; info: number } | null;
+  /** How many of the errors carry a recorded waiver. */
+  waivedErrors?: number;
   resultLoading: boolean;
   /** Something is being refetched after a change (the server re-checks). */
   busy: boolean;
@@ -34,6 +37,7 @@ export function MissionHeader({
   deleteError,
   latest,
   counts,
+  waivedErrors = 0,
   resultLoading,
   busy,
 }: MissionHeaderProps) {
@@ -88,7 +92,12 @@ export function MissionHeader({
           </span>
           {counts ? (
             <>
-              <span className="text-sev-error">{plural(counts.error, "error")}</span>
+              <span
+                className={counts.error > 0 && waivedErrors >= counts.error ? "text-emerald-800" : "text-sev-error"}
+                data-testid="error-count"
+              >
+                {errorCountText(counts.error, waivedErrors)}
+              </span>
               <span className="text-sev-warning">{plural(counts.warning, "warning")}</span>
               <span className="text-sev-info">{counts.info} info</span>
             </>

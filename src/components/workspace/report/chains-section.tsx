@@ -1,4 +1,5 @@
 import { OpticalFrequency } from "@/components/tools";
+import { placeReasonText } from "@/lib/plan";
 import type { Chain, Detector, Laser, PlanResult, Resonator } from "@/queries/types";
 import { formatGHz, formatInterval, formatMHz, formatNumber } from "../format";
 import { loTHz } from "../hardware";
@@ -33,7 +34,7 @@ export function ChainsSection({
             <th className={th}>Linewidth (MHz)</th>
             <th className={th}>Per-photodiode input (mW)</th>
             <th className={th}>Feasible LO offsets (GHz)</th>
-            <th className={th}>Place (GHz)</th>
+            <th className={th}>Suggested LO (GHz)</th>
             <th className={th}>Temperature control (K)</th>
             <th className={th}>Temperature window (K)</th>
             <th className={th}>Margin (K)</th>
@@ -74,7 +75,11 @@ export function ChainsSection({
                     : "–"}
                 </td>
                 <td className={td}>
-                  {r ? (r.placeGHz === null ? `none (${r.placeReason ?? ""})` : formatGHz(r.placeGHz)) : "–"}
+                  {r
+                    ? r.placeGHz === null
+                      ? `none: ${placeReasonText(r.placeReason) ?? ""}`
+                      : formatGHz(r.placeGHz)
+                    : "–"}
                 </td>
                 <td className={td}>±{formatNumber(c.temperatureExcursionK, 3)}</td>
                 <td className={td} data-testid={`report-window-${c.key}`}>

@@ -73,7 +73,7 @@ export function HardwareSection({
             <tr>
               <th className={th}>Detector</th>
               <th className={th}>IF band (GHz)</th>
-              <th className={th}>Max input (mW)</th>
+              <th className={th}>Max input per photodiode (mW)</th>
               <th className={th}>Sample rate (GHz)</th>
             </tr>
           </thead>

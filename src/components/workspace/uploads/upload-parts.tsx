@@ -3,6 +3,7 @@
 import { useState } from "react";
 import { ApiError } from "@/queries/api";
 import { uploadFile } from "@/queries/upload";
+import { confirmEditDuringReview, missionOfApplyingUpload } from "@/queries/edit-during-review";
 import { ErrorNote } from "../ui";
 
 // What the three uploads share: the send-and-wait state, its display, the
@@ -21,6 +22,8 @@ export function useUpload() {
   const run = async <T,>(url: string, file: File): Promise<T | null> => {
     setPhase({ state: "sending", share: 0 });
     try {
+      const applying = missionOfApplyingUpload(url);
+      if (applying) await confirmEditDuringReview(applying);
       const out = await uploadFile<T>(url, file, (share) => setPhase({ state: "sending", share }));
       setPhase({ state: "idle" });
       return out;

@@ -13,6 +13,7 @@ import { noiseRules } from "./rules/noise-rules";
 import { powerRules } from "./rules/power-rules";
 import { centreRules } from "./rules/centre-rules";
 import { regulatoryRules } from "./rules/regulatory-rules";
+import { plausibilityRules } from "./rules/plausibility-rules";
 import { samplingRules } from "./rules/sampling-rules";
 import { sensitivityRules } from "./rules/sensitivity-rules";
 import { spurRules } from "./rules/spur-rules";
@@ -70,5 +71,6 @@ export function evaluateChain(ctx: ChainContext, L: number, options: EvaluateOpt
   const spurs = spurRules(at, out, options.work);
   sensitivityRules(at, out);
   regulatoryRules(at, out);
+  plausibilityRules(at, out);
   return { L, channels: at.channels, findings: out.ordered(), spurs };
 }
