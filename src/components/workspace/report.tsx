@@ -1,13 +1,7 @@
 "use client";
 
 import Link from "next/link";
-import {
-  useCollectionQuery,
-  useMissionQuery,
-  useResultQuery,
-  useRevisionsQuery,
-  useSettingsQuery,
-} from "@/queries/missions";
+import { useMissionQuery, useMissionDataQueries } from "@/queries/missions";
 import { buildChannelRows } from "./channel-rows";
 import { countBySeverity } from "./findings";
 import { formatNumber } from "./format";
@@ -33,14 +27,8 @@ export const MODEL_V1_LIMITS = [
 
 export function MissionReport({ missionId }: { missionId: string }) {
   const mission = useMissionQuery(missionId);
-  const lasers = useCollectionQuery(missionId, "lasers");
-  const resonators = useCollectionQuery(missionId, "resonators");
-  const detectors = useCollectionQuery(missionId, "detectors");
-  const chains = useCollectionQuery(missionId, "chains");
-  const channels = useCollectionQuery(missionId, "channels");
-  const settings = useSettingsQuery(missionId);
-  const result = useResultQuery(missionId);
-  const revisions = useRevisionsQuery(missionId);
+  const { lasers, resonators, detectors, chains, channels, settings, result, revisions } =
+    useMissionDataQueries(missionId);
   const queries = [mission, lasers, resonators, detectors, chains, channels, settings, result, revisions];
   if (queries.some((q) => q.isLoading)) return <Spinner label="Preparing the report…" />;
   const failed = queries.find((q) => q.error);
