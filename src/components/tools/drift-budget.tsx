@@ -4,11 +4,12 @@ import { useId, useState } from "react";
 import { type DriftCombination, driftBudget, modeShiftPerKelvin } from "@/lib/optics";
 import { ceilToStep, formatFixed, LN_FIT_CARRIER_THZ } from "./format";
 import { attempt } from "./internals/attempt";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
 import { Choice } from "./internals/choice";
 import { FieldGrid, NumberField, useNumberText } from "./internals/number-field";
 
-export interface DriftBudgetProps {
+/** Props; `onApply` receives driftMHz, rounded up to 0.1 MHz. */
+export interface DriftBudgetProps extends ApplyProps<number> {
   initialLaser2MHz?: number;
   initialResonatorMilliK?: number;
   initialLockOffsetMHz?: number;
@@ -19,9 +20,6 @@ export interface DriftBudgetProps {
   /** A measured mode shift (GHz/K) to use instead of the LiNbO3 estimate. */
   initialModeShiftGHzPerK?: number;
   initialCombine?: DriftCombination;
-  /** Receives driftMHz, rounded up to 0.1 MHz. */
-  onApply?: (driftMHz: number) => void;
-  applyLabel?: string;
 }
 
 /** Drift budget of the laser-pair offset → the plan's driftMHz. */

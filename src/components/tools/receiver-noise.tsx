@@ -4,10 +4,11 @@ import { useId, useState } from "react";
 import { planckRadiationTemperature, receiverNoise } from "@/lib/optics";
 import { ceilToStep, formatFixed, formatSignificant } from "./format";
 import { attempt } from "./internals/attempt";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
 import { FieldGrid, NumberField, useNumberText } from "./internals/number-field";
 
-export interface ReceiverNoiseProps {
+/** Props; `onApply` receives receiverK, rounded up to 1 K. */
+export interface ReceiverNoiseProps extends ApplyProps<number> {
   initialRfGHz?: number;
   /** Photon-number conversion efficiency η_ph as a fraction (0 < η ≤ 1). */
   initialPhotonEfficiency?: number;
@@ -15,9 +16,6 @@ export interface ReceiverNoiseProps {
   initialOpticalEfficiency?: number;
   /** Lossy front end ahead of the up-converter; null for none. */
   initialFrontEnd?: { lossDB: number; physicalK: number } | null;
-  /** Receives receiverK, rounded up to 1 K. */
-  onApply?: (receiverK: number) => void;
-  applyLabel?: string;
 }
 
 /** Design estimate of the receiver noise temperature → the plan's receiverK. */

@@ -3,7 +3,7 @@
 import { useId, useState } from "react";
 import { linewidthFromQ } from "@/lib/optics";
 import { formatFixed, formatSignificant, type FieldParse } from "./format";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
 import { Choice } from "./internals/choice";
 import { fieldInput, FieldGrid, NumberField } from "./internals/number-field";
 import { INDEX_SOURCES, resonatorSizing, type IndexSource, type SizingTexts } from "./internals/resonator-sizing-calc";
@@ -13,7 +13,8 @@ export interface ResonatorApplyValue {
   loadedQ: number;
 }
 
-export interface ResonatorSizingProps {
+/** Props; `onApply` receives the FSR and loaded Q, the two numbers a resonator entry holds. */
+export interface ResonatorSizingProps extends ApplyProps<ResonatorApplyValue> {
   /** Start from a radius (µm) instead of an FSR. */
   initialRadiusUm?: number;
   /** Start from an FSR (GHz); default 183.31 when no radius is given. */
@@ -23,9 +24,6 @@ export interface ResonatorSizingProps {
   initialLoadedQ?: number;
   /** A measured group index; when given it is used instead of the fit. */
   initialMeasuredGroupIndex?: number;
-  /** Receives the FSR and loaded Q, the two numbers a resonator entry holds. */
-  onApply?: (value: ResonatorApplyValue) => void;
-  applyLabel?: string;
 }
 
 /**

@@ -4,18 +4,16 @@ import { useId, useState } from "react";
 import { frequencyTHzFromNm, GRID_SPACINGS_GHZ, nearestGridChannel, wavelengthNmFromTHz } from "@/lib/optics";
 import { formatFixed, formatSigned, parseNumberField } from "./format";
 import { attempt } from "./internals/attempt";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
 import { Choice } from "./internals/choice";
 import { fieldInput, NumberField } from "./internals/number-field";
 
-export interface WavelengthGridProps {
+/** Props; `onApply` receives an optical frequency in THz (the entered one or a grid centre). */
+export interface WavelengthGridProps extends ApplyProps<number> {
   /** Starting optical frequency, THz (default 193.4). */
   initialTHz?: number;
   /** Which quantity the user types first (default THz). */
   initialUnit?: "THz" | "nm";
-  /** Receives an optical frequency in THz (the entered one or a grid centre). */
-  onApply?: (frequencyTHz: number) => void;
-  applyLabel?: string;
 }
 
 /**
