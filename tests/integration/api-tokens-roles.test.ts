@@ -14,7 +14,7 @@ import {
   newVerifiedUser,
   type TeamWithRoles,
 } from "../setup/auth-helpers";
-import { call, missionWithPlan } from "../setup/workspace-helpers";
+import { call, missionWithPlan, type Reply } from "../setup/workspace-helpers";
 import { uniqueKey } from "../setup/workspace-bodies";
 import {
   DECIDE,
@@ -47,6 +47,13 @@ async function missionWithError(): Promise<{ id: string; findingId: string }> {
   const id = await missionWithPlan(team.owner, validPlanInput());
   const ov = await call(team.owner, "GET", `/api/v1/missions/${id}/review`);
   return { id, findingId: ov.body.errors[0].id };
+}
+
+/** A mission of that plan with a waiver (of `reason`) on one of its errors. */
+async function missionWithWaiver(reason: string): Promise<{ id: string; w: Reply }> {
+  const { id, findingId } = await missionWithError();
+  const w = await call(team.owner, "POST", `/api/v1/missions/${id}/review/waivers`, { findingId, reason });
+  return { id, w };
 }
 
 const CASES: RoleCase[] = [
@@ -103,11 +110,7 @@ const CASES: RoleCase[] = [
     allowed: DECIDE,
     ok: 200,
     prepare: async () => {
-      const { id, findingId } = await missionWithError();
-      const w = await call(team.owner, "POST", `/api/v1/missions/${id}/review/waivers`, {
-        findingId,
-        reason: "first reason",
-      });
+      const { id, w } = await missionWithWaiver("first reason");
       return {
         method: "PATCH",
         path: `/api/v1/missions/${id}/review/waivers/${w.body.id}`,
@@ -120,11 +123,7 @@ const CASES: RoleCase[] = [
     allowed: DECIDE,
     ok: 200,
     prepare: async () => {
-      const { id, findingId } = await missionWithError();
-      const w = await call(team.owner, "POST", `/api/v1/missions/${id}/review/waivers`, {
-        findingId,
-        reason: "to withdraw",
-      });
+      const { id, w } = await missionWithWaiver("to withdraw");
       return { method: "DELETE", path: `/api/v1/missions/${id}/review/waivers/${w.body.id}` };
     },
   },
