@@ -12,15 +12,9 @@ ensure_postgres
 PG_DIR="$(cluster_dir "$NAME")"
 start_cluster "$PG_DIR" "$PG_PORT"
 ensure_database "$PG_PORT" heterolane
-export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/heterolane"
-export BETTER_AUTH_SECRET="dev-secret-$NAME-0123456789abcdef0123456789"
-export BETTER_AUTH_URL="http://localhost:$APP_PORT"
-export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
-export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
-export HETEROLANE_DEV_ROUTES=1
-export HETEROLANE_AUTH_RATE_LIMIT=off
-# As in the test command: the test client plays one trusted proxy (X-Forwarded-For names client addresses).
-export HETEROLANE_TRUSTED_PROXY_HOPS=1
+# As in the test command (src/ops/lib.sh).
+export_test_app_env "postgres://postgres@127.0.0.1:$PG_PORT/heterolane" \
+  "dev-secret-$NAME-0123456789abcdef0123456789" "$APP_PORT" "$SMTP_PORT"
 export NEXT_DIST_DIR=".next-$NAME"
 node_modules/.bin/tsx db/migrate.ts
 pids=()

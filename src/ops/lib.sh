@@ -142,3 +142,18 @@ ensure_build() {
     (cd "$ROOT" && node_modules/.bin/next build >"$ROOT/.data/build.log" 2>&1) || { tail -n 60 "$ROOT/.data/build.log" >&2; return 1; }
   fi
 }
+
+# export_test_app_env DATABASE_URL SECRET APP_PORT SMTP_PORT: the environment of
+# an app under development or test: its database, auth secret and address, the
+# mail catcher, the development routes, no auth rate limit, and one trusted proxy
+# (the test client names client addresses in X-Forwarded-For).
+export_test_app_env() {
+  export DATABASE_URL="$1"
+  export BETTER_AUTH_SECRET="$2"
+  export BETTER_AUTH_URL="http://localhost:$3"
+  export SMTP_URL="smtp://127.0.0.1:$4"
+  export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
+  export HETEROLANE_DEV_ROUTES=1
+  export HETEROLANE_AUTH_RATE_LIMIT=off
+  export HETEROLANE_TRUSTED_PROXY_HOPS=1
+}

@@ -39,17 +39,11 @@ start_cluster "$PG_DIR" "$PG_PORT"
 ensure_database "$PG_PORT" heterolane_test
 set +e
 
-export DATABASE_URL="postgres://postgres@127.0.0.1:$PG_PORT/heterolane_test"
-export BETTER_AUTH_SECRET="test-secret-$(node -e "console.log(require('crypto').randomBytes(16).toString('hex'))")"
-export BETTER_AUTH_URL="http://localhost:$APP_PORT"
-export SMTP_URL="smtp://127.0.0.1:$SMTP_PORT"
-export MAIL_FROM="Heterolane <no-reply@heterolane.local>"
-export HETEROLANE_DEV_ROUTES=1
-export HETEROLANE_AUTH_RATE_LIMIT=off
 # The test client plays the part of one reverse proxy: the app believes the
 # last X-Forwarded-For entry (tests name client addresses that way); one
 # process below runs without a trusted proxy (HETEROLANE_RATE_LIMIT_DIRECT_URL).
-export HETEROLANE_TRUSTED_PROXY_HOPS=1
+export_test_app_env "postgres://postgres@127.0.0.1:$PG_PORT/heterolane_test" \
+  "test-secret-$(node -e "console.log(require('crypto').randomBytes(16).toString('hex'))")" "$APP_PORT" "$SMTP_PORT"
 export HETEROLANE_TEST_URL="http://localhost:$APP_PORT"
 
 passed=0; failed=0; skipped=0

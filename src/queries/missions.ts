@@ -183,3 +183,17 @@ export function useDeleteEntityMutation(missionId: string, c: Collection) {
     onSettled: () => invalidateMission(qc, missionId),
   });
 }
+
+/** Every query a whole-mission page reads: the hardware, chains and channels, the settings, the latest result and the revisions. */
+export function useMissionDataQueries(missionId: string) {
+  return {
+    lasers: useCollectionQuery(missionId, "lasers"),
+    resonators: useCollectionQuery(missionId, "resonators"),
+    detectors: useCollectionQuery(missionId, "detectors"),
+    chains: useCollectionQuery(missionId, "chains"),
+    channels: useCollectionQuery(missionId, "channels"),
+    settings: useSettingsQuery(missionId),
+    result: useResultQuery(missionId),
+    revisions: useRevisionsQuery(missionId),
+  };
+}

@@ -2,25 +2,10 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { applyChannelEdit } from "./optimistic";
 import type { Channel } from "./types";
+import { channelRow } from "../../tests/fixtures/demo-values";
 
-const ch = (id: string, centerGHz: number): Channel => ({
-  id,
-  version: 1,
-  key: id,
-  name: id,
-  chainId: "c",
-  centerGHz,
-  bandwidthMHz: 10,
-  dsbOffsetGHz: null,
-  integrationMs: 10,
-  antennaK: 250,
-  receiverK: 5000,
-  gainStability: 0,
-  requiredNedtK: null,
-  ifFilter: "slot",
-  centreToleranceMHz: null,
-  receiverKSource: "entered",
-});
+const ch = (id: string, centerGHz: number): Channel =>
+  channelRow(id, { id, chainId: "c", centerGHz, requiredNedtK: null });
 
 describe("applyChannelEdit", () => {
   it("changes only the edited channel and keeps the stored version", () => {

@@ -14,27 +14,21 @@ import {
   newVerifiedUser,
   type TeamWithRoles,
 } from "../setup/auth-helpers";
-import { call, missionWithPlan, upload, type Reply } from "../setup/workspace-helpers";
+import { call, missionWithPlan, type Reply } from "../setup/workspace-helpers";
+import { uniqueKey } from "../setup/workspace-bodies";
 import {
-  CHANNELS_CSV_HEADER,
-  chainBody,
-  channelBody,
-  DETECTOR_CSV,
-  detectorBody,
-  laserBody,
-  resonatorBody,
-  TUNING_CSV,
-  uniqueKey,
-} from "../setup/workspace-bodies";
+  DECIDE,
+  EDIT,
+  RoleMission,
+  roleMatrix,
+  ROLES,
+  sendRequest,
+  workspaceMutationCases,
+  type Role,
+  type RoleCase,
+} from "../setup/role-matrix";
 import { validPlanInput } from "../fixtures/valid-plan";
 import { makeToken, OpenApiChecker, TokenClient } from "./support/tokens";
-
-type Role = "owner" | "lead" | "engineer" | "viewer";
-const ROLES: Role[] = ["owner", "lead", "engineer", "viewer"];
-const EDIT: Role[] = ["owner", "lead", "engineer"];
-const DECIDE: Role[] = ["owner", "lead"];
-const KINDS = ["lasers", "resonators", "detectors", "chains", "channels"] as const;
-type Kind = (typeof KINDS)[number];
 
 // The clean worked example (no error findings; invented demo data).
 const cleanPlan = () =>
@@ -44,25 +38,9 @@ let team: TeamWithRoles;
 const tokens = {} as Record<Role, TokenClient>;
 let outsider: TokenClient;
 let checker: OpenApiChecker;
-let missionId = "";
-const ids: Record<string, string> = {};
+const mission = new RoleMission();
+const M = mission.path;
 const problems: string[] = [];
-const M = () => `/api/v1/missions/${missionId}`;
-
-async function fresh(kind: Kind): Promise<{ id: string; version: number }> {
-  const o = team.owner;
-  let body: unknown;
-  if (kind === "lasers") body = laserBody();
-  else if (kind === "resonators") body = resonatorBody();
-  else if (kind === "detectors") body = detectorBody();
-  else if (kind === "chains") {
-    const laser = await call(o, "POST", `${M()}/lasers`, laserBody());
-    body = chainBody({ laserId: laser.body.id, resonatorId: ids.resonators!, detectorId: ids.detectors! });
-  } else body = channelBody(ids.chains!);
-  const r = await call(o, "POST", `${M()}/${kind}`, body);
-  if (r.status !== 201) throw new Error(`fresh ${kind}: ${r.status} ${r.text}`);
-  return { id: r.body.id, version: r.body.version };
-}
 
 /** A mission of the plan with four open errors, and the id of one of them. */
 async function missionWithError(): Promise<{ id: string; findingId: string }> {
@@ -71,142 +49,15 @@ async function missionWithError(): Promise<{ id: string; findingId: string }> {
   return { id, findingId: ov.body.errors[0].id };
 }
 
-interface Req {
-  method: string;
-  path: string;
-  json?: unknown;
-  file?: string;
-}
-interface Case {
-  name: string;
-  allowed: Role[];
-  ok: number;
-  prepare: () => Promise<Req>;
-  /** Mission-scoped: another team's token gets 404. */
-  scoped?: boolean;
+/** A mission of that plan with a waiver (of `reason`) on one of its errors. */
+async function missionWithWaiver(reason: string): Promise<{ id: string; w: Reply }> {
+  const { id, findingId } = await missionWithError();
+  const w = await call(team.owner, "POST", `/api/v1/missions/${id}/review/waivers`, { findingId, reason });
+  return { id, w };
 }
 
-const CASES: Case[] = [
-  {
-    name: "POST missions",
-    allowed: EDIT,
-    ok: 201,
-    scoped: false,
-    prepare: async () => ({ method: "POST", path: "/api/v1/missions", json: { name: `Tokens ${uniqueKey("m")}` } }),
-  },
-  {
-    name: "PATCH mission",
-    allowed: EDIT,
-    ok: 200,
-    prepare: async () => {
-      const m = await call(team.owner, "GET", M());
-      return { method: "PATCH", path: M(), json: { description: uniqueKey("d"), version: m.body.version } };
-    },
-  },
-  {
-    name: "DELETE mission",
-    allowed: ["owner"],
-    ok: 200,
-    prepare: async () => {
-      const other = await call(team.owner, "POST", "/api/v1/missions", { name: `Doomed ${uniqueKey("m")}` });
-      return { method: "DELETE", path: `/api/v1/missions/${other.body.id}?version=${other.body.version}` };
-    },
-  },
-  ...KINDS.flatMap<Case>((k) => [
-    {
-      name: `POST ${k}`,
-      allowed: EDIT,
-      ok: 201,
-      prepare: async () => {
-        let json: unknown;
-        if (k === "lasers") json = laserBody();
-        else if (k === "resonators") json = resonatorBody();
-        else if (k === "detectors") json = detectorBody();
-        else if (k === "chains") {
-          const laser = await fresh("lasers");
-          json = chainBody({ laserId: laser.id, resonatorId: ids.resonators!, detectorId: ids.detectors! });
-        } else json = channelBody(ids.chains!);
-        return { method: "POST", path: `${M()}/${k}`, json };
-      },
-    },
-    {
-      name: `PATCH ${k}/{id}`,
-      allowed: EDIT,
-      ok: 200,
-      prepare: async () => {
-        const row = await fresh(k);
-        const change: Record<Kind, Record<string, unknown>> = {
-          lasers: { driftMHz: 15 },
-          resonators: { loadedQ: 2e7 },
-          detectors: { maxGHz: 6.5 },
-          chains: { pathLossDB: 2 },
-          channels: { integrationMs: 20 },
-        };
-        return { method: "PATCH", path: `${M()}/${k}/${row.id}`, json: { ...change[k], version: row.version } };
-      },
-    },
-    {
-      name: `DELETE ${k}/{id}`,
-      allowed: EDIT,
-      ok: 200,
-      prepare: async () => {
-        const row = await fresh(k);
-        return { method: "DELETE", path: `${M()}/${k}/${row.id}?version=${row.version}` };
-      },
-    },
-  ]),
-  {
-    name: "PUT settings",
-    allowed: EDIT,
-    ok: 200,
-    prepare: async () => {
-      const s = await call(team.owner, "GET", `${M()}/settings`);
-      return {
-        method: "PUT",
-        path: `${M()}/settings`,
-        json: { ...s.body, updatedAt: undefined, guardMHz: 40 + Math.random() },
-      };
-    },
-  },
-  {
-    name: "POST plan (import)",
-    allowed: EDIT,
-    ok: 201,
-    prepare: async () => {
-      const other = await missionWithPlan(team.owner, undefined);
-      return { method: "POST", path: `/api/v1/missions/${other}/plan`, json: validPlanInput() };
-    },
-  },
-  {
-    name: "POST uploads/tuning-map (preview)",
-    allowed: EDIT,
-    ok: 200,
-    prepare: async () => ({
-      method: "POST",
-      path: `${M()}/uploads/tuning-map?laserId=${ids.lasers}&gapMHz=15`,
-      file: TUNING_CSV,
-    }),
-  },
-  {
-    name: "POST uploads/detector-response (preview)",
-    allowed: EDIT,
-    ok: 200,
-    prepare: async () => ({
-      method: "POST",
-      path: `${M()}/uploads/detector-response?detectorId=${ids.detectors}&dropDB=3`,
-      file: DETECTOR_CSV,
-    }),
-  },
-  {
-    name: "POST uploads/channels (preview)",
-    allowed: EDIT,
-    ok: 200,
-    prepare: async () => ({
-      method: "POST",
-      path: `${M()}/uploads/channels`,
-      file: `${CHANNELS_CSV_HEADER}\nx1,extra,A,183.2,10,,10,250,5000,0,\n`,
-    }),
-  },
+const CASES: RoleCase[] = [
+  ...workspaceMutationCases(mission, "Tokens"),
   {
     name: "POST review/submit",
     allowed: EDIT,
@@ -259,11 +110,7 @@ const CASES: Case[] = [
     allowed: DECIDE,
     ok: 200,
     prepare: async () => {
-      const { id, findingId } = await missionWithError();
-      const w = await call(team.owner, "POST", `/api/v1/missions/${id}/review/waivers`, {
-        findingId,
-        reason: "first reason",
-      });
+      const { id, w } = await missionWithWaiver("first reason");
       return {
         method: "PATCH",
         path: `/api/v1/missions/${id}/review/waivers/${w.body.id}`,
@@ -276,22 +123,11 @@ const CASES: Case[] = [
     allowed: DECIDE,
     ok: 200,
     prepare: async () => {
-      const { id, findingId } = await missionWithError();
-      const w = await call(team.owner, "POST", `/api/v1/missions/${id}/review/waivers`, {
-        findingId,
-        reason: "to withdraw",
-      });
+      const { id, w } = await missionWithWaiver("to withdraw");
       return { method: "DELETE", path: `/api/v1/missions/${id}/review/waivers/${w.body.id}` };
     },
   },
 ];
-
-async function send(c: TokenClient, req: Req): Promise<Reply> {
-  const r =
-    req.file !== undefined ? await upload(c, req.path, req.file) : await call(c, req.method, req.path, req.json);
-  problems.push(...checker.problems(req.method, `${req.path}`, r.status, r.headers.get("content-type"), r.body));
-  return r;
-}
 
 beforeAll(async () => {
   team = await makeTeamWithRoles();
@@ -302,35 +138,24 @@ beforeAll(async () => {
   const doc = await call(tokens.viewer, "GET", "/api/v1/openapi.json");
   if (doc.status !== 200) throw new Error(`openapi.json answered ${doc.status}`);
   checker = new OpenApiChecker(doc.body);
-  missionId = await missionWithPlan(team.owner, validPlanInput());
-  for (const k of KINDS) {
-    const r = await call(team.owner, "GET", `${M()}/${k}`);
-    ids[k] = r.body[k][0].id;
-  }
+  await mission.setUp(team.owner);
 }, 240_000);
 
 afterAll(closeTestPool);
 vi.setConfig({ testTimeout: 180_000 });
 
 describe("mutation routes × API token roles", () => {
-  for (const c of CASES) {
-    it(`${c.name}: ${c.allowed.join("/")} tokens ${c.ok}, other roles' tokens 403${c.scoped === false ? "" : ", another team's token 404"}`, async () => {
-      for (const role of ROLES) {
-        const r = await send(tokens[role], await c.prepare());
-        const expected = c.allowed.includes(role) ? c.ok : 403;
-        expect({ role, status: r.status, body: r.status === expected ? null : r.text }).toEqual({
-          role,
-          status: expected,
-          body: null,
-        });
-        if (expected === 403) expect(r.body.error.code).toBe("forbidden");
-      }
-      if (c.scoped !== false) {
-        const r = await send(outsider, await c.prepare());
-        expect({ status: r.status, code: r.body?.error?.code }).toEqual({ status: 404, code: "not-found" });
-      }
-    });
-  }
+  roleMatrix(CASES, {
+    as: (role) => tokens[role],
+    outsider: () => outsider,
+    send: async (c, req) => {
+      const r = await sendRequest(c, req);
+      problems.push(...checker.problems(req.method, `${req.path}`, r.status, r.headers.get("content-type"), r.body));
+      return r;
+    },
+    title: (c) =>
+      `${c.name}: ${c.allowed.join("/")} tokens ${c.ok}, other roles' tokens 403${c.scoped === false ? "" : ", another team's token 404"}`,
+  });
 
   it("every answer above matched the OpenAPI description", () => {
     expect(checker.checked).toBeGreaterThanOrEqual(CASES.length * 4);

@@ -85,14 +85,7 @@ export class TestClient {
   // eslint-disable-next-line @typescript-eslint/no-explicit-any
   async postJson(path: string, json: unknown): Promise<{ status: number; body: any }> {
     const res = await this.fetch(path, { method: "POST", json });
-    const text = await res.text();
-    let body: unknown = null;
-    try {
-      body = JSON.parse(text);
-    } catch {
-      body = null;
-    }
-    return { status: res.status, body };
+    return { status: res.status, body: jsonOrNull(await res.text()) };
   }
 }
 
@@ -226,4 +219,13 @@ export async function makeTeamWithRoles(): Promise<TeamWithRoles> {
     people[role] = c;
   }
   return { teamId, owner, ...(people as Record<"lead" | "engineer" | "viewer", TestClient>) };
+}
+
+/** The text parsed as JSON, or null when it is not JSON. */
+export function jsonOrNull(text: string): unknown {
+  try {
+    return JSON.parse(text);
+  } catch {
+    return null;
+  }
 }

@@ -1,16 +1,13 @@
 /** Request bodies of the workspace entities (invented demo values) for the integration tests. */
+import { demoChain, demoLaser } from "../fixtures/demo-values";
+
 let n = 0;
 export const uniqueKey = (prefix: string) => `${prefix}${Date.now().toString(36)}${(n++).toString(36)}`;
 
 export const laserBody = (key = uniqueKey("L")) => ({
   key,
-  carrierTHz: 193.4,
-  carrierPowerMW: 10,
-  loPowerMW: 2,
-  reach: [{ minGHz: 150, maxGHz: 200 }],
-  stepMHz: 10,
+  ...demoLaser(),
   driftMHz: 20,
-  lock: { modulationMHz: 60, modulationIndex: 0.5, orders: 2 },
 });
 
 export const resonatorBody = (key = uniqueKey("R")) => ({ key, fsrGHz: 183.31, loadedQ: 1e7 });
@@ -26,12 +23,7 @@ export const detectorBody = (key = uniqueKey("D")) => ({
 export const chainBody = (ids: { laserId: string; resonatorId: string; detectorId: string }, key = uniqueKey("C")) => ({
   key,
   ...ids,
-  mode: 1,
-  sideband: "upper",
-  loOffsetGHz: 184.81,
-  rfInput: { minGHz: 175, maxGHz: 195 },
-  tapFraction: 0.01,
-  pathLossDB: 3,
+  ...demoChain(),
 });
 
 export const channelBody = (chainId: string, key = uniqueKey("ch")) => ({

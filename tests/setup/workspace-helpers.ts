@@ -2,7 +2,7 @@
  * Helpers for the workspace integration tests: JSON calls as one person,
  * a mission filled from a plan document, and multipart uploads.
  */
-import type { TestClient } from "./auth-helpers";
+import { jsonOrNull, type TestClient } from "./auth-helpers";
 
 export interface Reply {
   status: number;
@@ -14,13 +14,7 @@ export interface Reply {
 /** Reads a response: status, headers, text, and the body as JSON when it parses (null otherwise). */
 async function readReply(res: Response): Promise<Reply> {
   const text = await res.text();
-  let body: unknown = null;
-  try {
-    body = JSON.parse(text);
-  } catch {
-    body = null;
-  }
-  return { status: res.status, body, text, headers: res.headers };
+  return { status: res.status, body: jsonOrNull(text), text, headers: res.headers };
 }
 
 /** Sends a request (JSON body when given) and reads the answer as JSON when possible. */

@@ -8,6 +8,7 @@ import { requireSessionPage } from "@/server/auth/page-guard";
 import { grantableRoles } from "@/server/api-tokens/roles";
 import { listTokens } from "@/server/api-tokens/service";
 import { createTokenAction, revokeTokenAction } from "./actions";
+import { ListHead } from "@/components/shell/list-head";
 
 export const metadata: Metadata = { title: "Account" };
 
@@ -50,19 +51,7 @@ export default async function AccountPage() {
         <h2 className="border-b border-ink/10 px-4 py-2.5 text-sm font-semibold">Your tokens ({tokens.length})</h2>
         {tokens.length ? (
           <table className="w-full text-sm" data-testid="token-table">
-            <thead className="text-left text-xs uppercase tracking-wide text-ink-soft">
-              <tr>
-                <th className="px-4 py-2 font-medium">Name</th>
-                <th className="px-4 py-2 font-medium">Starts with</th>
-                <th className="px-4 py-2 font-medium">Team and role</th>
-                <th className="px-4 py-2 font-medium">Per minute</th>
-                <th className="px-4 py-2 font-medium">Expires</th>
-                <th className="px-4 py-2 font-medium">Last used</th>
-                <th className="px-4 py-2 font-medium">
-                  <span className="sr-only">Actions</span>
-                </th>
-              </tr>
-            </thead>
+            <ListHead columns={["Name", "Starts with", "Team and role", "Per minute", "Expires", "Last used"]} />
             <tbody>
               {tokens.map((t) => (
                 <tr key={t.id} className="border-t border-ink/10 align-middle" data-token-name={t.name}>

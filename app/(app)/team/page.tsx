@@ -5,6 +5,7 @@ import { roleCan, ROLE_NAMES } from "@/lib/permissions";
 import { requirePageActor } from "@/server/auth/page-guard";
 import { getTeam } from "@/server/team/service";
 import { cancelInvitationAction, changeRoleAction, inviteAction, leaveTeamAction, removeMemberAction } from "./actions";
+import { ListHead } from "@/components/shell/list-head";
 
 export const metadata: Metadata = { title: "Team" };
 
@@ -46,16 +47,7 @@ export default async function TeamPage({
       <section className="rounded-md border border-ink/15 bg-white">
         <h2 className="border-b border-ink/10 px-4 py-2.5 text-sm font-semibold">Members ({members.length})</h2>
         <table className="w-full text-sm">
-          <thead className="text-left text-xs uppercase tracking-wide text-ink-soft">
-            <tr>
-              <th className="px-4 py-2 font-medium">Name</th>
-              <th className="px-4 py-2 font-medium">E-mail</th>
-              <th className="px-4 py-2 font-medium">Role</th>
-              <th className="px-4 py-2 font-medium">
-                <span className="sr-only">Actions</span>
-              </th>
-            </tr>
-          </thead>
+          <ListHead columns={["Name", "E-mail", "Role"]} />
           <tbody>
             {members.map((m) => {
               const self = m.userId === actor.userId;

@@ -2,7 +2,7 @@
 import { getFormProps, getInputProps, getSelectProps, useForm, type SubmissionResult } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useActionState, useState } from "react";
-import { Field, FormMessage } from "@/components/forms/field";
+import { Field, FieldFrame, FormMessage, submitButton } from "@/components/forms/field";
 import { submitKeepingInput } from "@/components/forms/submit";
 import { createTokenSchema, TOKEN_LIMITS } from "@/schemas/api-tokens";
 
@@ -54,7 +54,7 @@ export function CreateTokenForm({ action, teams }: { action: CreateTokenAction; 
         <FormMessage id={form.errorId} errors={form.errors} />
         <div className="grid grid-cols-1 gap-3 sm:grid-cols-2">
           <Field meta={fields.name} label="Name" hint="What the token is for, e.g. “CI baseline pull”." />
-          <Select label="Team" errorId={fields.teamId.errorId} errors={fields.teamId.errors} id={fields.teamId.id}>
+          <FieldFrame label="Team" meta={fields.teamId}>
             <select
               {...teamProps}
               key={teamProps.key}
@@ -67,14 +67,8 @@ export function CreateTokenForm({ action, teams }: { action: CreateTokenAction; 
                 </option>
               ))}
             </select>
-          </Select>
-          <Select
-            label="Role of the token"
-            errorId={fields.role.errorId}
-            errors={fields.role.errors}
-            id={fields.role.id}
-            hint="Never higher than your own role in the team."
-          >
+          </FieldFrame>
+          <FieldFrame label="Role of the token" meta={fields.role} hint="Never higher than your own role in the team.">
             <select {...roleProps} key={`${roleProps.key}-${teamId}`} className={inputClass}>
               {grantable.map((r) => (
                 <option key={r} value={r}>
@@ -82,65 +76,28 @@ export function CreateTokenForm({ action, teams }: { action: CreateTokenAction; 
                 </option>
               ))}
             </select>
-          </Select>
-          <Select
+          </FieldFrame>
+          <FieldFrame
             label="Days until it expires"
-            errorId={fields.expiresInDays.errorId}
-            errors={fields.expiresInDays.errors}
-            id={fields.expiresInDays.id}
+            meta={fields.expiresInDays}
             hint={`${TOKEN_LIMITS.expiresInDays.min} to ${TOKEN_LIMITS.expiresInDays.max}.`}
           >
             <input {...days} key={days.key} className={inputClass} />
-          </Select>
-          <Select
+          </FieldFrame>
+          <FieldFrame
             label="Requests per minute"
-            errorId={fields.requestsPerMinute.errorId}
-            errors={fields.requestsPerMinute.errors}
-            id={fields.requestsPerMinute.id}
+            meta={fields.requestsPerMinute}
             hint={`At most ${TOKEN_LIMITS.requestsPerMinute.max}; more answer 429 until the minute is over.`}
           >
             <input {...rpm} key={rpm.key} className={inputClass} />
-          </Select>
+          </FieldFrame>
         </div>
         <div>
-          <button
-            type="submit"
-            disabled={pending}
-            className="rounded bg-ink px-4 py-2 text-sm font-medium text-white hover:bg-ink-soft disabled:opacity-60"
-          >
+          <button type="submit" disabled={pending} className={submitButton}>
             {pending ? "Making…" : "Make token"}
           </button>
         </div>
       </form>
-    </div>
-  );
-}
-
-function Select({
-  label,
-  id,
-  errorId,
-  errors,
-  hint,
-  children,
-}: {
-  label: string;
-  id: string;
-  errorId: string;
-  errors?: string[];
-  hint?: string;
-  children: React.ReactNode;
-}) {
-  return (
-    <div className="flex flex-col gap-1">
-      <label htmlFor={id} className="text-sm font-medium">
-        {label}
-      </label>
-      {children}
-      {hint ? <p className="text-xs text-ink-soft">{hint}</p> : null}
-      <p id={errorId} className="min-h-[1.25rem] text-sm text-sev-error" role={errors?.length ? "alert" : undefined}>
-        {errors?.join(" ")}
-      </p>
     </div>
   );
 }

@@ -1,6 +1,7 @@
 "use client";
 import type { FieldMetadata } from "@conform-to/react";
 import { getInputProps } from "@conform-to/react";
+import type { ReactNode } from "react";
 
 /**
  * A labelled input with its error line: `id`, `aria-invalid` and
@@ -53,6 +54,40 @@ export function Field({
   );
 }
 
+/**
+ * A labelled control of a form field (a select, or an input the caller
+ * builds) with its hint and error line, wired to conform's field metadata.
+ */
+export function FieldFrame({
+  meta,
+  label,
+  hint,
+  children,
+}: {
+  meta: { id: string; errorId: string; errors?: string[] };
+  label: string;
+  hint?: string;
+  children: ReactNode;
+}) {
+  const errors = meta.errors;
+  return (
+    <div className="flex flex-col gap-1">
+      <label htmlFor={meta.id} className="text-sm font-medium">
+        {label}
+      </label>
+      {children}
+      {hint ? <p className="text-xs text-ink-soft">{hint}</p> : null}
+      <p
+        id={meta.errorId}
+        className="min-h-[1.25rem] text-sm text-sev-error"
+        role={errors?.length ? "alert" : undefined}
+      >
+        {errors?.join(" ")}
+      </p>
+    </div>
+  );
+}
+
 export function FormMessage({ id, errors }: { id: string; errors?: string[] }) {
   if (!errors?.length) return null;
   return (
@@ -62,5 +97,7 @@ export function FormMessage({ id, errors }: { id: string; errors?: string[] }) {
   );
 }
 
-export const primaryButton =
-  "w-full rounded bg-ink px-4 py-2 text-sm font-medium text-white hover:bg-ink-soft disabled:opacity-60";
+/** The primary submit button of a form, without its width. */
+export const submitButton =
+  "rounded bg-ink px-4 py-2 text-sm font-medium text-white hover:bg-ink-soft disabled:opacity-60";
+export const primaryButton = `w-full ${submitButton}`;

@@ -3,7 +3,7 @@ import { getFormProps, getSelectProps, useForm } from "@conform-to/react";
 import { getZodConstraint, parseWithZod } from "@conform-to/zod/v4";
 import { useActionState } from "react";
 import { submitKeepingInput } from "@/components/forms/submit";
-import { Field, FormMessage } from "@/components/forms/field";
+import { Field, FieldFrame, FormMessage, submitButton } from "@/components/forms/field";
 import type { FormAction } from "@/components/auth/forms";
 import { InviteSchema } from "@/schemas/auth";
 
@@ -32,10 +32,7 @@ export function InviteForm({ action, roles }: { action: FormAction; roles: reado
       <FormMessage id={form.errorId} errors={form.errors} />
       <div className="grid grid-cols-1 gap-3 sm:grid-cols-[1fr_10rem_auto] sm:items-start">
         <Field meta={fields.email} label="E-mail address" type="email" autoComplete="off" />
-        <div className="flex flex-col gap-1">
-          <label htmlFor={fields.role.id} className="text-sm font-medium">
-            Role
-          </label>
+        <FieldFrame meta={fields.role} label="Role">
           <select {...roleProps} key={roleProps.key} className="rounded border border-ink/30 px-2 py-2 text-sm">
             {roles.map((r) => (
               <option key={r} value={r}>
@@ -43,15 +40,8 @@ export function InviteForm({ action, roles }: { action: FormAction; roles: reado
               </option>
             ))}
           </select>
-          <p id={fields.role.errorId} className="min-h-[1.25rem] text-sm text-sev-error">
-            {fields.role.errors?.join(" ")}
-          </p>
-        </div>
-        <button
-          type="submit"
-          disabled={pending}
-          className="mt-6 rounded bg-ink px-4 py-2 text-sm font-medium text-white hover:bg-ink-soft disabled:opacity-60"
-        >
+        </FieldFrame>
+        <button type="submit" disabled={pending} className={`mt-6 ${submitButton}`}>
           {pending ? "Sending…" : "Send invitation"}
         </button>
       </div>

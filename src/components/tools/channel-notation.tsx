@@ -3,16 +3,14 @@
 import { useId, useState } from "react";
 import { type ChannelSpec, channelPassbands, parseChannelNotation } from "@/lib/optics";
 import { formatFixed } from "./format";
-import { ApplyButton, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { ApplyButton, type ApplyProps, HelperCard, ResultRow, Working } from "./internals/helper-card";
 
-export interface ChannelNotationProps {
+/** Props; `onApply` receives the channel fields { centerGHz, dsbOffsetGHz, bandwidthMHz }. */
+export interface ChannelNotationProps extends ApplyProps<ChannelSpec> {
   /** Starting text, e.g. "183.311 ± 3.00 GHz, 2 × 1000 MHz". */
   initialText?: string;
   /** Bandwidth used when the text has none: MHz, or a text such as "2 x 500 MHz". */
   initialBandwidth?: string;
-  /** Receives the channel fields { centerGHz, dsbOffsetGHz, bandwidthMHz }. */
-  onApply?: (channel: ChannelSpec) => void;
-  applyLabel?: string;
 }
 
 const PART_LABEL = {

@@ -2,12 +2,14 @@
 
 import { useId, useState } from "react";
 import { type DriftCombination, driftBudget, modeShiftPerKelvin } from "@/lib/optics";
-import { ceilToStep, formatFixed, LN_FIT_CARRIER_THZ, parseNumberField } from "./format";
+import { ceilToStep, formatFixed, LN_FIT_CARRIER_THZ } from "./format";
 import { attempt } from "./internals/attempt";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
-import { NumberField } from "./internals/number-field";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { Choice } from "./internals/choice";
+import { FieldGrid, NumberField, useNumberText } from "./internals/number-field";
 
-export interface DriftBudgetProps {
+/** Props; `onApply` receives driftMHz, rounded up to 0.1 MHz. */
+export interface DriftBudgetProps extends ApplyProps<number> {
   initialLaser2MHz?: number;
   initialResonatorMilliK?: number;
   initialLockOffsetMHz?: number;
@@ -18,9 +20,6 @@ export interface DriftBudgetProps {
   /** A measured mode shift (GHz/K) to use instead of the LiNbO3 estimate. */
   initialModeShiftGHzPerK?: number;
   initialCombine?: DriftCombination;
-  /** Receives driftMHz, rounded up to 0.1 MHz. */
-  onApply?: (driftMHz: number) => void;
-  applyLabel?: string;
 }
 
 /** Drift budget of the laser-pair offset → the plan's driftMHz. */
@@ -37,26 +36,26 @@ export function DriftBudget({
   applyLabel = "Apply drift",
 }: DriftBudgetProps) {
   const id = useId();
-  const [laser2, setLaser2] = useState(String(initialLaser2MHz));
-  const [milliK, setMilliK] = useState(String(initialResonatorMilliK));
-  const [lock, setLock] = useState(String(initialLockOffsetMHz));
-  const [step, setStep] = useState(String(initialStepMHz));
-  const [carrierText, setCarrierText] = useState(String(initialCarrierTHz));
-  const [tempText, setTempText] = useState(String(initialTemperatureC));
+  const laser2 = useNumberText(String(initialLaser2MHz), "Laser 2 stability", { min: 0 });
+  const milliK = useNumberText(String(initialResonatorMilliK), "Resonator temperature stability", { min: 0 });
+  const lock = useNumberText(String(initialLockOffsetMHz), "Lock offset", { min: 0 });
+  const step = useNumberText(String(initialStepMHz), "Tuning step", { min: 0 });
+  const carrier = useNumberText(String(initialCarrierTHz), "Carrier", LN_FIT_CARRIER_THZ);
+  const temp = useNumberText(String(initialTemperatureC), "Resonator temperature", { min: -50, max: 300 });
   const [useMeasured, setUseMeasured] = useState(initialModeShiftGHzPerK !== undefined);
-  const [shiftText, setShiftText] = useState(
+  const shift = useNumberText(
     initialModeShiftGHzPerK !== undefined ? String(initialModeShiftGHzPerK) : "-6.2",
+    "Mode shift",
   );
   const [combine, setCombine] = useState<DriftCombination>(initialCombine);
-
   const f = {
-    laser2: parseNumberField(laser2, "Laser 2 stability", { min: 0 }),
-    milliK: parseNumberField(milliK, "Resonator temperature stability", { min: 0 }),
-    lock: parseNumberField(lock, "Lock offset", { min: 0 }),
-    step: parseNumberField(step, "Tuning step", { min: 0 }),
-    carrier: parseNumberField(carrierText, "Carrier", LN_FIT_CARRIER_THZ),
-    temp: parseNumberField(tempText, "Resonator temperature", { min: -50, max: 300 }),
-    shift: parseNumberField(shiftText, "Mode shift"),
+    laser2: laser2.parsed,
+    milliK: milliK.parsed,
+    lock: lock.parsed,
+    step: step.parsed,
+    carrier: carrier.parsed,
+    temp: temp.parsed,
+    shift: shift.parsed,
   };
 
   const shiftCalc = useMeasured
@@ -94,89 +93,35 @@ export function DriftBudget({
       title="Drift budget"
       summary="How far the laser-pair offset can wander from the carrier while observing: the plan's drift (± MHz)."
     >
-      <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
-        <NumberField
-          id={`${id}-l2`}
-          label="Laser 2 stability (±)"
-          unit="MHz"
-          value={laser2}
-          onChange={setLaser2}
-          error={f.laser2.ok ? null : f.laser2.message}
-        />
-        <NumberField
-          id={`${id}-mk`}
-          label="Resonator temperature stability (±)"
-          unit="mK"
-          value={milliK}
-          onChange={setMilliK}
-          error={f.milliK.ok ? null : f.milliK.message}
-        />
-        <NumberField
-          id={`${id}-lock`}
-          label="Lock offset from mode centre (±)"
-          unit="MHz"
-          value={lock}
-          onChange={setLock}
-          error={f.lock.ok ? null : f.lock.message}
-        />
-        <NumberField
-          id={`${id}-step`}
-          label="Tuning step"
-          unit="MHz"
-          value={step}
-          onChange={setStep}
-          error={f.step.ok ? null : f.step.message}
-        />
-      </div>
+      <FieldGrid>
+        <NumberField id={`${id}-l2`} label="Laser 2 stability (±)" unit="MHz" {...laser2.input} />
+        <NumberField id={`${id}-mk`} label="Resonator temperature stability (±)" unit="mK" {...milliK.input} />
+        <NumberField id={`${id}-lock`} label="Lock offset from mode centre (±)" unit="MHz" {...lock.input} />
+        <NumberField id={`${id}-step`} label="Tuning step" unit="MHz" {...step.input} />
+      </FieldGrid>
       <label className="mb-2 flex items-center gap-2 text-sm">
         <input type="checkbox" checked={useMeasured} onChange={(e) => setUseMeasured(e.target.checked)} />
         Use a measured mode shift instead of the LiNbO3 estimate
       </label>
       {useMeasured ? (
-        <NumberField
-          id={`${id}-shift`}
-          label="Mode shift dν/dT"
-          unit="GHz/K"
-          value={shiftText}
-          onChange={setShiftText}
-          error={f.shift.ok ? null : f.shift.message}
-        />
+        <NumberField id={`${id}-shift`} label="Mode shift dν/dT" unit="GHz/K" {...shift.input} />
       ) : (
-        <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
-          <NumberField
-            id={`${id}-carrier`}
-            label="Carrier"
-            unit="THz"
-            value={carrierText}
-            onChange={setCarrierText}
-            error={f.carrier.ok ? null : f.carrier.message}
-          />
-          <NumberField
-            id={`${id}-temp`}
-            label="Resonator temperature"
-            unit="°C"
-            value={tempText}
-            onChange={setTempText}
-            error={f.temp.ok ? null : f.temp.message}
-          />
-        </div>
+        <FieldGrid>
+          <NumberField id={`${id}-carrier`} label="Carrier" unit="THz" {...carrier.input} />
+          <NumberField id={`${id}-temp`} label="Resonator temperature" unit="°C" {...temp.input} />
+        </FieldGrid>
       )}
-      <fieldset className="mb-2 flex gap-4 text-sm">
-        <legend className="mb-1 text-sm font-medium text-ink">Combine the terms as</legend>
-        <label className="flex items-center gap-1">
-          <input
-            type="radio"
-            name={`${id}-combine`}
-            checked={combine === "worst-case"}
-            onChange={() => setCombine("worst-case")}
-          />
-          Worst case (sum)
-        </label>
-        <label className="flex items-center gap-1">
-          <input type="radio" name={`${id}-combine`} checked={combine === "rss"} onChange={() => setCombine("rss")} />
-          Root-sum-square
-        </label>
-      </fieldset>
+      <Choice
+        name={`${id}-combine`}
+        legend="Combine the terms as"
+        showLegend
+        options={[
+          ["worst-case", "Worst case (sum)"],
+          ["rss", "Root-sum-square"],
+        ]}
+        value={combine}
+        onChange={setCombine}
+      />
       <ErrorLine message={calcError && !calcError.ok ? calcError.message : null} />
       <div className="mt-2">
         {result?.terms.map((t) => (

@@ -2,12 +2,13 @@
 
 import { useId, useState } from "react";
 import { planckRadiationTemperature, receiverNoise } from "@/lib/optics";
-import { ceilToStep, formatFixed, formatSignificant, parseNumberField } from "./format";
+import { ceilToStep, formatFixed, formatSignificant } from "./format";
 import { attempt } from "./internals/attempt";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
-import { NumberField } from "./internals/number-field";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { FieldGrid, NumberField, useNumberText } from "./internals/number-field";
 
-export interface ReceiverNoiseProps {
+/** Props; `onApply` receives receiverK, rounded up to 1 K. */
+export interface ReceiverNoiseProps extends ApplyProps<number> {
   initialRfGHz?: number;
   /** Photon-number conversion efficiency η_ph as a fraction (0 < η ≤ 1). */
   initialPhotonEfficiency?: number;
@@ -15,9 +16,6 @@ export interface ReceiverNoiseProps {
   initialOpticalEfficiency?: number;
   /** Lossy front end ahead of the up-converter; null for none. */
   initialFrontEnd?: { lossDB: number; physicalK: number } | null;
-  /** Receives receiverK, rounded up to 1 K. */
-  onApply?: (receiverK: number) => void;
-  applyLabel?: string;
 }
 
 /** Design estimate of the receiver noise temperature → the plan's receiverK. */
@@ -30,18 +28,27 @@ export function ReceiverNoise({
   applyLabel = "Apply receiver noise",
 }: ReceiverNoiseProps) {
   const id = useId();
-  const [rfText, setRfText] = useState(String(initialRfGHz));
-  const [phText, setPhText] = useState(String(initialPhotonEfficiency * 100));
-  const [optText, setOptText] = useState(String(initialOpticalEfficiency * 100));
   const [withFrontEnd, setWithFrontEnd] = useState(initialFrontEnd !== null);
-  const [lossText, setLossText] = useState(String(initialFrontEnd?.lossDB ?? 0.5));
-  const [tPhysText, setTPhysText] = useState(String(initialFrontEnd?.physicalK ?? 290));
-
-  const rf = parseNumberField(rfText, "RF frequency", { min: 0, exclusiveMin: true });
-  const ph = parseNumberField(phText, "Photon conversion efficiency", { min: 0, exclusiveMin: true, max: 100 });
-  const opt = parseNumberField(optText, "Optical and detection efficiency", { min: 0, exclusiveMin: true, max: 100 });
-  const loss = parseNumberField(lossText, "Front-end loss", { min: 0 });
-  const tPhys = parseNumberField(tPhysText, "Front-end physical temperature", { min: 0 });
+  const rfField = useNumberText(String(initialRfGHz), "RF frequency", { min: 0, exclusiveMin: true });
+  const phField = useNumberText(String(initialPhotonEfficiency * 100), "Photon conversion efficiency", {
+    min: 0,
+    exclusiveMin: true,
+    max: 100,
+  });
+  const optField = useNumberText(String(initialOpticalEfficiency * 100), "Optical and detection efficiency", {
+    min: 0,
+    exclusiveMin: true,
+    max: 100,
+  });
+  const lossField = useNumberText(String(initialFrontEnd?.lossDB ?? 0.5), "Front-end loss", { min: 0 });
+  const tPhysField = useNumberText(String(initialFrontEnd?.physicalK ?? 290), "Front-end physical temperature", {
+    min: 0,
+  });
+  const rf = rfField.parsed;
+  const ph = phField.parsed;
+  const opt = optField.parsed;
+  const loss = lossField.parsed;
+  const tPhys = tPhysField.parsed;
 
   const ready = rf.ok && ph.ok && opt.ok && (!withFrontEnd || (loss.ok && tPhys.ok));
   const calc = ready
@@ -66,57 +73,32 @@ export function ReceiverNoise({
       badge="Design estimate"
       summary="Receiver noise temperature of an electro-optic up-conversion receiver with ideal heterodyne readout, referred to the antenna port (the plan's receiver noise, K)."
     >
-      <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
-        <NumberField
-          id={`${id}-rf`}
-          label="RF frequency"
-          unit="GHz"
-          value={rfText}
-          onChange={setRfText}
-          error={rf.ok ? null : rf.message}
-        />
+      <FieldGrid>
+        <NumberField id={`${id}-rf`} label="RF frequency" unit="GHz" {...rfField.input} />
         <NumberField
           id={`${id}-ph`}
           label="Photon conversion efficiency η_ph"
           unit="%"
-          value={phText}
-          onChange={setPhText}
-          error={ph.ok ? null : ph.message}
+          {...phField.input}
           hint="Measured sideband photons out per RF photon in."
         />
         <NumberField
           id={`${id}-opt`}
           label="Optical and detection efficiency η_opt"
           unit="%"
-          value={optText}
-          onChange={setOptText}
-          error={opt.ok ? null : opt.message}
+          {...optField.input}
           hint="Resonator output to photocurrent: path loss × quantum efficiency."
         />
-      </div>
+      </FieldGrid>
       <label className="mb-2 flex items-center gap-2 text-sm">
         <input type="checkbox" checked={withFrontEnd} onChange={(e) => setWithFrontEnd(e.target.checked)} />
         Lossy mm-wave front end ahead of the up-converter (feed, waveguide, window)
       </label>
       {withFrontEnd ? (
-        <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
-          <NumberField
-            id={`${id}-loss`}
-            label="Front-end loss L"
-            unit="dB"
-            value={lossText}
-            onChange={setLossText}
-            error={loss.ok ? null : loss.message}
-          />
-          <NumberField
-            id={`${id}-tphys`}
-            label="Front-end physical temperature"
-            unit="K"
-            value={tPhysText}
-            onChange={setTPhysText}
-            error={tPhys.ok ? null : tPhys.message}
-          />
-        </div>
+        <FieldGrid>
+          <NumberField id={`${id}-loss`} label="Front-end loss L" unit="dB" {...lossField.input} />
+          <NumberField id={`${id}-tphys`} label="Front-end physical temperature" unit="K" {...tPhysField.input} />
+        </FieldGrid>
       ) : null}
       <ErrorLine message={calc && !calc.ok ? calc.message : null} />
       <div className="mt-2">

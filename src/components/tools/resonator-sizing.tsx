@@ -2,17 +2,19 @@
 
 import { useId, useState } from "react";
 import { linewidthFromQ } from "@/lib/optics";
-import { formatFixed, formatSignificant } from "./format";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
-import { NumberField } from "./internals/number-field";
-import { INDEX_SOURCES, resonatorSizing, type IndexSource } from "./internals/resonator-sizing-calc";
+import { formatFixed, formatSignificant, type FieldParse } from "./format";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { Choice } from "./internals/choice";
+import { fieldInput, FieldGrid, NumberField } from "./internals/number-field";
+import { INDEX_SOURCES, resonatorSizing, type IndexSource, type SizingTexts } from "./internals/resonator-sizing-calc";
 
 export interface ResonatorApplyValue {
   fsrGHz: number;
   loadedQ: number;
 }
 
-export interface ResonatorSizingProps {
+/** Props; `onApply` receives the FSR and loaded Q, the two numbers a resonator entry holds. */
+export interface ResonatorSizingProps extends ApplyProps<ResonatorApplyValue> {
   /** Start from a radius (µm) instead of an FSR. */
   initialRadiusUm?: number;
   /** Start from an FSR (GHz); default 183.31 when no radius is given. */
@@ -22,9 +24,6 @@ export interface ResonatorSizingProps {
   initialLoadedQ?: number;
   /** A measured group index; when given it is used instead of the fit. */
   initialMeasuredGroupIndex?: number;
-  /** Receives the FSR and loaded Q, the two numbers a resonator entry holds. */
-  onApply?: (value: ResonatorApplyValue) => void;
-  applyLabel?: string;
   /**
    * Receives the FSR shift per kelvin of the mode pair (MHz/K, the "following
    * the modes" figure of ADR 007), the number a resonator's
@@ -53,33 +52,22 @@ export function ResonatorSizing({
   const [direction, setDirection] = useState<"fromRadius" | "fromFsr">(
     initialRadiusUm !== undefined ? "fromRadius" : "fromFsr",
   );
-  const [radiusText, setRadiusText] = useState(initialRadiusUm !== undefined ? String(initialRadiusUm) : "1000");
-  const [fsrText, setFsrText] = useState(String(initialFsrGHz));
-  const [carrierText, setCarrierText] = useState(String(initialCarrierTHz));
-  const [tempText, setTempText] = useState(String(initialTemperatureC));
   const [source, setSource] = useState<IndexSource>(initialMeasuredGroupIndex !== undefined ? "measured" : "jundt");
-  const [ngText, setNgText] = useState(
-    initialMeasuredGroupIndex !== undefined ? String(initialMeasuredGroupIndex) : "2.18",
-  );
   const [qDirection, setQDirection] = useState<"fromQ" | "fromLinewidth">("fromQ");
-  const [qText, setQText] = useState(String(initialLoadedQ));
-  const [lwText, setLwText] = useState(() =>
-    String(Number(linewidthFromQ(initialCarrierTHz, initialLoadedQ).toPrecision(6))),
-  );
-
+  const [text, setText] = useState<SizingTexts>(() => ({
+    radius: initialRadiusUm !== undefined ? String(initialRadiusUm) : "1000",
+    fsr: String(initialFsrGHz),
+    carrier: String(initialCarrierTHz),
+    temp: String(initialTemperatureC),
+    ng: initialMeasuredGroupIndex !== undefined ? String(initialMeasuredGroupIndex) : "2.18",
+    q: String(initialLoadedQ),
+    lw: String(Number(linewidthFromQ(initialCarrierTHz, initialLoadedQ).toPrecision(6))),
+  }));
   const { carrier, temp, radius, fsrIn, ngIn, qIn, lwIn, index, ng, size, thermal, q, firstError, canApply } =
-    resonatorSizing({
-      carrierText,
-      tempText,
-      radiusText,
-      fsrText,
-      ngText,
-      qText,
-      lwText,
-      source,
-      direction,
-      qDirection,
-    });
+    resonatorSizing(text, { source, direction, qDirection });
+  /** A NumberField's value, change handler and error for one field's text and its parse. */
+  const bound = (k: keyof SizingTexts, parsed: FieldParse) =>
+    fieldInput(text[k], (v) => setText((t) => ({ ...t, [k]: v })), parsed);
 
   return (
     <HelperCard
@@ -87,24 +75,10 @@ export function ResonatorSizing({
       title="Resonator sizing"
       summary="Radius ↔ free spectral range, thermal shifts, and loaded Q ↔ linewidth for a LiNbO3 whispering-gallery disc."
     >
-      <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">
-        <NumberField
-          id={`${id}-carrier`}
-          label="Carrier (laser 1)"
-          unit="THz"
-          value={carrierText}
-          onChange={setCarrierText}
-          error={carrier.ok ? null : carrier.message}
-        />
-        <NumberField
-          id={`${id}-temp`}
-          label="Resonator temperature"
-          unit="°C"
-          value={tempText}
-          onChange={setTempText}
-          error={temp.ok ? null : temp.message}
-        />
-      </div>
+      <FieldGrid>
+        <NumberField id={`${id}-carrier`} label="Carrier (laser 1)" unit="THz" {...bound("carrier", carrier)} />
+        <NumberField id={`${id}-temp`} label="Resonator temperature" unit="°C" {...bound("temp", temp)} />
+      </FieldGrid>
 
       <label htmlFor={`${id}-source`} className="text-sm font-medium text-ink">
         Group index from
@@ -125,92 +99,42 @@ export function ResonatorSizing({
         <NumberField
           id={`${id}-ng`}
           label="Measured group index n_g"
-          value={ngText}
-          onChange={setNgText}
-          error={ngIn.ok ? null : ngIn.message}
+          {...bound("ng", ngIn)}
           hint="Overrides the material fit (a measured FSR includes the mode's geometric dispersion)."
         />
       ) : null}
 
-      <fieldset className="mb-2 mt-2 flex gap-4 text-sm">
-        <legend className="sr-only">Size from</legend>
-        <label className="flex items-center gap-1">
-          <input
-            type="radio"
-            name={`${id}-dir`}
-            checked={direction === "fromFsr"}
-            onChange={() => setDirection("fromFsr")}
-          />
-          Radius for an FSR
-        </label>
-        <label className="flex items-center gap-1">
-          <input
-            type="radio"
-            name={`${id}-dir`}
-            checked={direction === "fromRadius"}
-            onChange={() => setDirection("fromRadius")}
-          />
-          FSR of a radius
-        </label>
-      </fieldset>
+      <Choice
+        name={`${id}-dir`}
+        legend="Size from"
+        options={[
+          ["fromFsr", "Radius for an FSR"],
+          ["fromRadius", "FSR of a radius"],
+        ]}
+        value={direction}
+        onChange={setDirection}
+        className="mb-2 mt-2 flex gap-4 text-sm"
+      />
       {direction === "fromFsr" ? (
-        <NumberField
-          id={`${id}-fsr`}
-          label="Free spectral range"
-          unit="GHz"
-          value={fsrText}
-          onChange={setFsrText}
-          error={fsrIn.ok ? null : fsrIn.message}
-        />
+        <NumberField id={`${id}-fsr`} label="Free spectral range" unit="GHz" {...bound("fsr", fsrIn)} />
       ) : (
-        <NumberField
-          id={`${id}-radius`}
-          label="Major radius R"
-          unit="µm"
-          value={radiusText}
-          onChange={setRadiusText}
-          error={radius.ok ? null : radius.message}
-        />
+        <NumberField id={`${id}-radius`} label="Major radius R" unit="µm" {...bound("radius", radius)} />
       )}
 
-      <fieldset className="mb-2 flex gap-4 text-sm">
-        <legend className="sr-only">Linewidth from</legend>
-        <label className="flex items-center gap-1">
-          <input
-            type="radio"
-            name={`${id}-q`}
-            checked={qDirection === "fromQ"}
-            onChange={() => setQDirection("fromQ")}
-          />
-          Linewidth from Q
-        </label>
-        <label className="flex items-center gap-1">
-          <input
-            type="radio"
-            name={`${id}-q`}
-            checked={qDirection === "fromLinewidth"}
-            onChange={() => setQDirection("fromLinewidth")}
-          />
-          Q from linewidth
-        </label>
-      </fieldset>
+      <Choice
+        name={`${id}-q`}
+        legend="Linewidth from"
+        options={[
+          ["fromQ", "Linewidth from Q"],
+          ["fromLinewidth", "Q from linewidth"],
+        ]}
+        value={qDirection}
+        onChange={setQDirection}
+      />
       {qDirection === "fromQ" ? (
-        <NumberField
-          id={`${id}-qval`}
-          label="Loaded Q"
-          value={qText}
-          onChange={setQText}
-          error={qIn.ok ? null : qIn.message}
-        />
+        <NumberField id={`${id}-qval`} label="Loaded Q" {...bound("q", qIn)} />
       ) : (
-        <NumberField
-          id={`${id}-lw`}
-          label="Loaded linewidth (FWHM)"
-          unit="MHz"
-          value={lwText}
-          onChange={setLwText}
-          error={lwIn.ok ? null : lwIn.message}
-        />
+        <NumberField id={`${id}-lw`} label="Loaded linewidth (FWHM)" unit="MHz" {...bound("lw", lwIn)} />
       )}
 
       <ErrorLine message={firstError && !firstError.ok ? firstError.message : null} />

@@ -4,17 +4,16 @@ import { useId, useState } from "react";
 import { frequencyTHzFromNm, GRID_SPACINGS_GHZ, nearestGridChannel, wavelengthNmFromTHz } from "@/lib/optics";
 import { formatFixed, formatSigned, parseNumberField } from "./format";
 import { attempt } from "./internals/attempt";
-import { ApplyButton, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
-import { NumberField } from "./internals/number-field";
+import { ApplyButton, type ApplyProps, ErrorLine, HelperCard, ResultRow, Working } from "./internals/helper-card";
+import { Choice } from "./internals/choice";
+import { fieldInput, NumberField } from "./internals/number-field";
 
-export interface WavelengthGridProps {
+/** Props; `onApply` receives an optical frequency in THz (the entered one or a grid centre). */
+export interface WavelengthGridProps extends ApplyProps<number> {
   /** Starting optical frequency, THz (default 193.4). */
   initialTHz?: number;
   /** Which quantity the user types first (default THz). */
   initialUnit?: "THz" | "nm";
-  /** Receives an optical frequency in THz (the entered one or a grid centre). */
-  onApply?: (frequencyTHz: number) => void;
-  applyLabel?: string;
 }
 
 /**
@@ -56,23 +55,17 @@ export function WavelengthGrid({
       title="Wavelength and grid"
       summary="Optical frequency ↔ vacuum wavelength, and the nearest ITU-T G.694.1 grid channel."
     >
-      <fieldset className="mb-2 flex gap-4 text-sm">
-        <legend className="sr-only">Enter the value as</legend>
-        {(["THz", "nm"] as const).map((u) => (
-          <label key={u} className="flex items-center gap-1">
-            <input type="radio" name={`${id}-unit`} checked={unit === u} onChange={() => switchUnit(u)} />
-            {u === "THz" ? "Frequency (THz)" : "Wavelength (nm)"}
-          </label>
-        ))}
-      </fieldset>
-      <NumberField
-        id={`${id}-value`}
-        label={label}
-        unit={unit}
-        value={text}
-        onChange={setText}
-        error={field.ok ? null : field.message}
+      <Choice
+        name={`${id}-unit`}
+        legend="Enter the value as"
+        options={[
+          ["THz", "Frequency (THz)"],
+          ["nm", "Wavelength (nm)"],
+        ]}
+        value={unit}
+        onChange={switchUnit}
       />
+      <NumberField id={`${id}-value`} label={label} unit={unit} {...fieldInput(text, setText, field)} />
       <ErrorLine message={calc && !calc.ok ? calc.message : null} />
       {result ? (
         <>

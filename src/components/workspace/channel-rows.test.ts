@@ -1,28 +1,11 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import type { Chain, Channel, PlanResult } from "@/queries/types";
+import type { Chain, PlanResult } from "@/queries/types";
+import { channelRow, EX1_WV1_RESULT } from "../../../tests/fixtures/demo-values";
 import { buildChannelRows, channelCell, rfBands } from "./channel-rows";
 
 const chain = { id: "uuid-a", key: "A" } as Chain;
-const channel = (key: string, over: Partial<Channel> = {}): Channel => ({
-  id: `id-${key}`,
-  version: 1,
-  key,
-  name: key,
-  chainId: "uuid-a",
-  centerGHz: 183.31,
-  bandwidthMHz: 10,
-  dsbOffsetGHz: null,
-  integrationMs: 10,
-  antennaK: 250,
-  receiverK: 5000,
-  gainStability: 0,
-  requiredNedtK: 20,
-  ifFilter: "slot",
-  centreToleranceMHz: null,
-  receiverKSource: "entered",
-  ...over,
-});
+const channel = channelRow;
 
 describe("rfBands", () => {
   it("gives c ± B/2 for SSB and the two bands c ± d ± B/2 for DSB (docs/plan-format.md §3.2 'Per channel')", () => {
@@ -56,14 +39,8 @@ describe("buildChannelRows", () => {
     spurs: [],
     channels: [
       {
-        id: "wv1",
-        ifSlotGHz: [1.495, 1.505],
-        occupiedGHz: [1.475, 1.525],
-        imageGHz: [186.305, 186.315],
-        imageRejectionDB: 49.48,
+        ...EX1_WV1_RESULT,
         radiometricBandwidthMHz: 9.9999,
-        nedtK: 17.92,
-        lockReplicaDB: -24.72,
         envelope: {
           worstNedtK: 81.12,
           worstNedtAt: { loShiftMHz: -20, temperatureOffsetK: 0 },

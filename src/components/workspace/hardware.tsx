@@ -5,6 +5,7 @@ import { fmtNumber, fmtWindow } from "@/components/envelope/format";
 import { placeReasonText } from "@/lib/plan";
 import type { Chain, ChainResult, Detector, Laser, Resonator } from "@/queries/types";
 import { formatGHz, formatInterval, formatMHz, formatNumber, formatQ } from "./format";
+import { LASER_HEADERS, laserCells } from "./laser-cells";
 import { buttonClass, Empty, LaserSafetyNote } from "./ui";
 
 function Dl({ rows }: { rows: [string, React.ReactNode][] }) {
@@ -33,20 +34,10 @@ function ItemHeader({ title, onEdit, label }: { title: string; onEdit?: () => vo
   );
 }
 
-/** Column headings of a laser-pair table (overview and report), units in every label. */
-export const LASER_HEADERS = [
-  "Laser pair",
-  "Carrier (THz)",
-  "Carrier power (mW)",
-  "LO power (mW)",
-  "Reach (GHz)",
-  "Step (MHz)",
-  "Drift (± MHz)",
-  "PDH lock",
-] as const;
-
 const th = "whitespace-nowrap px-2 py-1 text-left text-xs font-medium text-ink-soft";
 const td = "whitespace-nowrap px-2 py-1.5 tabular-nums align-top";
+/** The overview's cell styles of a laser-pair row: the key stands out, the reach may wrap. */
+const LASER_CELL_CLASS = [`${td} font-medium`, td, td, td, `${td} whitespace-normal`, td, td, td];
 
 function EditCell({ onEdit, label }: { onEdit?: () => void; label: string }) {
   return onEdit ? (
@@ -78,22 +69,11 @@ export function LaserTable({ lasers, onEdit }: { lasers: Laser[]; onEdit: Editab
           <tbody>
             {lasers.map((l) => (
               <tr key={l.id} className="border-b border-ink/10">
-                <td className={`${td} font-medium`}>{l.key}</td>
-                <td className={td}>
-                  {formatNumber(l.carrierTHz, 3)}
-                  <OpticalFrequency thz={l.carrierTHz} className="block text-xs" />
-                </td>
-                <td className={td}>{formatNumber(l.carrierPowerMW, 2)}</td>
-                <td className={td}>{formatNumber(l.loPowerMW, 2)}</td>
-                <td className={`${td} whitespace-normal`}>
-                  {l.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "")).join(", ")}
-                </td>
-                <td className={td}>{formatMHz(l.stepMHz)}</td>
-                <td className={td}>{formatMHz(l.driftMHz)}</td>
-                <td className={td}>
-                  {formatMHz(l.lock.modulationMHz)} MHz, β {formatNumber(l.lock.modulationIndex, 2)}, {l.lock.orders}{" "}
-                  {l.lock.orders === 1 ? "order" : "orders"}
-                </td>
+                {laserCells(l).map((cell, i) => (
+                  <td key={LASER_HEADERS[i]} className={LASER_CELL_CLASS[i]}>
+                    {cell}
+                  </td>
+                ))}
                 <EditCell onEdit={onEdit(l)} label={`Edit laser pair ${l.key}`} />
               </tr>
             ))}

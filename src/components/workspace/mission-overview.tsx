@@ -4,15 +4,7 @@ import { useWaivers, waivedErrorCount } from "@/components/waivers";
 import { useRouter } from "next/navigation";
 import { useCallback, useMemo, useState } from "react";
 import type { Collection } from "@/queries/keys";
-import {
-  useCollectionQuery,
-  useDeleteMissionMutation,
-  useMissionQuery,
-  useResultQuery,
-  useActivityQuery,
-  useRevisionsQuery,
-  useSettingsQuery,
-} from "@/queries/missions";
+import { useDeleteMissionMutation, useMissionQuery, useActivityQuery, useMissionDataQueries } from "@/queries/missions";
 import type { Channel } from "@/queries/types";
 import { KIND_LABEL } from "./entity-editor";
 import { countBySeverity } from "./findings";
@@ -53,14 +45,8 @@ export function MissionOverview({
       return;
     deleteMission.mutate({ version: m.version }, { onSuccess: () => router.push("/missions") });
   };
-  const lasers = useCollectionQuery(missionId, "lasers");
-  const resonators = useCollectionQuery(missionId, "resonators");
-  const detectors = useCollectionQuery(missionId, "detectors");
-  const chains = useCollectionQuery(missionId, "chains");
-  const channels = useCollectionQuery(missionId, "channels");
-  const settings = useSettingsQuery(missionId);
-  const result = useResultQuery(missionId);
-  const revisions = useRevisionsQuery(missionId);
+  const { lasers, resonators, detectors, chains, channels, settings, result, revisions } =
+    useMissionDataQueries(missionId);
   const activity = useActivityQuery(missionId);
   const waivers = useWaivers(missionId);
   const [editing, setEditing] = useState<Editing | null>(null);

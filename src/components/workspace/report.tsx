@@ -2,13 +2,7 @@
 
 import { useWaivers } from "@/components/waivers";
 import Link from "next/link";
-import {
-  useCollectionQuery,
-  useMissionQuery,
-  useResultQuery,
-  useRevisionsQuery,
-  useSettingsQuery,
-} from "@/queries/missions";
+import { useMissionQuery, useMissionDataQueries } from "@/queries/missions";
 import { usePlanDocumentQuery } from "@/queries/plan-document";
 import { buildChannelRows } from "./channel-rows";
 import { countBySeverity } from "./findings";
@@ -39,15 +33,9 @@ export const MODEL_V1_LIMITS = [
 
 export function MissionReport({ missionId }: { missionId: string }) {
   const mission = useMissionQuery(missionId);
-  const lasers = useCollectionQuery(missionId, "lasers");
-  const resonators = useCollectionQuery(missionId, "resonators");
-  const detectors = useCollectionQuery(missionId, "detectors");
-  const chains = useCollectionQuery(missionId, "chains");
-  const channels = useCollectionQuery(missionId, "channels");
+  const { lasers, resonators, detectors, chains, channels, settings, result, revisions } =
+    useMissionDataQueries(missionId);
   const waivers = useWaivers(missionId);
-  const settings = useSettingsQuery(missionId);
-  const result = useResultQuery(missionId);
-  const revisions = useRevisionsQuery(missionId);
   const plan = usePlanDocumentQuery(missionId);
   const queries = [mission, lasers, resonators, detectors, chains, channels, settings, result, revisions, plan];
   if (queries.some((q) => q.isLoading)) return <Spinner label="Preparing the report…" />;

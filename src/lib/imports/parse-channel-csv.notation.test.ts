@@ -1,24 +1,17 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import { parseChannelCsv } from "./parse-channel-csv";
-
-const CHAINS = [
-  { id: "11111111-1111-4111-8111-111111111111", key: "A" },
-  { id: "22222222-2222-4222-8222-222222222222", key: "B" },
-];
+import { CHAINS, readChannelLines } from "./channel-csv.test-util";
 
 describe("channel CSV: notation and bandwidth text columns", () => {
   it("reads sounder-table notation into centre, DSB offset and bandwidth", () => {
     // Channel values in the notation of the MHS channel table (EUMETSAT MHS product description: 183.311 ± 7.0 GHz, 2 × 2000 MHz).
-    const csv = [
+    const r = readChannelLines([
       "key,name,chain,notation,bandwidth,integrationMs,antennaK,receiverK",
       "h5,wing,A,183.31 ± 7.0,2 × 500 MHz,10,250,5000",
       'h3,"line, near",A,"183.311 ± 3.00 GHz, 2 × 1000 MHz",,10,250,5000',
       "w89,window,B,89.0 GHz,2800 MHz,10,250,5000",
-    ].join("\n");
-    const r = parseChannelCsv(csv, CHAINS);
-    expect(r.ok).toBe(true);
-    if (!r.ok) return;
+    ]);
     expect(r.valid).toBe(true);
     expect(
       r.rows.map((x) => x.channel && [x.channel.centerGHz, x.channel.dsbOffsetGHz, x.channel.bandwidthMHz]),
@@ -39,17 +32,14 @@ describe("channel CSV: notation and bandwidth text columns", () => {
   });
 
   it("names the row and the text column of a bad cell", () => {
-    const csv = [
+    const r = readChannelLines([
       "key,name,chain,notation,bandwidth,bandwidthMHz,integrationMs,antennaK,receiverK",
       "ok,fine,A,183.31 ± 7.0,,500,10,250,5000",
       "b1,bad notation,A,183.31 ± seven,,500,10,250,5000",
       "b2,bad bandwidth,A,183.31 ± 7.0,3 × 500 MHz,,10,250,5000",
       "b3,both,A,183.31 ± 7.0,2 × 500 MHz,500,10,250,5000",
       "b4,no bandwidth,A,183.31 ± 7.0,,,10,250,5000",
-    ].join("\n");
-    const r = parseChannelCsv(csv, CHAINS);
-    expect(r.ok).toBe(true);
-    if (!r.ok) return;
+    ]);
     expect(r.valid).toBe(false);
     expect(r.rows[0]).toMatchObject({
       row: 2,

@@ -3,14 +3,10 @@ import fc from "fast-check";
 import { parseTuningMap } from "./parse-tuning-map";
 import { parseDetectorResponse } from "./parse-detector-response";
 import { parseChannelCsv } from "./parse-channel-csv";
+import { CHAINS, readChannelLines } from "./channel-csv.test-util";
 import { channelsToCsv, type ChannelCsvSource } from "./channels-to-csv";
 import { decodeUtf8 } from "./decode-utf8";
 import { CHANNEL_COLUMNS } from "./internals/channel-columns";
-
-const CHAINS = [
-  { id: "11111111-1111-4111-8111-111111111111", key: "A" },
-  { id: "22222222-2222-4222-8222-222222222222", key: "B" },
-];
 
 describe("decodeUtf8", () => {
   it("accepts UTF-8 (with a byte-order mark) and refuses Latin-1, UTF-16 and binary", () => {
@@ -172,15 +168,12 @@ describe("channel CSV", () => {
   });
 
   it("lists every bad cell by row and column and is valid only when no row has errors", () => {
-    const csv = [
+    const r = readChannelLines([
       "key,name,chain,centerGHz,bandwidthMHz,dsbOffsetGHz,integrationMs,antennaK,receiverK,gainStability,requiredNedtK",
       "wv1,line centre,A,183.31,10,,10,250,5000,0,20",
       'wv2,"wing, far",Z,abc,10,0.001,10,250,5000,,',
       "wv1,dup,B,183,-1,,10,250,5000,,",
-    ].join("\n");
-    const r = parseChannelCsv(csv, CHAINS);
-    expect(r.ok).toBe(true);
-    if (!r.ok) return;
+    ]);
     expect(r.valid).toBe(false);
     expect(r.rows[0]).toMatchObject({
       row: 2,

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import fc from "fast-check";
 import ex1 from "../../../tests/fixtures/plans/ex1-single-channel.plan.json";
 import ex2 from "../../../tests/fixtures/plans/ex2-lower-sideband-sampled.plan.json";
+import { EX1_WV1_RESULT } from "../../../tests/fixtures/demo-values";
 import { SPUR_FAMILIES } from "@/lib/plan";
 import { buildLaneModel } from "./build-lane-model";
 import { IF_ROWS } from "./internals/rows";
@@ -29,13 +30,7 @@ const result1: LaneResultInput = {
   ],
   channels: [
     {
-      id: "wv1",
-      ifSlotGHz: [1.495, 1.505],
-      occupiedGHz: [1.475, 1.525],
-      imageGHz: [186.305, 186.315],
-      imageRejectionDB: 49.48,
-      nedtK: 17.92,
-      lockReplicaDB: -24.72,
+      ...EX1_WV1_RESULT,
     },
   ],
   spurs: [

@@ -45,27 +45,22 @@ export function LaneToolbar({
       </div>
       {view === "chart" ? (
         <>
-          <button
-            type="button"
-            className="rounded border border-ink-faint px-2 py-1 hover:bg-ink-faint"
-            onClick={() => onZoomBy(2)}
-          >
-            Zoom in
-          </button>
-          <button
-            type="button"
-            className="rounded border border-ink-faint px-2 py-1 hover:bg-ink-faint"
-            onClick={() => onZoomBy(0.5)}
-          >
-            Zoom out
-          </button>
-          <button
-            type="button"
-            className="rounded border border-ink-faint px-2 py-1 hover:bg-ink-faint"
-            onClick={onReset}
-          >
-            Reset zoom
-          </button>
+          {(
+            [
+              ["Zoom in", () => onZoomBy(2)],
+              ["Zoom out", () => onZoomBy(0.5)],
+              ["Reset zoom", onReset],
+            ] as const
+          ).map(([label, onClick]) => (
+            <button
+              key={label}
+              type="button"
+              className="rounded border border-ink-faint px-2 py-1 hover:bg-ink-faint"
+              onClick={onClick}
+            >
+              {label}
+            </button>
+          ))}
           <label className="flex items-center gap-1">
             <span>Zoom to channel</span>
             <select

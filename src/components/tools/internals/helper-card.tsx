@@ -100,6 +100,12 @@ export function ResultRow({ label, value, unit, emphasis, testId }: ResultRowPro
   );
 }
 
+/** What every helper takes to hand its result to a form: the receiver (no button without one) and the button's label. */
+export interface ApplyProps<T> {
+  onApply?: (value: T) => void;
+  applyLabel?: string;
+}
+
 export interface ApplyButtonProps {
   label: string;
   disabled: boolean;

@@ -1,5 +1,8 @@
 "use client";
 
+import { useState, type ReactNode } from "react";
+import { parseNumberField, type FieldParse, type FieldRules } from "../format";
+
 export interface NumberFieldProps {
   id: string;
   label: string;
@@ -48,4 +51,21 @@ export function NumberField({ id, label, value, onChange, unit, error, hint }: N
       </p>
     </div>
   );
+}
+
+/** The value, change handler and error line of a NumberField bound to a text and its parse. */
+export function fieldInput(value: string, onChange: (text: string) => void, parsed: FieldParse) {
+  return { value, onChange, error: parsed.ok ? null : parsed.message };
+}
+
+/** A field's text state with its parse (under `label` and `rules`) and the NumberField props bound to both. */
+export function useNumberText(initial: string | (() => string), label: string, rules?: FieldRules) {
+  const [text, setText] = useState(initial);
+  const parsed = parseNumberField(text, label, rules);
+  return { text, setText, parsed, input: fieldInput(text, setText, parsed) };
+}
+
+/** The helpers' two-column grid of fields. */
+export function FieldGrid({ children }: { children: ReactNode }) {
+  return <div className="grid grid-cols-1 gap-x-4 sm:grid-cols-2">{children}</div>;
 }

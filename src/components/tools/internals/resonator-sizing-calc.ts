@@ -28,38 +28,32 @@ export const INDEX_SOURCES: Record<IndexSource, string> = {
   measured: "Measured group index",
 };
 
-export interface ResonatorSizingInput {
-  carrierText: string;
-  tempText: string;
-  radiusText: string;
-  fsrText: string;
-  ngText: string;
-  qText: string;
-  lwText: string;
+/** The text of each of the helper's number fields. */
+export interface SizingTexts {
+  carrier: string;
+  temp: string;
+  radius: string;
+  fsr: string;
+  ng: string;
+  q: string;
+  lw: string;
+}
+
+/** The helper's choices: where the group index comes from and which way each pair is computed. */
+export interface SizingChoices {
   source: IndexSource;
   direction: "fromRadius" | "fromFsr";
   qDirection: "fromQ" | "fromLinewidth";
 }
 
-export function resonatorSizing({
-  carrierText,
-  tempText,
-  radiusText,
-  fsrText,
-  ngText,
-  qText,
-  lwText,
-  source,
-  direction,
-  qDirection,
-}: ResonatorSizingInput) {
-  const carrier = parseNumberField(carrierText, "Carrier", LN_FIT_CARRIER_THZ);
-  const temp = parseNumberField(tempText, "Temperature", { min: -50, max: 300 });
-  const radius = parseNumberField(radiusText, "Radius", { min: 0, exclusiveMin: true });
-  const fsrIn = parseNumberField(fsrText, "FSR", { min: 0, exclusiveMin: true });
-  const ngIn = parseNumberField(ngText, "Group index", { min: 1 });
-  const qIn = parseNumberField(qText, "Loaded Q", { min: 0, exclusiveMin: true });
-  const lwIn = parseNumberField(lwText, "Linewidth", { min: 0, exclusiveMin: true });
+export function resonatorSizing(text: SizingTexts, { source, direction, qDirection }: SizingChoices) {
+  const carrier = parseNumberField(text.carrier, "Carrier", LN_FIT_CARRIER_THZ);
+  const temp = parseNumberField(text.temp, "Temperature", { min: -50, max: 300 });
+  const radius = parseNumberField(text.radius, "Radius", { min: 0, exclusiveMin: true });
+  const fsrIn = parseNumberField(text.fsr, "FSR", { min: 0, exclusiveMin: true });
+  const ngIn = parseNumberField(text.ng, "Group index", { min: 1 });
+  const qIn = parseNumberField(text.q, "Loaded Q", { min: 0, exclusiveMin: true });
+  const lwIn = parseNumberField(text.lw, "Linewidth", { min: 0, exclusiveMin: true });
 
   const index =
     carrier.ok && temp.ok

@@ -1,7 +1,6 @@
-import { OpticalFrequency } from "@/components/tools";
 import type { Detector, Laser, Resonator } from "@/queries/types";
-import { formatGHz, formatInterval, formatMHz, formatNumber, formatQ } from "../format";
-import { LASER_HEADERS } from "../hardware";
+import { formatGHz, formatInterval, formatNumber, formatQ } from "../format";
+import { LASER_HEADERS, laserCells } from "../laser-cells";
 import { LASER_SAFETY_TEXT } from "../ui";
 import { Section, td, th } from "./section";
 
@@ -30,20 +29,11 @@ export function HardwareSection({
         <tbody>
           {lasers.map((l) => (
             <tr key={l.id}>
-              <td className={td}>{l.key}</td>
-              <td className={td}>
-                {formatNumber(l.carrierTHz, 3)}
-                <OpticalFrequency thz={l.carrierTHz} className="block text-xs" />
-              </td>
-              <td className={td}>{formatNumber(l.carrierPowerMW, 2)}</td>
-              <td className={td}>{formatNumber(l.loPowerMW, 2)}</td>
-              <td className={td}>{l.reach.map((r) => formatInterval([r.minGHz, r.maxGHz], "")).join(", ")}</td>
-              <td className={td}>{formatMHz(l.stepMHz)}</td>
-              <td className={td}>{formatMHz(l.driftMHz)}</td>
-              <td className={td}>
-                {formatMHz(l.lock.modulationMHz)} MHz, β {formatNumber(l.lock.modulationIndex, 2)}, {l.lock.orders}{" "}
-                {l.lock.orders === 1 ? "order" : "orders"}
-              </td>
+              {laserCells(l).map((cell, i) => (
+                <td key={LASER_HEADERS[i]} className={td}>
+                  {cell}
+                </td>
+              ))}
             </tr>
           ))}
         </tbody>

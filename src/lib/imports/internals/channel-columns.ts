@@ -23,27 +23,18 @@ export const CHANNEL_COLUMNS = [
 export const ENVELOPE_CHANNEL_COLUMNS = ["ifFilter", "centreToleranceMHz"] as const;
 export type EnvelopeChannelColumn = (typeof ENVELOPE_CHANNEL_COLUMNS)[number];
 
-export const REQUIRED_CHANNEL_COLUMNS = [
-  "key",
-  "name",
-  "chain",
-  "centerGHz",
-  "bandwidthMHz",
-  "integrationMs",
-  "antennaK",
-  "receiverK",
-] as const;
+/** The text columns; every other column holds a number. */
+const TEXT = ["key", "name", "chain"] as const;
+/** The columns whose blank cell means null (or the default 0 for gainStability); every other column is required. */
+const BLANK = ["dsbOffsetGHz", "gainStability", "requiredNedtK"] as const;
 
-export const NUMERIC_CHANNEL_COLUMNS = [
-  "centerGHz",
-  "bandwidthMHz",
-  "dsbOffsetGHz",
-  "integrationMs",
-  "antennaK",
-  "receiverK",
-  "gainStability",
-  "requiredNedtK",
-] as const;
+type Column = (typeof CHANNEL_COLUMNS)[number];
+/** The channel columns but `drop`, in export order. */
+const columnsWithout = <E extends Column>(drop: readonly E[]) =>
+  CHANNEL_COLUMNS.filter((c): c is Exclude<Column, E> => !(drop as readonly Column[]).includes(c));
+
+export const REQUIRED_CHANNEL_COLUMNS = columnsWithout(BLANK);
+export const NUMERIC_CHANNEL_COLUMNS = columnsWithout(TEXT);
 
 /**
  * Optional text columns in the notation of sounder channel tables:
@@ -54,16 +45,10 @@ export const NUMERIC_CHANNEL_COLUMNS = [
 export const NOTATION_CHANNEL_COLUMNS = ["notation", "bandwidth"] as const;
 
 /** Columns whose blank cell means null (or the default 0 for gainStability). */
-export const BLANK_ALLOWED = new Set<string>([
-  "dsbOffsetGHz",
-  "gainStability",
-  "requiredNedtK",
-  "ifFilter",
-  "centreToleranceMHz",
-]);
+export const BLANK_ALLOWED = new Set<string>([...BLANK, ...ENVELOPE_CHANNEL_COLUMNS]);
 
 /** Text columns of the channel CSV. */
-export const TEXT_CHANNEL_COLUMNS = new Set<string>(["key", "name", "chain"]);
+export const TEXT_CHANNEL_COLUMNS = new Set<string>(TEXT);
 
 /**
  * Spreadsheet formula guard (OWASP, "CSV Injection"): a text cell starting
