@@ -19,14 +19,14 @@ import { SchedulesSection } from "./report/schedules-section";
 import { SourcesSection } from "./report/sources-section";
 import { buttonClass, LASER_SAFETY_TEXT, SENSITIVITY_TEXT, Spinner } from "./ui";
 
-/** What model v1 leaves out (docs/plan-format.md §10 "What version 1 does not model"). */
+/** What the model leaves out (docs/plan-format.md §10 "What version 1 does not model", as version 2 narrows it in §12–§14). */
 export const MODEL_V1_LIMITS = [
   "The detector is assumed to be a balanced pair of photodiodes.",
-  "Laser noise pedestals beating with the carrier or the LO are not modelled.",
+  "Laser noise beating with the carrier or the LO counts only where the plan gives the lasers' noise figures (the noise budget).",
   "Parasitic mode families of the resonator (other radial/polar orders, polarisations) are not modelled.",
   "LO modulation or side modes are not modelled.",
   "The antenna response is an ideal box (the RF input band), not a shaped response.",
-  "The resonator's coupling regime is not modelled: the carrier power used is an upper bound.",
+  "The carrier power at the detector is an upper bound unless the resonator's intrinsic Q is given.",
   "Image noise is not added to NEΔT (the image rule covers it).",
   "Guard bands are fixed; they do not scale with filter skirts.",
 ];
@@ -96,7 +96,7 @@ export function MissionReport({ missionId }: { missionId: string }) {
           <strong>Sensitivity.</strong> {SENSITIVITY_TEXT}
         </p>
         <p className="mt-1">
-          <strong>What model v1 leaves out.</strong> {MODEL_V1_LIMITS.join(" ")}
+          <strong>What the model leaves out.</strong> {MODEL_V1_LIMITS.join(" ")}
         </p>
       </section>
 
