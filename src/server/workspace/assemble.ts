@@ -14,7 +14,8 @@ import { chainNoise, channelNoise, detectorNoise, laserNoise, resonatorNoise } f
  * Assembles the plan document (`heterolane.plan/2`, docs/plan-format.md
  * §12) of a mission's current draft from its rows, in stored order
  * (position), with every optional field written out in the key order of a
- * parsed plan (the version 2 fields after each entity's version 1 fields). Hardware references become plan-document keys.
+ * parsed plan (each entity's version 1 fields, then its noise-budget fields,
+ * then its other version 2 fields). Hardware references become plan-document keys.
  */
 export async function assemblePlan(q: Queryable, missionId: string): Promise<PlanInput> {
   const [mission] = await q.select().from(missions).where(eq(missions.id, missionId));
@@ -71,15 +72,15 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       stepMHz: l.stepMHz,
       driftMHz: l.driftMHz,
       lock: { modulationMHz: l.lockModulationMHz, modulationIndex: l.lockModulationIndex, orders: l.lockOrders },
-      schedule: scheduleOfRow(l.schedule, chainKey),
       ...laserNoise(l),
+      schedule: scheduleOfRow(l.schedule, chainKey),
     })),
     resonators: rs.map((r) => ({
       id: r.key,
       fsrGHz: r.fsrGHz,
       loadedQ: r.loadedQ,
-      fsrShiftMHzPerK: r.fsrShiftMHzPerK,
       ...resonatorNoise(r),
+      fsrShiftMHzPerK: r.fsrShiftMHzPerK,
     })),
     detectors: ds.map((d) => ({
       id: d.key,
@@ -102,15 +103,20 @@ export async function assemblePlan(q: Queryable, missionId: string): Promise<Pla
       pathLossDB: c.pathLossDB,
       carrierRejectionDB: c.carrierRejectionDB,
       sharedIf: c.sharedIf,
-      temperatureExcursionK: c.temperatureExcursionK,
       ...chainNoise(c),
+      temperatureExcursionK: c.temperatureExcursionK,
     })),
-    channels: chs.map((ch) => ({
-      id: ch.key,
-      name: ch.name,
-      chain: chainKey.get(ch.chainId) ?? "",
-      ...channelFigures(ch),
-      ...channelNoise(ch),
-    })),
+    channels: chs.map((ch) => {
+      const { ifFilter, centreToleranceMHz, ...figures } = channelFigures(ch);
+      return {
+        id: ch.key,
+        name: ch.name,
+        chain: chainKey.get(ch.chainId) ?? "",
+        ...figures,
+        ...channelNoise(ch),
+        ifFilter,
+        centreToleranceMHz,
+      };
+    }),
   };
 }
