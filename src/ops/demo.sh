@@ -37,12 +37,16 @@ export MAIL_FROM="${MAIL_FROM:-Heterolane <no-reply@heterolane.local>}"
 export HETEROLANE_DEV_ROUTES="${HETEROLANE_DEV_ROUTES:-${HETEROLANE_DEV_MAIL:-1}}"
 
 node_modules/.bin/tsx db/migrate.ts
+# The mail catcher first: the seed submits a demo revision for review, which mails the reviewers.
+set -m
+node_modules/.bin/tsx src/ops/fake-smtp.ts --port "$SMTP_PORT" &
+pids+=($!)
+set +m
+for _ in $(seq 1 50); do (exec 3<>"/dev/tcp/127.0.0.1/$SMTP_PORT") 2>/dev/null && break; sleep 0.2; done
 node_modules/.bin/tsx src/server/seed/run.ts
 ensure_build
 
 set -m
-node_modules/.bin/tsx src/ops/fake-smtp.ts --port "$SMTP_PORT" &
-pids+=($!)
 node_modules/.bin/next start -p "$APP_PORT" &
 pids+=($!)
 set +m

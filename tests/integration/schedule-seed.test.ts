@@ -3,7 +3,7 @@
  * once, through saveAndCheck, as the plan as written (revision 2 after the
  * empty revision 1 of a new mission; the
  * 180 GHz channel short of its share) and with the best split applied
- * (revision 3, no error). Runs the seed module in-process against
+ * (revision 3, no error), submitted for review. Runs the seed module in-process against
  * DATABASE_URL, into a fresh team made over HTTP.
  */
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
@@ -60,5 +60,7 @@ describe("seedSharedLaserMission", () => {
     expect(doc.findings.filter((f: { severity: string }) => f.severity === "error")).toEqual([]);
     expect(doc.schedules[0].laser).toBe("LP1");
     for (const c of doc.chains) expect(c.placeGHz).not.toBeNull();
+    const review = (await call(team.viewer, "GET", `${M}/review`)).body;
+    expect(review).toMatchObject({ state: "in-review" });
   });
 });

@@ -11,6 +11,7 @@ import { checkPlan } from "@/lib/plan";
 import { parsePlan } from "@/schemas/plan";
 import type { Actor } from "@/server/auth/actor";
 import { inTransaction } from "@/server/core/db";
+import { submitReview } from "@/server/review";
 import { createMissionIn } from "@/server/workspace/missions";
 import { replaceDraft } from "@/server/workspace/plan-io";
 import { saveAndCheck } from "@/server/workspace/save-and-check";
@@ -19,7 +20,9 @@ import { saveAndCheck } from "@/server/workspace/save-and-check";
  * Seeds the second invented demo mission, the shared-laser instrument
  * (idempotent: skipped when the team already has a mission of that name):
  * the plan as written is one revision, the same plan with the
- * best split of its schedule applied the next, both through saveAndCheck.
+ * best split of its schedule applied the next, both through saveAndCheck;
+ * that revision is then submitted for review by the demo engineer (the
+ * team's leads and owners are mailed, as for any submission).
  */
 export async function seedSharedLaserMission(
   teamId: string,
@@ -40,7 +43,7 @@ export async function seedSharedLaserMission(
     );
   const best = checkPlan(parsed.plan).schedules?.[0]?.bestSplit;
   if (!best) throw new Error("the shared-laser demo plan has no best split");
-  return inTransaction(async (tx) => {
+  const seeded = await inTransaction(async (tx) => {
     const mission = await createMissionIn(tx, actor, SHARED_LASER_MISSION_NAME, SHARED_LASER_MISSION_DESCRIPTION);
     await replaceDraft(tx, mission.id, parsed.plan);
     await saveAndCheck(tx, mission.id, actor, {
@@ -68,4 +71,9 @@ export async function seedSharedLaserMission(
     });
     return { missionId: mission.id, created: true, revision: revision.number };
   });
+  await submitReview(actor, seeded.missionId, {
+    revision: seeded.revision,
+    note: "Demo data: the best split of the shared laser pair applied; every channel meets its requirement.",
+  });
+  return seeded;
 }
