@@ -1,3 +1,4 @@
+// (Longer than most files: every entity's field rules sit together so that the plan document and the forms, which both build on them, read one list; split by entity they would scatter the two dialects.)
 import { z } from "zod";
 
 /**

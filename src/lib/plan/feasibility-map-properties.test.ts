@@ -1,3 +1,4 @@
+// (Longer than most files: each property of the exact map is checked against the sampled full check here, with the shared generators at the top; one describe block per property.)
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { feasibilityMap } from "./feasibility-map";

@@ -1,3 +1,4 @@
+// (Longer than most files: the whole plan document's schema, entity by entity with the version 2 fields beside the version 1 ones, is kept in one place so the format and docs/plan-format.md can be read side by side.)
 import { z } from "zod";
 import {
   channelShape,

@@ -1,3 +1,4 @@
+// (Longer than most files: the known answers, the properties and the independent implementation of the noise budget are kept together, one describe block each.)
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import type { PlanInput } from "@/schemas/plan";
