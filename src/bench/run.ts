@@ -87,7 +87,7 @@ function report(label: string, fn: () => unknown, runs: number, warm: number): v
 function demoSection(): void {
   const plan = mustParse(demoPlan(), "demo plan");
   report(
-    `full checkPlan of the demo plan, demoPlan() in db/seed/mission-demo-plan.ts (${plan.chains.length} chains, ${plan.channels.length} channels; its envelope: ±20–25 MHz of LO drift):`,
+    `full checkPlan of the demo plan, demoPlan() in db/seed/mission-demo-plan.ts (${plan.chains.length} chains, ${plan.channels.length} channels; its envelope: ±20–100 MHz of LO drift and the chains' temperature excursions):`,
     () => checkPlan(plan),
     400,
     100,
