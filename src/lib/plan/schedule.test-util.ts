@@ -1,6 +1,5 @@
-import { readFileSync } from "node:fs";
-import { join } from "node:path";
 import { type Plan, type PlanInput, parsePlan } from "@/schemas/plan";
+import sharedLaserDocument from "../../../docs/examples/shared-laser.plan.json";
 
 /**
  * The shared-laser demo plan (docs/examples/shared-laser.plan.json,
@@ -8,9 +7,7 @@ import { type Plan, type PlanInput, parsePlan } from "@/schemas/plan";
  * C320 by a 200 ms schedule. Every call returns a fresh copy.
  */
 export function sharedLaserInput(): PlanInput {
-  return JSON.parse(
-    readFileSync(join(__dirname, "../../../docs/examples/shared-laser.plan.json"), "utf8"),
-  ) as PlanInput;
+  return structuredClone(sharedLaserDocument) as PlanInput;
 }
 
 /** Parse a plan document, failing loudly when it is not valid. */
