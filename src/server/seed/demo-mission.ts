@@ -1,14 +1,10 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
-import { db } from "@db/client";
-import { missions, user } from "@db/schema";
 import { DEMO_MISSION_DESCRIPTION, DEMO_MISSION_NAME, demoPlan } from "@db/seed/mission-demo-plan";
-import { parsePlan } from "@/schemas/plan";
-import type { Actor } from "@/server/auth/actor";
 import { inTransaction } from "@/server/core/db";
 import { createMissionIn } from "@/server/workspace/missions";
 import { replaceDraft } from "@/server/workspace/plan-io";
 import { saveAndCheck } from "@/server/workspace/save-and-check";
+import { demoActor, existingMission, parsedDemoPlan } from "./seed-parts";
 
 /**
  * Seeds the invented demo mission into a team (idempotent: skipped when the
@@ -21,20 +17,13 @@ export async function seedDemoMission(
   teamId: string,
   authorUserId: string,
 ): Promise<{ missionId: string; created: boolean; revision?: number }> {
-  const [existing] = await db
-    .select({ id: missions.id })
-    .from(missions)
-    .where(and(eq(missions.teamId, teamId), eq(missions.name, DEMO_MISSION_NAME)));
-  if (existing) return { missionId: existing.id, created: false };
-  const [author] = await db.select().from(user).where(eq(user.id, authorUserId));
-  if (!author) throw new Error(`seedDemoMission: no user ${authorUserId}`);
-  const actor: Actor = { userId: author.id, email: author.email, name: author.name, teamId, role: "engineer" };
-  const parsed = parsePlan(demoPlan());
-  if (!parsed.ok)
-    throw new Error(`demo plan is invalid: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`);
+  const existing = await existingMission(teamId, DEMO_MISSION_NAME);
+  if (existing) return { missionId: existing, created: false };
+  const actor = await demoActor(teamId, authorUserId, "seedDemoMission");
+  const plan = parsedDemoPlan(demoPlan(), "demo plan");
   return inTransaction(async (tx) => {
     const mission = await createMissionIn(tx, actor, DEMO_MISSION_NAME, DEMO_MISSION_DESCRIPTION);
-    await replaceDraft(tx, mission.id, parsed.plan);
+    await replaceDraft(tx, mission.id, plan);
     const revision = await saveAndCheck(tx, mission.id, actor, {
       action: "import",
       entity: "plan",

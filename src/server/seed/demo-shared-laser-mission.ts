@@ -1,20 +1,18 @@
 import "server-only";
-import { and, eq } from "drizzle-orm";
-import { db } from "@db/client";
-import { lasers, missions, user } from "@db/schema";
+import { eq } from "drizzle-orm";
+import { lasers } from "@db/schema";
 import {
   SHARED_LASER_MISSION_DESCRIPTION,
   SHARED_LASER_MISSION_NAME,
   sharedLaserDemoPlan,
 } from "@db/seed/shared-laser-demo-plan";
 import { checkPlan } from "@/lib/plan";
-import { parsePlan } from "@/schemas/plan";
-import type { Actor } from "@/server/auth/actor";
 import { inTransaction } from "@/server/core/db";
 import { submitReview } from "@/server/review";
 import { createMissionIn } from "@/server/workspace/missions";
 import { replaceDraft } from "@/server/workspace/plan-io";
 import { saveAndCheck } from "@/server/workspace/save-and-check";
+import { demoActor, existingMission, parsedDemoPlan } from "./seed-parts";
 
 /**
  * Seeds the second invented demo mission, the shared-laser instrument
@@ -28,24 +26,15 @@ export async function seedSharedLaserMission(
   teamId: string,
   authorUserId: string,
 ): Promise<{ missionId: string; created: boolean; revision?: number }> {
-  const [existing] = await db
-    .select({ id: missions.id })
-    .from(missions)
-    .where(and(eq(missions.teamId, teamId), eq(missions.name, SHARED_LASER_MISSION_NAME)));
-  if (existing) return { missionId: existing.id, created: false };
-  const [author] = await db.select().from(user).where(eq(user.id, authorUserId));
-  if (!author) throw new Error(`seedSharedLaserMission: no user ${authorUserId}`);
-  const actor: Actor = { userId: author.id, email: author.email, name: author.name, teamId, role: "engineer" };
-  const parsed = parsePlan(sharedLaserDemoPlan());
-  if (!parsed.ok)
-    throw new Error(
-      `shared-laser demo plan is invalid: ${parsed.issues.map((i) => `${i.path}: ${i.message}`).join("; ")}`,
-    );
-  const best = checkPlan(parsed.plan).schedules?.[0]?.bestSplit;
+  const existing = await existingMission(teamId, SHARED_LASER_MISSION_NAME);
+  if (existing) return { missionId: existing, created: false };
+  const actor = await demoActor(teamId, authorUserId, "seedSharedLaserMission");
+  const plan = parsedDemoPlan(sharedLaserDemoPlan(), "shared-laser demo plan");
+  const best = checkPlan(plan).schedules?.[0]?.bestSplit;
   if (!best) throw new Error("the shared-laser demo plan has no best split");
   const seeded = await inTransaction(async (tx) => {
     const mission = await createMissionIn(tx, actor, SHARED_LASER_MISSION_NAME, SHARED_LASER_MISSION_DESCRIPTION);
-    await replaceDraft(tx, mission.id, parsed.plan);
+    await replaceDraft(tx, mission.id, plan);
     await saveAndCheck(tx, mission.id, actor, {
       action: "import",
       entity: "plan",
