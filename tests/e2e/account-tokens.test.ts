@@ -12,7 +12,8 @@ import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { demoPlan } from "@db/seed/mission-demo-plan";
 import { BASE_URL, closeTestPool, createTeam, newVerifiedUser, type TestClient } from "../setup/auth-helpers";
 import { call, missionWithPlan } from "../setup/workspace-helpers";
-import { launchBrowser, screenshot } from "../setup/browser";
+import { screenshot } from "../setup/browser";
+import { signedInBrowser } from "../setup/signed-in-browser";
 
 const ROOT = join(__dirname, "../..");
 const dir = mkdtempSync(join(tmpdir(), "heterolane-token-e2e-"));
@@ -46,15 +47,10 @@ vi.setConfig({ testTimeout: 240_000 });
 
 describe("a token made in the browser", () => {
   it("is shown once on the account page and lets the command line pull and push the plan", async () => {
-    const browser = await launchBrowser({ width: 1280, height: 900 });
+    const browser = await signedInBrowser(owner, { width: 1280, height: 900 });
     let token = "";
     try {
-      const host = new URL(BASE_URL).hostname;
-      await browser.context.addCookies(
-        [...owner.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })),
-      );
       const page = browser.page;
-      page.setDefaultTimeout(120_000);
       await page.goto(`${BASE_URL}/account`);
       await page.getByLabel("Name", { exact: true }).fill("CI pull and push");
       await page.getByRole("button", { name: "Make token" }).click();

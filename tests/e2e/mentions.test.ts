@@ -6,7 +6,8 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { BASE_URL, closeTestPool, makeTeamWithRoles, readMail, type TeamWithRoles } from "../setup/auth-helpers";
-import { launchBrowser, screenshot, type TestBrowser } from "../setup/browser";
+import { screenshot, type TestBrowser } from "../setup/browser";
+import { signedInBrowser } from "../setup/signed-in-browser";
 import { call, missionWithPlan } from "../setup/workspace-helpers";
 import { validPlanInput } from "../fixtures/valid-plan";
 
@@ -27,14 +28,8 @@ afterAll(async () => {
 
 describe("@mentions in a comment", () => {
   it("completes a member by name, says who will be notified and mails them; refuses an unknown name", async () => {
-    browser = await launchBrowser({ width: 1400, height: 1000 });
-    const host = new URL(BASE_URL).hostname;
-    await browser.context.addCookies(
-      [...team.engineer.cookies].map(([n, value]) => ({ name: n, value, domain: host, path: "/" })),
-    );
+    browser = await signedInBrowser(team.engineer, { timeoutMs: 240_000 });
     const page = browser.page;
-    page.setDefaultTimeout(240_000);
-    page.setDefaultNavigationTimeout(180_000);
     await page.goto(`${BASE_URL}/missions/${missionId}`);
     const field = page.getByLabel(/^Comment/);
     await field.waitFor();

@@ -7,7 +7,8 @@
  */
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { BASE_URL, closeTestPool, makeTeamWithRoles, type TeamWithRoles } from "../setup/auth-helpers";
-import { launchBrowser, screenshot, type TestBrowser } from "../setup/browser";
+import { screenshot, type TestBrowser } from "../setup/browser";
+import { signedInBrowser } from "../setup/signed-in-browser";
 import { missionWithPlan } from "../setup/workspace-helpers";
 import { validPlanInput } from "../fixtures/valid-plan";
 
@@ -27,14 +28,8 @@ afterAll(async () => {
 
 describe("plausibility of a resonator", () => {
   it("warns in words about a Q beyond lithium niobate, and refuses a Q of 1e30 beside the field", async () => {
-    browser = await launchBrowser({ width: 1400, height: 1000 });
-    const host = new URL(BASE_URL).hostname;
-    await browser.context.addCookies(
-      [...team.engineer.cookies].map(([n, value]) => ({ name: n, value, domain: host, path: "/" })),
-    );
+    browser = await signedInBrowser(team.engineer, { timeoutMs: 240_000 });
     const page = browser.page;
-    page.setDefaultTimeout(240_000);
-    page.setDefaultNavigationTimeout(180_000);
     await page.goto(`${BASE_URL}/missions/${missionId}`);
     const revision = page.getByTestId("revision-number");
     await expect.poll(async () => Number(await revision.innerText()), { timeout: 240_000 }).toBeGreaterThan(0);

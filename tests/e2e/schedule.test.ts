@@ -11,7 +11,8 @@ import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { BASE_URL, closeTestPool, makeTeamWithRoles, type TeamWithRoles, type TestClient } from "../setup/auth-helpers";
-import { launchBrowser, screenshot } from "../setup/browser";
+import { screenshot } from "../setup/browser";
+import { signedInBrowser } from "../setup/signed-in-browser";
 
 const PLAN = JSON.parse(readFileSync(path.join(__dirname, "../../docs/examples/shared-laser.plan.json"), "utf8"));
 
@@ -25,13 +26,8 @@ async function json(c: TestClient, p: string, init: Parameters<TestClient["fetch
 }
 
 async function pageAs(c: TestClient): Promise<{ ctx: { close(): Promise<void> }; page: Page }> {
-  const ctx = await launchBrowser({ width: 1400, height: 1100 });
-  const host = new URL(BASE_URL).hostname;
-  await ctx.context.addCookies([...c.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })));
-  const page = ctx.page;
-  page.setDefaultTimeout(120_000);
-  page.setDefaultNavigationTimeout(180_000);
-  return { ctx, page };
+  const ctx = await signedInBrowser(c, { height: 1100 });
+  return { ctx, page: ctx.page };
 }
 
 const revisionOf = async (page: Page) => Number(await page.getByTestId("revision-number").innerText());

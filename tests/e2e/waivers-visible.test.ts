@@ -7,7 +7,8 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { BASE_URL, closeTestPool, makeTeamWithRoles, type TeamWithRoles } from "../setup/auth-helpers";
-import { launchBrowser, screenshot, type TestBrowser } from "../setup/browser";
+import { screenshot, type TestBrowser } from "../setup/browser";
+import { signedInBrowser } from "../setup/signed-in-browser";
 import { call, missionWithPlan } from "../setup/workspace-helpers";
 import { validPlanInput } from "../fixtures/valid-plan";
 
@@ -39,13 +40,7 @@ afterAll(async () => {
 });
 
 async function pageAsViewer(): Promise<Page> {
-  browser = await launchBrowser({ width: 1400, height: 1000 });
-  const host = new URL(BASE_URL).hostname;
-  await browser.context.addCookies(
-    [...team.viewer.cookies].map(([n, value]) => ({ name: n, value, domain: host, path: "/" })),
-  );
-  browser.page.setDefaultTimeout(240_000);
-  browser.page.setDefaultNavigationTimeout(180_000);
+  browser = await signedInBrowser(team.viewer, { timeoutMs: 240_000 });
   return browser.page;
 }
 

@@ -9,7 +9,8 @@ import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Page } from "playwright-core";
 import { BASE_URL, closeTestPool, makeTeamWithRoles, type TeamWithRoles, type TestClient } from "../setup/auth-helpers";
-import { launchBrowser, screenshot } from "../setup/browser";
+import { screenshot } from "../setup/browser";
+import { signedInBrowser } from "../setup/signed-in-browser";
 
 // Example 1 of the plan format (one 10 MHz channel at the 183.31 GHz water-vapour line; NEΔT 17.92 K against 20 K),
 // with the lasers' drift set to 0: this test is about editing, so the operating envelope is the nominal point
@@ -29,13 +30,8 @@ async function json(c: TestClient, p: string, init: Parameters<TestClient["fetch
 
 /** A fresh Chromium signed in as `c` (its session cookies copied into the browser). */
 async function pageAs(c: TestClient): Promise<{ ctx: { close(): Promise<void> }; page: Page }> {
-  const ctx = await launchBrowser({ width: 1400, height: 1000 });
-  const host = new URL(BASE_URL).hostname;
-  await ctx.context.addCookies([...c.cookies].map(([name, value]) => ({ name, value, domain: host, path: "/" })));
-  const page = ctx.page;
-  page.setDefaultTimeout(120_000);
-  page.setDefaultNavigationTimeout(180_000);
-  return { ctx, page };
+  const ctx = await signedInBrowser(c, { height: 1000 });
+  return { ctx, page: ctx.page };
 }
 
 async function shot(page: Page, name: string) {
